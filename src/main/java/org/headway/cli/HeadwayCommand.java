@@ -1,0 +1,87 @@
+package org.headway.cli;
+
+import java.io.PrintWriter;
+import org.headway.caution.InputException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/** The top-level {@code headway} command. */
+@Command(
+        name = "headway",
+        mixinStandardHelpOptions = true,
+        versionProvider = HeadwayCommand.Version.class,
+        description = {
+            "Head loss for pipe runs, friction checks of rig data, and review sheets.",
+            "Results are estimates for design review against local codes by a qualified engineer."
+        },
+        subcommands = {CommandLine.HelpCommand.class})
+public final class HeadwayCommand implements Runnable {
+
+    /** Exit code for success. */
+    public static final int EXIT_OK = 0;
+    /** Exit code for a bug, or a batch where some rows could not be computed. */
+    public static final int EXIT_FAILED = 1;
+    /** Exit code for bad usage or bad input. */
+    public static final int EXIT_BAD_INPUT = 2;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** Builds the command line with Headway's error handling installed. */
+    public static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new HeadwayCommand());
+        cl.setExecutionExceptionHandler(HeadwayCommand::handleExecutionException);
+        cl.setParameterExceptionHandler(HeadwayCommand::handleParameterException);
+        return cl;
+    }
+
+    /** Runs the command line on the given arguments and returns the exit code. */
+    public static int run(String... args) {
+        return commandLine().execute(args);
+    }
+
+    private static int handleExecutionException(Exception ex, CommandLine cl, CommandLine.ParseResult parseResult) {
+        PrintWriter err = cl.getErr();
+        if (ex instanceof InputException) {
+            err.println("headway: " + ex.getMessage());
+            err.flush();
+            return EXIT_BAD_INPUT;
+        }
+        if (ex instanceof java.io.UncheckedIOException || ex instanceof java.io.IOException) {
+            err.println("headway: " + ex.getMessage());
+            err.flush();
+            return EXIT_BAD_INPUT;
+        }
+        err.println("headway: internal error (please report): " + ex);
+        ex.printStackTrace(err);
+        err.flush();
+        return EXIT_FAILED;
+    }
+
+    private static int handleParameterException(CommandLine.ParameterException ex, String[] args) {
+        PrintWriter err = ex.getCommandLine().getErr();
+        err.println("headway: " + ex.getMessage());
+        err.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
+        err.flush();
+        return EXIT_BAD_INPUT;
+    }
+
+    /** Version from the jar manifest, or "development" when run from classes. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            return new String[] {"headway " + version()};
+        }
+    }
+
+    /** The Headway version string. */
+    public static String version() {
+        String v = HeadwayCommand.class.getPackage().getImplementationVersion();
+        return v == null ? "0.1.0-dev" : v;
+    }
+}

@@ -1,0 +1,199 @@
+package org.headway;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import com.tngtech.archunit.lang.ArchRule;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/** Holds the package layering of DEVELOPERS.md. One rule per layering decision. */
+class ArchitectureTest {
+
+    private static final String[] CORE = {
+        "org.headway.caution..",
+        "org.headway.units..",
+        "org.headway.fluid..",
+        "org.headway.pipe..",
+        "org.headway.friction..",
+        "org.headway.correlation..",
+        "org.headway.system.."
+    };
+
+    private static JavaClasses classes;
+
+    @BeforeAll
+    static void importClasses() {
+        classes = new ClassFileImporter()
+                .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+                .importPackages("org.headway");
+    }
+
+    @Test
+    void coreHasNoToolkitOrEdgeLibraries() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAnyPackage(CORE)
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage(
+                        "javafx..",
+                        "java.awt..",
+                        "javax.swing..",
+                        "picocli..",
+                        "com.fasterxml.jackson..",
+                        "org.apache.pdfbox..",
+                        "org.jfree..",
+                        "org.dhatim..",
+                        "org.apache.commons.csv..")
+                .because("the engines must run headless, in tests and batch jobs, and stay independent of"
+                        + " the file formats and user interfaces at the edges");
+        rule.check(classes);
+    }
+
+    @Test
+    void coreNeverPrints() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAnyPackage(CORE)
+                .should()
+                .accessField(System.class, "out")
+                .orShould()
+                .accessField(System.class, "err")
+                .orShould()
+                .callMethod(Throwable.class, "printStackTrace")
+                .because("the engines return results and cautions; only the CLI and the app talk to the user");
+        rule.check(classes);
+    }
+
+    @Test
+    void unitsStayAtTheEdgesOfTheNumericalCore() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAnyPackage(
+                        "org.headway.fluid..",
+                        "org.headway.pipe..",
+                        "org.headway.friction..",
+                        "org.headway.correlation..",
+                        "org.headway.system..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage("javax.measure..", "tech.units..", "systems.uom..", "org.headway.units..")
+                .because("inside the core quantities are SI doubles; units are parsed and formatted only at the"
+                        + " edges");
+        rule.check(classes);
+    }
+
+    @Test
+    void frictionDependsOnlyOnCaution() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAPackage("org.headway.friction..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage(
+                        "org.headway.fluid..",
+                        "org.headway.pipe..",
+                        "org.headway.correlation..",
+                        "org.headway.system..",
+                        "org.headway.project..",
+                        "org.headway.chart..",
+                        "org.headway.report..",
+                        "org.headway.cli..",
+                        "org.headway.app..")
+                .because("the friction engine is the base layer the others build on");
+        rule.check(classes);
+    }
+
+    @Test
+    void dataLayersDoNotReachUp() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAnyPackage("org.headway.fluid..", "org.headway.pipe..", "org.headway.caution..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage(
+                        "org.headway.correlation..",
+                        "org.headway.system..",
+                        "org.headway.project..",
+                        "org.headway.chart..",
+                        "org.headway.report..",
+                        "org.headway.cli..",
+                        "org.headway.app..")
+                .because("fluid and catalog data are leaves that the pipe-run engine stands on");
+        rule.check(classes);
+    }
+
+    @Test
+    void correlationDoesNotReachUp() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAPackage("org.headway.correlation..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage(
+                        "org.headway.pipe..",
+                        "org.headway.system..",
+                        "org.headway.project..",
+                        "org.headway.chart..",
+                        "org.headway.report..",
+                        "org.headway.cli..",
+                        "org.headway.app..")
+                .because("fitted correlations feed the pipe-run engine, not the other way round");
+        rule.check(classes);
+    }
+
+    @Test
+    void coreDoesNotReachTheEdges() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAnyPackage(CORE)
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage(
+                        "org.headway.project..",
+                        "org.headway.chart..",
+                        "org.headway.report..",
+                        "org.headway.cli..",
+                        "org.headway.app..")
+                .because("the edges depend on the core, never the reverse");
+        rule.check(classes);
+    }
+
+    @Test
+    void commandLineAndDesktopAreIndependent() {
+        noClasses()
+                .that()
+                .resideInAPackage("org.headway.cli..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAPackage("org.headway.app..")
+                .because("the command line must run without JavaFX on the class path")
+                .allowEmptyShould(true)
+                .check(classes);
+        noClasses()
+                .that()
+                .resideInAPackage("org.headway.app..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAPackage("org.headway.cli..")
+                .because("the desktop app calls the engines directly, not the command line")
+                .allowEmptyShould(true)
+                .check(classes);
+    }
+
+    @Test
+    void chartHasNoJavaFx() {
+        noClasses()
+                .that()
+                .resideInAPackage("org.headway.chart..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAPackage("javafx..")
+                .because("the same chart code draws into the PDF sheet, which has no JavaFX")
+                .allowEmptyShould(true)
+                .check(classes);
+    }
+}
