@@ -46,8 +46,7 @@ class ArchitectureTest {
                         "com.fasterxml.jackson..",
                         "org.apache.pdfbox..",
                         "org.jfree..",
-                        "org.dhatim..",
-                        "org.apache.commons.csv..")
+                        "org.dhatim..")
                 .because("the engines must run headless, in tests and batch jobs, and stay independent of"
                         + " the file formats and user interfaces at the edges");
         rule.check(classes);
