@@ -1,0 +1,317 @@
+package org.headway.chart;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.geom.Ellipse2D;
+import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.DoubleUnaryOperator;
+import org.headway.friction.FlowRegimes;
+import org.headway.friction.FrictionCorrelation;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.annotations.XYTextAnnotation;
+import org.jfree.chart.axis.LogAxis;
+import org.jfree.chart.axis.LogarithmicAxis;
+import org.jfree.chart.axis.NumberTickUnit;
+import org.jfree.chart.plot.IntervalMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYErrorRenderer;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.xy.XYIntervalSeries;
+import org.jfree.data.xy.XYIntervalSeriesCollection;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/**
+ * The friction chart: Darcy friction factor against Reynolds number on log–log axes, one curve per
+ * chosen relative roughness, the laminar line, the transitional range shaded, and on top the
+ * pipe-run's operating points, rig data with uncertainty bars and fitted correlations (solid over
+ * the range they were fitted on, dashed beyond it).
+ */
+public final class FrictionChart {
+
+    /** Points per decade of Re on each curve; enough for a smooth line at print resolution. */
+    private static final int POINTS_PER_DECADE = 40;
+
+    /** Rig points beyond this many are thinned evenly for drawing (all are kept for statistics). */
+    public static final int MAX_DRAWN_RIG_POINTS = 5_000;
+
+    /**
+     * A labelled point (a segment's operating point).
+     *
+     * @param label segment name
+     * @param reynolds Reynolds number (ratio)
+     * @param frictionFactor friction factor (ratio)
+     */
+    public record MarkedPoint(String label, double reynolds, double frictionFactor) {}
+
+    /**
+     * A measured point with standard uncertainties.
+     *
+     * @param reynolds Reynolds number (ratio)
+     * @param frictionFactor friction factor (ratio)
+     * @param reynoldsUncertainty expanded uncertainty of Re (ratio, absolute), 0 if none
+     * @param frictionUncertainty expanded uncertainty of f (ratio, absolute), 0 if none
+     */
+    public record RigPoint(
+            double reynolds, double frictionFactor, double reynoldsUncertainty, double frictionUncertainty) {}
+
+    /**
+     * A fitted correlation f(Re) to draw.
+     *
+     * @param name legend text
+     * @param function f as a function of Re
+     * @param fittedMinReynolds lowest Re of the data it was fitted on
+     * @param fittedMaxReynolds highest Re of the data it was fitted on
+     */
+    public record FittedCurve(
+            String name, DoubleUnaryOperator function, double fittedMinReynolds, double fittedMaxReynolds) {}
+
+    /**
+     * What to draw.
+     *
+     * @param title chart title (may be empty)
+     * @param method correlation for the roughness curves
+     * @param relativeRoughness ε/D values, one curve each (0 draws the smooth-pipe curve)
+     * @param minReynolds left end of the Re axis
+     * @param maxReynolds right end of the Re axis
+     * @param operatingPoints segments' operating points
+     * @param rigPoints rig data
+     * @param fitted fitted correlations
+     */
+    public record Spec(
+            String title,
+            FrictionCorrelation method,
+            List<Double> relativeRoughness,
+            double minReynolds,
+            double maxReynolds,
+            List<MarkedPoint> operatingPoints,
+            List<RigPoint> rigPoints,
+            List<FittedCurve> fitted) {
+
+        public Spec {
+            relativeRoughness = List.copyOf(relativeRoughness);
+            operatingPoints = List.copyOf(operatingPoints);
+            rigPoints = List.copyOf(rigPoints);
+            fitted = List.copyOf(fitted);
+        }
+
+        /** Default roughness set, spanning smooth to very rough pipe. */
+        public static final List<Double> USUAL_ROUGHNESS =
+                List.of(0.0, 1e-5, 1e-4, 5e-4, 1e-3, 2e-3, 5e-3, 1e-2, 2e-2, 5e-2);
+    }
+
+    private FrictionChart() {}
+
+    /** Builds the chart. */
+    public static JFreeChart build(Spec spec) {
+        LogAxis reAxis = new LogAxis("Reynolds number Re = ρVD/μ");
+        reAxis.setBase(10);
+        reAxis.setTickUnit(new NumberTickUnit(1.0));
+        reAxis.setMinorTickMarksVisible(true);
+        reAxis.setRange(spec.minReynolds(), spec.maxReynolds());
+        reAxis.setSmallestValue(1e-300);
+        LogarithmicAxis fAxis = new LogarithmicAxis("Darcy friction factor f");
+        fAxis.setRange(0.006, 0.11);
+        fAxis.setStrictValuesFlag(false);
+        fAxis.setAutoRangeNextLogFlag(false);
+
+        XYPlot plot = new XYPlot();
+        plot.setDomainAxis(reAxis);
+        plot.setRangeAxis(fAxis);
+        plot.setInsets(new RectangleInsets(4, 4, 4, 24));
+
+        int dataset = 0;
+        // Roughness curves: below the turbulent limit the correlation is extrapolated, so draw it dashed there.
+        XYSeriesCollection curves = new XYSeriesCollection();
+        XYSeriesCollection curvesLow = new XYSeriesCollection();
+        for (double rr : spec.relativeRoughness()) {
+            XYSeries s = new XYSeries("ε/D = " + label(rr), false, true);
+            XYSeries low = new XYSeries("ε/D = " + label(rr) + " (transitional)", false, true);
+            double start = Math.max(spec.minReynolds(), FlowRegimes.LAMINAR_LIMIT);
+            for (double re : logSpace(start, spec.maxReynolds())) {
+                double f = spec.method().evaluate(re, rr).frictionFactor();
+                if (re >= FlowRegimes.TURBULENT_LIMIT) {
+                    s.add(re, f);
+                } else {
+                    low.add(re, f);
+                }
+            }
+            double edge = spec.method().evaluate(FlowRegimes.TURBULENT_LIMIT, rr).frictionFactor();
+            low.add(FlowRegimes.TURBULENT_LIMIT, edge);
+            curves.addSeries(s);
+            curvesLow.addSeries(low);
+            double endF = spec.method().evaluate(spec.maxReynolds(), rr).frictionFactor();
+            XYTextAnnotation a = new XYTextAnnotation(label(rr), spec.maxReynolds(), endF);
+            a.setFont(ChartStyle.FONT.deriveFont(9f));
+            a.setTextAnchor(TextAnchor.BOTTOM_RIGHT);
+            a.setPaint(ChartStyle.INK);
+            plot.addAnnotation(a);
+        }
+        XYLineAndShapeRenderer curveRenderer = new XYLineAndShapeRenderer(true, false);
+        XYLineAndShapeRenderer lowRenderer = new XYLineAndShapeRenderer(true, false);
+        for (int i = 0; i < curves.getSeriesCount(); i++) {
+            curveRenderer.setSeriesPaint(i, ChartStyle.family(i));
+            curveRenderer.setSeriesStroke(i, ChartStyle.solid(1.2f));
+            curveRenderer.setSeriesVisibleInLegend(i, false);
+            lowRenderer.setSeriesPaint(i, ChartStyle.family(i));
+            lowRenderer.setSeriesStroke(i, ChartStyle.dashed(0.8f));
+            lowRenderer.setSeriesVisibleInLegend(i, false);
+        }
+
+        // Laminar line f = 64/Re up to the turbulent limit (dashed beyond the laminar limit).
+        XYSeriesCollection laminar = new XYSeriesCollection();
+        XYSeries lam = new XYSeries("laminar f = 64/Re", false, true);
+        double lamStart = Math.max(spec.minReynolds(), 64 / 0.11);
+        for (double re : logSpace(lamStart, FlowRegimes.TURBULENT_LIMIT)) {
+            lam.add(re, 64 / re);
+        }
+        laminar.addSeries(lam);
+        XYLineAndShapeRenderer lamRenderer = new XYLineAndShapeRenderer(true, false);
+        lamRenderer.setSeriesPaint(0, ChartStyle.PLUM);
+        lamRenderer.setSeriesStroke(0, ChartStyle.solid(1.4f));
+
+        // Fitted correlations.
+        XYSeriesCollection fittedIn = new XYSeriesCollection();
+        XYSeriesCollection fittedOut = new XYSeriesCollection();
+        for (FittedCurve fc : spec.fitted()) {
+            XYSeries in = new XYSeries(fc.name(), false, true);
+            XYSeries below = new XYSeries(fc.name() + " (extrapolated)", false, true);
+            XYSeries above = new XYSeries(fc.name() + " (extrapolated) ", false, true);
+            for (double re : logSpace(spec.minReynolds(), spec.maxReynolds())) {
+                double f = fc.function().applyAsDouble(re);
+                if (!(f > 0) || !Double.isFinite(f)) {
+                    continue;
+                }
+                if (re < fc.fittedMinReynolds()) {
+                    below.add(re, f);
+                } else if (re > fc.fittedMaxReynolds()) {
+                    above.add(re, f);
+                } else {
+                    in.add(re, f);
+                }
+            }
+            fittedIn.addSeries(in);
+            fittedOut.addSeries(below);
+            fittedOut.addSeries(above);
+        }
+        XYLineAndShapeRenderer fitRenderer = new XYLineAndShapeRenderer(true, false);
+        XYLineAndShapeRenderer fitOutRenderer = new XYLineAndShapeRenderer(true, false);
+        for (int i = 0; i < fittedIn.getSeriesCount(); i++) {
+            fitRenderer.setSeriesPaint(i, ChartStyle.TEAL);
+            fitRenderer.setSeriesStroke(i, ChartStyle.solid(2.2f));
+        }
+        for (int i = 0; i < fittedOut.getSeriesCount(); i++) {
+            fitOutRenderer.setSeriesPaint(i, ChartStyle.TEAL);
+            fitOutRenderer.setSeriesStroke(i, ChartStyle.dashed(1.6f));
+            fitOutRenderer.setSeriesVisibleInLegend(i, false);
+        }
+
+        // Rig data with uncertainty bars, thinned evenly when there are very many.
+        XYIntervalSeriesCollection rig = new XYIntervalSeriesCollection();
+        if (!spec.rigPoints().isEmpty()) {
+            XYIntervalSeries rs = new XYIntervalSeries("rig data (±U)", false, true);
+            int n = spec.rigPoints().size();
+            int stride = Math.max(1, (n + MAX_DRAWN_RIG_POINTS - 1) / MAX_DRAWN_RIG_POINTS);
+            for (int i = 0; i < n; i += stride) {
+                RigPoint p = spec.rigPoints().get(i);
+                rs.add(
+                        p.reynolds(),
+                        p.reynolds() - p.reynoldsUncertainty(),
+                        p.reynolds() + p.reynoldsUncertainty(),
+                        p.frictionFactor(),
+                        p.frictionFactor() - p.frictionUncertainty(),
+                        p.frictionFactor() + p.frictionUncertainty());
+            }
+            rig.addSeries(rs);
+        }
+        XYErrorRenderer rigRenderer = new XYErrorRenderer();
+        rigRenderer.setDefaultLinesVisible(false);
+        rigRenderer.setSeriesShapesVisible(0, true);
+        rigRenderer.setSeriesShape(0, new Ellipse2D.Double(-3, -3, 6, 6));
+        rigRenderer.setSeriesPaint(0, ChartStyle.ACCENT);
+        rigRenderer.setErrorPaint(new Color(0xC4622D).brighter());
+        rigRenderer.setErrorStroke(new BasicStroke(0.8f));
+        rigRenderer.setCapLength(3);
+
+        // Operating points of the run's segments.
+        XYSeriesCollection ops = new XYSeriesCollection();
+        if (!spec.operatingPoints().isEmpty()) {
+            XYSeries os = new XYSeries("pipe-run segments", false, true);
+            for (MarkedPoint p : spec.operatingPoints()) {
+                if (p.reynolds() > 0 && p.frictionFactor() > 0) {
+                    os.add(p.reynolds(), p.frictionFactor());
+                    XYTextAnnotation a = new XYTextAnnotation(" " + p.label(), p.reynolds(), p.frictionFactor());
+                    a.setFont(ChartStyle.FONT.deriveFont(Font.BOLD, 10f));
+                    a.setTextAnchor(TextAnchor.BOTTOM_LEFT);
+                    a.setPaint(new Color(0x8A2F1B));
+                    plot.addAnnotation(a);
+                }
+            }
+            ops.addSeries(os);
+        }
+        XYLineAndShapeRenderer opRenderer = new XYLineAndShapeRenderer(false, true);
+        opRenderer.setSeriesShape(0, new Rectangle2D.Double(-4.5, -4.5, 9, 9));
+        opRenderer.setSeriesPaint(0, new Color(0x8A2F1B));
+
+        // Draw order: datasets with higher index are drawn first under the default order; keep points on top.
+        plot.setDataset(dataset, ops);
+        plot.setRenderer(dataset++, opRenderer);
+        plot.setDataset(dataset, rig);
+        plot.setRenderer(dataset++, rigRenderer);
+        plot.setDataset(dataset, fittedIn);
+        plot.setRenderer(dataset++, fitRenderer);
+        plot.setDataset(dataset, fittedOut);
+        plot.setRenderer(dataset++, fitOutRenderer);
+        plot.setDataset(dataset, laminar);
+        plot.setRenderer(dataset++, lamRenderer);
+        plot.setDataset(dataset, curves);
+        plot.setRenderer(dataset++, curveRenderer);
+        plot.setDataset(dataset, curvesLow);
+        plot.setRenderer(dataset, lowRenderer);
+        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.REVERSE);
+
+        IntervalMarker band = new IntervalMarker(FlowRegimes.LAMINAR_LIMIT, FlowRegimes.TURBULENT_LIMIT);
+        band.setPaint(ChartStyle.SHADE);
+        band.setAlpha(0.6f);
+        band.setLabel("transitional");
+        band.setLabelFont(ChartStyle.FONT.deriveFont(9f));
+        band.setLabelAnchor(RectangleAnchor.TOP);
+        band.setLabelTextAnchor(TextAnchor.TOP_CENTER);
+        plot.addDomainMarker(band, Layer.BACKGROUND);
+
+        String title = spec.title() == null ? "" : spec.title();
+        JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.FONT, plot, true);
+        ChartStyle.apply(chart);
+        return chart;
+    }
+
+    /** Evenly spaced values in log space from a to b inclusive. */
+    static List<Double> logSpace(double a, double b) {
+        List<Double> values = new ArrayList<>();
+        if (!(a > 0) || !(b > a)) {
+            return values;
+        }
+        int n = Math.max(2, (int) Math.ceil(Math.log10(b / a) * POINTS_PER_DECADE) + 1);
+        double la = Math.log10(a);
+        double lb = Math.log10(b);
+        for (int i = 0; i < n; i++) {
+            values.add(i == n - 1 ? b : Math.pow(10, la + (lb - la) * i / (n - 1)));
+        }
+        return values;
+    }
+
+    private static String label(double rr) {
+        if (rr == 0) {
+            return "smooth";
+        }
+        String s = String.format(java.util.Locale.ROOT, "%.0e", rr);
+        return s.replace("e-0", "e-");
+    }
+}

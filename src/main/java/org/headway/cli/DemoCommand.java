@@ -1,0 +1,114 @@
+package org.headway.cli;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.headway.friction.FrictionMethods;
+import org.headway.friction.FrictionResult;
+import org.headway.pipe.Catalog;
+import org.headway.project.Project;
+import org.headway.project.ProjectFile;
+import org.headway.project.ProjectResolver;
+import org.headway.project.ResolvedProject;
+import org.headway.report.CsvSheetWriter;
+import org.headway.report.HeadLossSheet;
+import org.headway.report.PdfSheetWriter;
+import org.headway.report.WorkbookSheetWriter;
+import org.headway.system.HeadLossCalculator;
+import org.headway.system.OperatingPoint;
+import org.headway.system.RunResult;
+import org.headway.system.UncertaintyBand;
+import org.headway.units.UnitSystem;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code headway demo}: the main job on the bundled, invented demo project. */
+@Command(
+        name = "demo",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Run Headway on its bundled demo (an invented orchard booster line): solve the run, print the",
+            "results and write its head-loss sheet (PDF, workbook, CSV) into reports/.",
+            "The demo data are invented; do not use them for design."
+        })
+public final class DemoCommand implements Callable<Integer> {
+
+    /** Classpath location of the demo project. */
+    static final String DEMO_PROJECT = "/fluids-data/examples/demo-orchard-booster.json";
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Option(names = "--reports", paramLabel = "DIR", defaultValue = "reports", description = "Folder for the sheet (default ${DEFAULT-VALUE}).")
+    Path reports;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        out.println("Headway demo — invented data, for demonstration only.");
+        out.println();
+        out.println("1. Friction factors for a few invented cases");
+        out.printf("   %-10s %-10s %-14s %-12s %s%n", "Re", "ε/D", "method", "f", "regime");
+        double[][] cases = {{1500, 0}, {3000, 1e-4}, {5e4, 0}, {2e5, 2.5e-4}, {1e6, 1e-3}, {1e7, 0.01}};
+        for (double[] c : cases) {
+            FrictionResult fr = FrictionMethods.byId("auto").evaluate(c[0], c[1]);
+            out.printf(
+                    java.util.Locale.ROOT,
+                    "   %-10.4g %-10.3g %-14s %-12.6f %s%n",
+                    c[0],
+                    c[1],
+                    fr.method(),
+                    fr.frictionFactor(),
+                    fr.regime().name().toLowerCase(java.util.Locale.ROOT));
+        }
+        out.println();
+        out.println("2. Pipe run: " + DEMO_PROJECT.substring(1));
+        Project project = ProjectFile.parse(resource(DEMO_PROJECT));
+        ResolvedProject resolved = ProjectResolver.resolve(project, Catalog.bundled(), Path.of("."));
+        RunResult result = HeadLossCalculator.solve(resolved.run(), resolved.run().designFlow());
+        OperatingPoint op = resolved.run().pump().isPresent() ? OperatingPoint.find(resolved.run()) : null;
+        RunText.print(
+                out,
+                resolved.run(),
+                result,
+                UnitSystem.SI,
+                "headloss",
+                "",
+                List.of(),
+                op,
+                UncertaintyBand.evaluate(resolved.run()),
+                List.of());
+        out.println();
+        out.println("3. Head-loss sheet");
+        HeadLossSheet sheet = HeadLossSheet.of(resolved, HeadwayCommand.version());
+        Path pdf = reports.resolve("demo-orchard-booster.pdf");
+        PdfSheetWriter.write(sheet, pdf, true, UnitSystem.SI);
+        Path xlsx = reports.resolve("demo-orchard-booster.xlsx");
+        WorkbookSheetWriter.write(sheet, xlsx, true);
+        Path csv = reports.resolve("demo-orchard-booster.csv");
+        CsvSheetWriter.write(sheet, csv, true);
+        out.println("   wrote " + pdf);
+        out.println("   wrote " + xlsx);
+        out.println("   wrote " + csv);
+        out.println("   input hash " + sheet.inputHash());
+        out.flush();
+        return HeadwayCommand.EXIT_OK;
+    }
+
+    static String resource(String path) {
+        try (InputStream in = DemoCommand.class.getResourceAsStream(path)) {
+            if (in == null) {
+                throw new IllegalStateException("demo resource missing from the build: " + path);
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

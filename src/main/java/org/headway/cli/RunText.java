@@ -1,0 +1,134 @@
+package org.headway.cli;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+import org.headway.caution.Caution;
+import org.headway.system.OperatingPoint;
+import org.headway.system.PipeRun;
+import org.headway.system.RunResult;
+import org.headway.system.SegmentResult;
+import org.headway.system.SizeSelector;
+import org.headway.system.SystemCurve;
+import org.headway.system.UncertaintyBand;
+import org.headway.units.Quantities;
+import org.headway.units.QuantityKind;
+import org.headway.units.UnitSystem;
+
+/** Pipe-run results as a plain-text report for the terminal. */
+final class RunText {
+
+    private RunText() {}
+
+    static void print(
+            PrintWriter out,
+            PipeRun run,
+            RunResult r,
+            UnitSystem u,
+            String mode,
+            String modeNote,
+            List<SystemCurve.Point> curve,
+            OperatingPoint operating,
+            UncertaintyBand band,
+            List<SizeSelector.SizeCheck> sizes) {
+        out.println(run.title().isEmpty() ? "Pipe run" : run.title());
+        out.println("Fluid: " + run.fluid().fluid() + " at " + q(run.fluid().temperature(), QuantityKind.TEMPERATURE, u)
+                + ", ρ = " + q(run.fluid().density(), QuantityKind.DENSITY, u) + ", μ = "
+                + q(run.fluid().dynamicViscosity(), QuantityKind.DYNAMIC_VISCOSITY, u));
+        out.println("Friction method: " + run.friction().displayName());
+        out.println("Flow: " + q(r.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + "   (mode: " + mode + ")");
+        if (!modeNote.isEmpty()) {
+            out.println("Result: " + modeNote);
+        }
+        out.println();
+        String v = Quantities.unitSymbol(QuantityKind.VELOCITY, u);
+        String h = Quantities.unitSymbol(QuantityKind.HEAD, u);
+        out.printf(
+                Locale.ROOT,
+                "%-22s %9s %11s %-12s %9s %9s %7s %9s%n",
+                "segment",
+                "V [" + v + "]",
+                "Re",
+                "regime",
+                "f",
+                "hf [" + h + "]",
+                "ΣK",
+                "hm [" + h + "]");
+        for (SegmentResult s : r.segments()) {
+            out.printf(
+                    Locale.ROOT,
+                    "%-22s %9s %11s %-12s %9s %9s %7s %9s%n",
+                    clip(s.name(), 22),
+                    n(Quantities.fromSi(s.velocity(), QuantityKind.VELOCITY, u)),
+                    n(s.reynolds()),
+                    s.regime().name().toLowerCase(Locale.ROOT),
+                    n(s.frictionFactor()),
+                    n(Quantities.fromSi(s.majorHeadLoss(), QuantityKind.HEAD, u)),
+                    n(s.totalLossCoefficient()),
+                    n(Quantities.fromSi(s.minorHeadLoss(), QuantityKind.HEAD, u)));
+        }
+        out.println();
+        out.println("Friction loss:    " + q(r.totals().frictionHeadLoss(), QuantityKind.HEAD, u));
+        out.println("Fitting loss:     " + q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u));
+        out.println("Static head:      " + q(r.totals().staticHead(), QuantityKind.HEAD, u));
+        out.println("Total head:       " + q(r.totals().totalHead(), QuantityKind.HEAD, u));
+        out.println("Pressure drop:    " + q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u)
+                + " (friction and fittings)");
+        r.npshAvailable().ifPresent(x -> out.println("NPSH available:   " + q(x, QuantityKind.HEAD, u)));
+        if (band != null && band.flowUncertainty() + 0 >= 0) {
+            out.println("Head-loss band:   " + q(band.headLoss().nominal(), QuantityKind.HEAD, u) + " (low "
+                    + q(band.headLoss().low(), QuantityKind.HEAD, u) + ", high "
+                    + q(band.headLoss().high(), QuantityKind.HEAD, u) + "; roughness range, flow ±"
+                    + Quantities.formatNumber(band.flowUncertainty() * 100) + " %)");
+        }
+        if (operating != null) {
+            out.println("Pump: " + (operating.found()
+                    ? "operating point " + q(operating.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
+                            + q(operating.head(), QuantityKind.HEAD, u)
+                    : operating.message()));
+            for (Caution c : operating.cautions()) {
+                out.println("  caution: " + c.message());
+            }
+        }
+        if (!sizes.isEmpty()) {
+            out.println();
+            out.println("Size candidates (smallest first):");
+            for (SizeSelector.SizeCheck c : sizes) {
+                out.printf(
+                        Locale.ROOT,
+                        "  %-16s D %-10s V %-10s total %-10s %s%n",
+                        c.size().label(),
+                        q(c.size().innerDiameter(), QuantityKind.DIAMETER, u),
+                        q(c.maximumVelocity(), QuantityKind.VELOCITY, u),
+                        q(c.totalHead(), QuantityKind.HEAD, u),
+                        c.accepted() ? "meets the limits" : "rejected: " + String.join("; ", c.reasons()));
+            }
+        }
+        if (!curve.isEmpty()) {
+            out.println();
+            out.println("System curve:");
+            for (SystemCurve.Point p : curve) {
+                out.println("  " + q(p.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + "  "
+                        + q(p.totalHead(), QuantityKind.HEAD, u));
+            }
+        }
+        out.println();
+        out.println("Cautions:");
+        for (Caution c : r.cautions()) {
+            out.println("  [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + c.message() + " (basis: "
+                    + c.basis() + ")");
+        }
+    }
+
+    private static String q(double si, QuantityKind kind, UnitSystem u) {
+        return Quantities.format(si, kind, u);
+    }
+
+    private static String n(double value) {
+        return Quantities.formatNumber(value);
+    }
+
+    private static String clip(String s, int width) {
+        return s.length() <= width ? s : s.substring(0, width - 1) + "…";
+    }
+}

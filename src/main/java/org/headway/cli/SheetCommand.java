@@ -1,0 +1,114 @@
+package org.headway.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import org.headway.caution.InputException;
+import org.headway.pipe.Catalog;
+import org.headway.project.ProjectFile;
+import org.headway.project.ProjectResolver;
+import org.headway.project.ResolvedProject;
+import org.headway.report.CsvSheetWriter;
+import org.headway.report.HeadLossSheet;
+import org.headway.report.PdfSheetWriter;
+import org.headway.report.SafeText;
+import org.headway.report.WorkbookSheetWriter;
+import org.headway.units.UnitSystem;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code headway sheet}: the head-loss sheet for review (PDF, and optionally workbook and CSV). */
+@Command(
+        name = "sheet",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Write the head-loss sheet of a project for review: PDF, and with --workbook an .xlsx with live",
+            "formulas, with --csv the per-segment table. Files go to reports/ unless --out says otherwise;",
+            "existing files are kept unless --force is given."
+        })
+public final class SheetCommand implements Callable<Integer> {
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "PROJECT.json", description = "Project file.")
+    Path project;
+
+    @Option(names = "--out", paramLabel = "FILE.pdf", description = "PDF to write (default reports/<project>.pdf).")
+    Path out;
+
+    @Option(names = "--workbook", description = "Also write an .xlsx workbook beside the PDF.")
+    boolean workbook;
+
+    @Option(names = "--csv", description = "Also write the per-segment CSV beside the PDF.")
+    boolean csv;
+
+    @Option(names = "--force", description = "Replace existing files.")
+    boolean force;
+
+    @Option(names = "--units", defaultValue = "si", description = "Units on the PDF: si or us (default ${DEFAULT-VALUE}).")
+    String units;
+
+    @Option(names = "--catalog", paramLabel = "DIR", description = "Folder of catalog files to add to the bundled ones.")
+    Path catalogFolder;
+
+    @Override
+    public Integer call() {
+        UnitSystem system = CliSupport.unitSystem(units);
+        Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
+        ResolvedProject resolved = ProjectResolver.resolve(
+                ProjectFile.load(project), catalog, project.toAbsolutePath().getParent());
+        HeadLossSheet sheet = HeadLossSheet.of(resolved, HeadwayCommand.version());
+        Path pdf = out != null ? out : Path.of("reports", stem(project) + ".pdf");
+        if (!pdf.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".pdf")) {
+            throw new InputException("--out", "the sheet is a PDF; give a name ending in .pdf, got " + pdf);
+        }
+        PrintWriter o = spec.commandLine().getOut();
+        for (Path p : outputs(pdf)) {
+            if (!force && p.toFile().exists()) {
+                throw new InputException(p.toString(), "already exists; use --force to replace it");
+            }
+        }
+        PdfSheetWriter.write(sheet, pdf, force, system);
+        o.println("wrote " + pdf);
+        if (workbook) {
+            Path x = sibling(pdf, ".xlsx");
+            WorkbookSheetWriter.write(sheet, x, force);
+            o.println("wrote " + x);
+        }
+        if (csv) {
+            Path c = sibling(pdf, ".csv");
+            CsvSheetWriter.write(sheet, c, force);
+            o.println("wrote " + c);
+        }
+        o.println("input hash " + sheet.inputHash());
+        o.flush();
+        return HeadwayCommand.EXIT_OK;
+    }
+
+    private java.util.List<Path> outputs(Path pdf) {
+        java.util.List<Path> list = new java.util.ArrayList<>();
+        list.add(pdf);
+        if (workbook) {
+            list.add(sibling(pdf, ".xlsx"));
+        }
+        if (csv) {
+            list.add(sibling(pdf, ".csv"));
+        }
+        return list;
+    }
+
+    static String stem(Path project) {
+        String name = project.getFileName().toString();
+        int dot = name.lastIndexOf('.');
+        return SafeText.fileStem(dot > 0 ? name.substring(0, dot) : name);
+    }
+
+    static Path sibling(Path pdf, String extension) {
+        String name = pdf.getFileName().toString();
+        String base = name.substring(0, name.length() - 4);
+        return pdf.resolveSibling(base + extension);
+    }
+}

@@ -1,0 +1,525 @@
+package org.headway.project;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.StreamReadConstraints;
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import org.headway.caution.InputException;
+
+/**
+ * Reads and writes project files: JSON of our own schema, format {@value Project#FORMAT}, version
+ * {@value Project#VERSION}. Unknown keys are errors (a typo must not be ignored); every error names
+ * the file and the JSON path. Saving is atomic.
+ */
+public final class ProjectFile {
+
+    /** Largest project file accepted (bytes). */
+    public static final long MAX_DOCUMENT_LENGTH = 16L * 1024 * 1024;
+    /** Deepest nesting accepted; a project needs about six levels. */
+    public static final int MAX_NESTING_DEPTH = 64;
+    /** Longest string accepted (characters). */
+    public static final int MAX_STRING_LENGTH = 100_000;
+
+    private static final ObjectMapper MAPPER = createMapper();
+
+    private ProjectFile() {}
+
+    /** The JSON reader/writer with Headway's limits on hostile input and no polymorphic typing. */
+    static ObjectMapper createMapper() {
+        JsonFactory factory = JsonFactory.builder()
+                .streamReadConstraints(StreamReadConstraints.builder()
+                        .maxNestingDepth(MAX_NESTING_DEPTH)
+                        .maxStringLength(MAX_STRING_LENGTH)
+                        .maxDocumentLength(MAX_DOCUMENT_LENGTH)
+                        .maxNumberLength(100)
+                        .build())
+                .build();
+        ObjectMapper mapper = new ObjectMapper(factory);
+        mapper.enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY);
+        mapper.enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+        mapper.enable(SerializationFeature.INDENT_OUTPUT);
+        return mapper;
+    }
+
+    /** Shared mapper for other JSON files of ours (same limits). */
+    public static ObjectMapper mapper() {
+        return MAPPER;
+    }
+
+    /**
+     * Loads a project file.
+     *
+     * @throws InputException naming the file and JSON path of the first structural problem
+     */
+    public static Project load(Path file) {
+        String name = file.getFileName().toString();
+        byte[] bytes;
+        try {
+            if (Files.size(file) > MAX_DOCUMENT_LENGTH) {
+                throw new InputException(name, "file is larger than " + MAX_DOCUMENT_LENGTH / (1024 * 1024) + " MB");
+            }
+            bytes = Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new InputException(file.toString(), "file not found");
+        } catch (IOException e) {
+            throw new InputException(file.toString(), "cannot read: " + e.getMessage());
+        }
+        try {
+            return parse(new String(bytes, StandardCharsets.UTF_8));
+        } catch (InputException e) {
+            throw e.at(name + " ");
+        }
+    }
+
+    /** Parses project JSON text (no file name in messages). */
+    public static Project parse(String json) {
+        JsonNode root;
+        try {
+            String text = json.startsWith("\uFEFF") ? json.substring(1) : json;
+            root = MAPPER.readTree(text);
+        } catch (JsonProcessingException e) {
+            String where = e.getLocation() == null
+                    ? ""
+                    : "line " + e.getLocation().getLineNr() + ", column "
+                            + e.getLocation().getColumnNr();
+            throw new InputException(where, "not valid JSON: " + e.getOriginalMessage());
+        }
+        if (root == null || !root.isObject()) {
+            throw new InputException("$", "a project file must be a JSON object");
+        }
+        Obj top = new Obj(root, "");
+        top.allow(
+                "format",
+                "version",
+                "title",
+                "reference",
+                "fluid",
+                "flow",
+                "flowUncertainty",
+                "friction",
+                "segments",
+                "ends",
+                "pump",
+                "limits",
+                "sizing",
+                "curve");
+        String format = top.text("format", true);
+        if (!Project.FORMAT.equals(format)) {
+            throw new InputException("format", "expected \"" + Project.FORMAT + "\", got \"" + format + "\"");
+        }
+        int version = top.integer("version", true, 0);
+        if (version != Project.VERSION) {
+            throw new InputException(
+                    "version", "this Headway reads version " + Project.VERSION + ", the file says " + version);
+        }
+        Project.TitleBlock titleBlock = Project.TitleBlock.EMPTY;
+        if (top.has("reference")) {
+            Obj r = top.object("reference");
+            r.allow("job", "revision", "preparedBy", "checkedBy", "date", "notes");
+            titleBlock = new Project.TitleBlock(
+                    r.text("job", false),
+                    r.text("revision", false),
+                    r.text("preparedBy", false),
+                    r.text("checkedBy", false),
+                    r.text("date", false),
+                    r.text("notes", false));
+        }
+        Obj f = top.object("fluid");
+        f.allow("name", "temperature", "pressure", "density", "viscosity", "vapourPressure");
+        Project.FluidSpec fluid = new Project.FluidSpec(
+                f.text("name", true),
+                f.quantity("temperature"),
+                f.quantity("pressure"),
+                f.quantity("density"),
+                f.quantity("viscosity"),
+                f.quantity("vapourPressure"));
+
+        List<Project.SegmentSpec> segments = new ArrayList<>();
+        ArrayNode segs = top.array("segments", true);
+        for (int i = 0; i < segs.size(); i++) {
+            Obj s = new Obj(segs.get(i), "segments[" + i + "]");
+            s.allow(
+                    "name",
+                    "length",
+                    "pipe",
+                    "innerDiameter",
+                    "roughness",
+                    "fittings",
+                    "lossCoefficient",
+                    "elevationChange");
+            Optional<Project.PipeSpec> pipe = Optional.empty();
+            if (s.has("pipe")) {
+                Obj p = s.object("pipe");
+                p.allow("material", "size", "schedule");
+                pipe = Optional.of(new Project.PipeSpec(
+                        p.text("material", true), p.textOrNumber("size", true), p.textOrNumber("schedule", false)));
+            }
+            List<Project.FittingSpec> fittings = new ArrayList<>();
+            if (s.has("fittings")) {
+                ArrayNode fits = s.array("fittings", false);
+                for (int j = 0; j < fits.size(); j++) {
+                    Obj fit = new Obj(fits.get(j), s.path + ".fittings[" + j + "]");
+                    fit.allow("kind", "count", "lossCoefficient");
+                    int count = fit.integer("count", false, 1);
+                    if (count < 1) {
+                        throw new InputException(fit.path + ".count", "must be at least 1, got " + count);
+                    }
+                    fittings.add(
+                            new Project.FittingSpec(fit.text("kind", true), count, fit.quantity("lossCoefficient")));
+                }
+            }
+            String name = s.has("name") ? s.text("name", true) : "segment " + (i + 1);
+            segments.add(new Project.SegmentSpec(
+                    name,
+                    s.quantityRequired("length"),
+                    pipe,
+                    s.quantity("innerDiameter"),
+                    s.quantity("roughness"),
+                    fittings,
+                    s.quantity("lossCoefficient"),
+                    s.quantity("elevationChange")));
+        }
+
+        Project.EndsSpec ends = Project.EndsSpec.OPEN;
+        if (top.has("ends")) {
+            Obj e = top.object("ends");
+            e.allow("source", "delivery");
+            ends = new Project.EndsSpec(end(e, "source"), end(e, "delivery"));
+        }
+
+        Optional<Project.PumpSpec> pump = Optional.empty();
+        if (top.has("pump")) {
+            Obj p = top.object("pump");
+            p.allow("name", "position", "points", "npshRequired");
+            List<Project.PumpPointSpec> points = new ArrayList<>();
+            ArrayNode pts = p.array("points", true);
+            for (int i = 0; i < pts.size(); i++) {
+                Obj pt = new Obj(pts.get(i), p.path + ".points[" + i + "]");
+                pt.allow("flow", "head");
+                points.add(new Project.PumpPointSpec(pt.quantityRequired("flow"), pt.quantityRequired("head")));
+            }
+            pump = Optional.of(new Project.PumpSpec(
+                    p.has("name") ? p.text("name", true) : "pump",
+                    p.integer("position", false, 0),
+                    points,
+                    p.quantity("npshRequired")));
+        }
+
+        Project.LimitsSpec limits = Project.LimitsSpec.NONE;
+        if (top.has("limits")) {
+            Obj l = top.object("limits");
+            l.allow("minimumVelocity", "maximumVelocity", "maximumFrictionLossPer100m", "headBudget", "npshMargin");
+            limits = new Project.LimitsSpec(
+                    l.quantity("minimumVelocity"),
+                    l.quantity("maximumVelocity"),
+                    l.quantity("maximumFrictionLossPer100m"),
+                    l.quantity("headBudget"),
+                    l.quantity("npshMargin"));
+        }
+        Optional<Project.SizingSpec> sizing = Optional.empty();
+        if (top.has("sizing")) {
+            Obj z = top.object("sizing");
+            z.allow("material", "schedule");
+            sizing = Optional.of(new Project.SizingSpec(z.text("material", true), z.textOrNumber("schedule", false)));
+        }
+        Optional<Project.CurveSpec> curve = Optional.empty();
+        if (top.has("curve")) {
+            Obj c = top.object("curve");
+            c.allow("minimumFlow", "maximumFlow", "points");
+            curve = Optional.of(new Project.CurveSpec(
+                    c.quantity("minimumFlow"), c.quantityRequired("maximumFlow"), c.integer("points", false, 41)));
+        }
+        return new Project(
+                top.text("title", false),
+                titleBlock,
+                fluid,
+                top.quantityRequired("flow"),
+                top.quantity("flowUncertainty"),
+                top.has("friction") ? top.text("friction", true) : "auto",
+                segments,
+                ends,
+                pump,
+                limits,
+                sizing,
+                curve);
+    }
+
+    private static Project.EndSpec end(Obj ends, String key) {
+        if (!ends.has(key)) {
+            return Project.EndSpec.OPEN;
+        }
+        Obj e = ends.object(key);
+        e.allow("level", "pressure");
+        return new Project.EndSpec(e.quantity("level"), e.quantity("pressure"));
+    }
+
+    /** Saves a project atomically. */
+    public static void save(Project project, Path file) {
+        byte[] bytes = toJson(project).getBytes(StandardCharsets.UTF_8);
+        AtomicFiles.write(file, true, out -> out.write(bytes));
+    }
+
+    /** The project as JSON text, keys in a fixed order, empty optional fields left out. */
+    public static String toJson(Project p) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("format", Project.FORMAT);
+        root.put("version", Project.VERSION);
+        putIf(root, "title", p.title());
+        Project.TitleBlock t = p.titleBlock();
+        if (!t.equals(Project.TitleBlock.EMPTY)) {
+            ObjectNode r = root.putObject("reference");
+            putIf(r, "job", t.job());
+            putIf(r, "revision", t.revision());
+            putIf(r, "preparedBy", t.preparedBy());
+            putIf(r, "checkedBy", t.checkedBy());
+            putIf(r, "date", t.date());
+            putIf(r, "notes", t.notes());
+        }
+        ObjectNode f = root.putObject("fluid");
+        f.put("name", p.fluid().name());
+        putIf(f, "temperature", p.fluid().temperature());
+        putIf(f, "pressure", p.fluid().pressure());
+        putIf(f, "density", p.fluid().density());
+        putIf(f, "viscosity", p.fluid().viscosity());
+        putIf(f, "vapourPressure", p.fluid().vapourPressure());
+        root.put("flow", p.flow());
+        putIf(root, "flowUncertainty", p.flowUncertainty());
+        root.put("friction", p.friction());
+        ArrayNode segs = root.putArray("segments");
+        for (Project.SegmentSpec s : p.segments()) {
+            ObjectNode n = segs.addObject();
+            n.put("name", s.name());
+            n.put("length", s.length());
+            s.pipe().ifPresent(pipe -> {
+                ObjectNode pn = n.putObject("pipe");
+                pn.put("material", pipe.material());
+                pn.put("size", pipe.size());
+                putIf(pn, "schedule", pipe.schedule());
+            });
+            putIf(n, "innerDiameter", s.innerDiameter());
+            putIf(n, "roughness", s.roughness());
+            if (!s.fittings().isEmpty()) {
+                ArrayNode fits = n.putArray("fittings");
+                for (Project.FittingSpec fit : s.fittings()) {
+                    ObjectNode fn = fits.addObject();
+                    fn.put("kind", fit.kind());
+                    fn.put("count", fit.count());
+                    putIf(fn, "lossCoefficient", fit.lossCoefficient());
+                }
+            }
+            putIf(n, "lossCoefficient", s.lossCoefficient());
+            putIf(n, "elevationChange", s.elevationChange());
+        }
+        if (!p.ends().equals(Project.EndsSpec.OPEN)) {
+            ObjectNode e = root.putObject("ends");
+            for (String key : new String[] {"source", "delivery"}) {
+                Project.EndSpec end =
+                        key.equals("source") ? p.ends().source() : p.ends().delivery();
+                ObjectNode en = e.putObject(key);
+                putIf(en, "level", end.level());
+                putIf(en, "pressure", end.pressure());
+            }
+        }
+        p.pump().ifPresent(pump -> {
+            ObjectNode pn = root.putObject("pump");
+            pn.put("name", pump.name());
+            pn.put("position", pump.position());
+            ArrayNode pts = pn.putArray("points");
+            for (Project.PumpPointSpec pt : pump.points()) {
+                ObjectNode ptn = pts.addObject();
+                ptn.put("flow", pt.flow());
+                ptn.put("head", pt.head());
+            }
+            putIf(pn, "npshRequired", pump.npshRequired());
+        });
+        if (!p.limits().equals(Project.LimitsSpec.NONE)) {
+            ObjectNode l = root.putObject("limits");
+            putIf(l, "minimumVelocity", p.limits().minimumVelocity());
+            putIf(l, "maximumVelocity", p.limits().maximumVelocity());
+            putIf(l, "maximumFrictionLossPer100m", p.limits().maximumFrictionLossPer100m());
+            putIf(l, "headBudget", p.limits().headBudget());
+            putIf(l, "npshMargin", p.limits().npshMargin());
+        }
+        p.sizing().ifPresent(z -> {
+            ObjectNode zn = root.putObject("sizing");
+            zn.put("material", z.material());
+            putIf(zn, "schedule", z.schedule());
+        });
+        p.curve().ifPresent(c -> {
+            ObjectNode cn = root.putObject("curve");
+            putIf(cn, "minimumFlow", c.minimumFlow());
+            cn.put("maximumFlow", c.maximumFlow());
+            cn.put("points", c.points());
+        });
+        try {
+            return MAPPER.writeValueAsString(root) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("could not write project JSON", e);
+        }
+    }
+
+    private static void putIf(ObjectNode node, String key, String value) {
+        if (value != null && !value.isEmpty()) {
+            node.put(key, value);
+        }
+    }
+
+    /** A JSON object with its path, for readable errors. */
+    static final class Obj {
+        final JsonNode node;
+        final String path;
+
+        Obj(JsonNode node, String path) {
+            this.path = path;
+            if (node == null || !node.isObject()) {
+                throw new InputException(path.isEmpty() ? "$" : path, "expected a JSON object, got " + kind(node));
+            }
+            this.node = node;
+        }
+
+        String at(String key) {
+            return path.isEmpty() ? key : path + "." + key;
+        }
+
+        void allow(String... keys) {
+            Set<String> allowed = Set.of(keys);
+            Iterator<String> names = node.fieldNames();
+            while (names.hasNext()) {
+                String name = names.next();
+                if (!allowed.contains(name)) {
+                    throw new InputException(at(name), "unknown key; expected one of " + String.join(", ", keys));
+                }
+            }
+        }
+
+        boolean has(String key) {
+            return node.has(key) && !node.get(key).isNull();
+        }
+
+        String text(String key, boolean required) {
+            JsonNode v = node.get(key);
+            if (v == null || v.isNull()) {
+                if (required) {
+                    throw new InputException(at(key), "missing");
+                }
+                return "";
+            }
+            if (!v.isTextual()) {
+                throw new InputException(at(key), "expected text, got " + kind(v));
+            }
+            if (required && v.asText().isBlank()) {
+                throw new InputException(at(key), "must not be empty");
+            }
+            return v.asText();
+        }
+
+        String textOrNumber(String key, boolean required) {
+            JsonNode v = node.get(key);
+            if (v != null && v.isNumber()) {
+                return v.asText();
+            }
+            return text(key, required);
+        }
+
+        /** A quantity as text with unit, or a plain number taken as SI; empty when absent. */
+        String quantity(String key) {
+            JsonNode v = node.get(key);
+            if (v == null || v.isNull()) {
+                return "";
+            }
+            if (v.isNumber()) {
+                double d = v.asDouble();
+                if (!Double.isFinite(d)) {
+                    throw new InputException(at(key), "number out of range: " + v.asText());
+                }
+                return v.isIntegralNumber() ? v.asText() : Double.toString(d);
+            }
+            if (!v.isTextual()) {
+                throw new InputException(at(key), "expected a quantity such as \"12 m\", got " + kind(v));
+            }
+            if (v.asText().isBlank()) {
+                throw new InputException(at(key), "empty quantity");
+            }
+            return v.asText().strip();
+        }
+
+        String quantityRequired(String key) {
+            String q = quantity(key);
+            if (q.isEmpty()) {
+                throw new InputException(at(key), "missing");
+            }
+            return q;
+        }
+
+        int integer(String key, boolean required, int otherwise) {
+            JsonNode v = node.get(key);
+            if (v == null || v.isNull()) {
+                if (required) {
+                    throw new InputException(at(key), "missing");
+                }
+                return otherwise;
+            }
+            if (!v.isIntegralNumber() || !v.canConvertToInt()) {
+                throw new InputException(at(key), "expected a whole number, got " + v);
+            }
+            return v.intValue();
+        }
+
+        Obj object(String key) {
+            JsonNode v = node.get(key);
+            if (v == null || v.isNull()) {
+                throw new InputException(at(key), "missing");
+            }
+            return new Obj(v, at(key));
+        }
+
+        ArrayNode array(String key, boolean nonEmpty) {
+            JsonNode v = node.get(key);
+            if (v == null || v.isNull()) {
+                throw new InputException(at(key), "missing");
+            }
+            if (!v.isArray()) {
+                throw new InputException(at(key), "expected a list, got " + kind(v));
+            }
+            if (nonEmpty && v.isEmpty()) {
+                throw new InputException(at(key), "must not be empty");
+            }
+            return (ArrayNode) v;
+        }
+
+        private static String kind(JsonNode v) {
+            if (v == null || v.isNull()) {
+                return "nothing";
+            }
+            if (v.isTextual()) {
+                return "text \"" + v.asText() + "\"";
+            }
+            if (v.isNumber()) {
+                return "number " + v.asText();
+            }
+            if (v.isArray()) {
+                return "a list";
+            }
+            if (v.isObject()) {
+                return "an object";
+            }
+            return v.getNodeType().toString().toLowerCase(java.util.Locale.ROOT);
+        }
+    }
+}

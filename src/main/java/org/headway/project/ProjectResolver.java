@@ -1,0 +1,427 @@
+package org.headway.project;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.function.Supplier;
+import org.headway.caution.Caution;
+import org.headway.caution.InputException;
+import org.headway.fluid.Fluid;
+import org.headway.fluid.FluidState;
+import org.headway.fluid.Fluids;
+import org.headway.friction.FrictionCorrelation;
+import org.headway.friction.FrictionMethods;
+import org.headway.pipe.Catalog;
+import org.headway.pipe.Fitting;
+import org.headway.pipe.Material;
+import org.headway.pipe.PipeSize;
+import org.headway.system.DesignLimits;
+import org.headway.system.EndCondition;
+import org.headway.system.FittingUse;
+import org.headway.system.GivenLossCoefficient;
+import org.headway.system.PipeRun;
+import org.headway.system.PumpCurve;
+import org.headway.system.Segment;
+import org.headway.system.SizeSelector;
+import org.headway.units.Quantities;
+import org.headway.units.QuantityKind;
+
+/**
+ * Turns a {@link Project} into a {@link ResolvedProject}: parses every quantity, looks up fluids,
+ * materials, sizes and fittings, and applies the engineer's overrides. Every problem found is
+ * reported with its JSON path, all of them at once.
+ */
+public final class ProjectResolver {
+
+    /** Default flow uncertainty when the project gives none (ratio). */
+    public static final double DEFAULT_FLOW_UNCERTAINTY = 0.0;
+
+    private final Catalog catalog;
+    private final Path baseFolder;
+    private final List<String> problems = new ArrayList<>();
+
+    private ProjectResolver(Catalog catalog, Path baseFolder) {
+        this.catalog = catalog;
+        this.baseFolder = baseFolder;
+    }
+
+    /**
+     * @param project the project as written
+     * @param catalog catalog to look names up in
+     * @param baseFolder folder relative paths in the project are resolved against (its own folder)
+     * @throws InputException listing every problem with its JSON path
+     */
+    public static ResolvedProject resolve(Project project, Catalog catalog, Path baseFolder) {
+        return new ProjectResolver(catalog, baseFolder).run(project);
+    }
+
+    private ResolvedProject run(Project p) {
+        FluidState fluid = attempt("fluid", () -> fluid(p.fluid()));
+        double flow = orZero(attempt("flow", () -> Quantities.parse(p.flow(), QuantityKind.VOLUMETRIC_FLOW, "flow")));
+        double uncertainty = p.flowUncertainty().isEmpty()
+                ? DEFAULT_FLOW_UNCERTAINTY
+                : orZero(attempt("flowUncertainty", () -> ratio(p.flowUncertainty())));
+        FrictionCorrelation friction = attempt("friction", () -> friction(p.friction()));
+
+        List<Segment> segments = new ArrayList<>();
+        for (int i = 0; i < p.segments().size(); i++) {
+            Project.SegmentSpec spec = p.segments().get(i);
+            String path = "segments[" + i + "]";
+            Segment s = attempt(path, () -> segment(spec, fluid));
+            if (s != null) {
+                segments.add(s);
+            }
+        }
+        double density = fluid == null ? 1000 : fluid.density();
+        EndCondition source = attempt("ends.source", () -> end(p.ends().source()));
+        EndCondition delivery = attempt("ends.delivery", () -> end(p.ends().delivery()));
+
+        DesignLimits limits = attempt("limits", () -> limits(p.limits()));
+        Optional<PumpCurve> pump = Optional.empty();
+        int pumpPosition = 0;
+        if (p.pump().isPresent()) {
+            Project.PumpSpec ps = p.pump().get();
+            pumpPosition = ps.position();
+            pump = Optional.ofNullable(attempt("pump", () -> pump(ps)));
+        }
+        List<SizeSelector.CandidateSize> candidates = new ArrayList<>();
+        if (p.sizing().isPresent()) {
+            List<SizeSelector.CandidateSize> found = attempt("sizing", () -> candidates(p.sizing().get()));
+            if (found != null) {
+                candidates.addAll(found);
+            }
+        }
+        Optional<ResolvedProject.CurveRange> curve = Optional.empty();
+        if (p.curve().isPresent()) {
+            curve = Optional.ofNullable(attempt("curve", () -> curve(p.curve().get())));
+        }
+        if (!problems.isEmpty()) {
+            String message = problems.size() == 1
+                    ? problems.get(0)
+                    : problems.size() + " problems:\n  " + String.join("\n  ", problems);
+            throw new InputException("", message);
+        }
+        final int position = pumpPosition;
+        final Optional<PumpCurve> pumpCurve = pump;
+        PipeRun run = attempt(
+                "",
+                () -> new PipeRun(
+                        p.title(),
+                        fluid,
+                        friction,
+                        segments,
+                        source,
+                        delivery,
+                        pumpCurve,
+                        position,
+                        PipeRun.STANDARD_ATMOSPHERE,
+                        flow,
+                        uncertainty,
+                        limits));
+        if (!problems.isEmpty()) {
+            throw new InputException("", problems.get(0));
+        }
+        if (density <= 0) {
+            throw new IllegalStateException("density must be positive");
+        }
+        return new ResolvedProject(p, run, candidates, limits, curve);
+    }
+
+    private <T> T attempt(String path, Supplier<T> work) {
+        try {
+            return work.get();
+        } catch (InputException e) {
+            String where = path.isEmpty() ? e.where() : (e.where().isEmpty() ? path : joinPath(path, e.where()));
+            problems.add(where.isEmpty() ? e.problem() : where + ": " + e.problem());
+            return null;
+        }
+    }
+
+    private static String joinPath(String outer, String inner) {
+        if (inner.startsWith(outer)) {
+            return inner;
+        }
+        return outer + "." + inner;
+    }
+
+    private static double orZero(Double d) {
+        return d == null ? 0 : d;
+    }
+
+    /** Parses "5 %", "5%" or a plain ratio "0.05". */
+    static double ratio(String text) {
+        String t = text.strip();
+        double value;
+        try {
+            if (t.endsWith("%")) {
+                value = Double.parseDouble(t.substring(0, t.length() - 1).strip()) / 100.0;
+            } else {
+                value = Double.parseDouble(t);
+            }
+        } catch (NumberFormatException e) {
+            throw new InputException("", "expected a ratio such as \"5 %\" or 0.05, got \"" + text + "\"");
+        }
+        if (!Double.isFinite(value) || value < 0 || value >= 1) {
+            throw new InputException("", "must be between 0 and 100 %, got \"" + text + "\"");
+        }
+        return value;
+    }
+
+    private FluidState fluid(Project.FluidSpec spec) {
+        boolean hasOverrides = !spec.density().isEmpty() || !spec.viscosity().isEmpty();
+        double pressure = spec.pressure().isEmpty()
+                ? PipeRun.STANDARD_ATMOSPHERE
+                : Quantities.parse(spec.pressure(), QuantityKind.PRESSURE, "pressure");
+        FluidState state;
+        Fluid model = null;
+        try {
+            model = Fluids.byId(spec.name());
+        } catch (InputException e) {
+            if (!(!spec.density().isEmpty() && !spec.viscosity().isEmpty())) {
+                throw new InputException(
+                        "name", e.problem() + " (or give density and viscosity for a fluid of your own)");
+            }
+        }
+        double temperature = spec.temperature().isEmpty()
+                ? Double.NaN
+                : Quantities.parse(spec.temperature(), QuantityKind.TEMPERATURE, "temperature");
+        if (model != null) {
+            if (Double.isNaN(temperature)) {
+                throw new InputException("temperature", "missing; " + spec.name() + " needs a temperature");
+            }
+            state = model.state(temperature, pressure);
+        } else {
+            state = null;
+        }
+        if (state == null || hasOverrides || !spec.vapourPressure().isEmpty()) {
+            double density = !spec.density().isEmpty()
+                    ? positive("density", Quantities.parse(spec.density(), QuantityKind.DENSITY, "density"))
+                    : state.density();
+            double viscosity = !spec.viscosity().isEmpty()
+                    ? positive(
+                            "viscosity",
+                            Quantities.parse(spec.viscosity(), QuantityKind.DYNAMIC_VISCOSITY, "viscosity"))
+                    : state.dynamicViscosity();
+            OptionalDouble vapour = !spec.vapourPressure().isEmpty()
+                    ? OptionalDouble.of(InputException.requireNonNegative(
+                            "vapourPressure",
+                            Quantities.parse(spec.vapourPressure(), QuantityKind.PRESSURE, "vapourPressure")))
+                    : state == null ? OptionalDouble.empty() : state.vapourPressure();
+            String given = "given in the project file";
+            List<Caution> cautions = state == null ? List.of() : state.cautions();
+            state = new FluidState(
+                    spec.name(),
+                    Double.isNaN(temperature) ? 293.15 : temperature,
+                    pressure,
+                    density,
+                    viscosity,
+                    viscosity / density,
+                    vapour,
+                    spec.density().isEmpty() ? state.densitySource() : given,
+                    spec.viscosity().isEmpty() ? state.viscositySource() : given,
+                    spec.vapourPressure().isEmpty()
+                            ? (state == null ? "" : state.vapourPressureSource())
+                            : given,
+                    cautions);
+        }
+        return state;
+    }
+
+    private static double positive(String field, double v) {
+        return InputException.requirePositive(field, v);
+    }
+
+    private FrictionCorrelation friction(String id) {
+        return FrictionMethods.byId(id);
+    }
+
+    private Segment segment(Project.SegmentSpec spec, FluidState fluid) {
+        Segment.Builder b = Segment.builder(spec.name());
+        b.length(InputException.requireNonNegative(
+                "length", Quantities.parse(spec.length(), QuantityKind.LENGTH, "length")));
+        double diameter;
+        double roughness;
+        double low;
+        double high;
+        if (spec.pipe().isPresent()) {
+            Project.PipeSpec ps = spec.pipe().get();
+            Material material;
+            try {
+                material = catalog.material(ps.material());
+            } catch (InputException e) {
+                throw e.at("pipe.material");
+            }
+            PipeSize size;
+            try {
+                size = catalog.size(material, ps.size(), ps.schedule());
+            } catch (InputException e) {
+                throw e.at("pipe.size");
+            }
+            diameter = size.innerDiameter();
+            roughness = material.roughness();
+            low = material.roughnessLow();
+            high = material.roughnessHigh();
+            String description = material.name() + ", " + size.nominal()
+                    + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())) + " (" + size.table()
+                    + ")";
+            b.pipeDescription(description).pipeCondition(material.condition()).roughnessSource(material.source());
+            if (!spec.innerDiameter().isEmpty()) {
+                diameter = Quantities.parse(spec.innerDiameter(), QuantityKind.DIAMETER, "innerDiameter");
+                b.pipeDescription(description + ", bore given in project");
+            }
+            if (!spec.roughness().isEmpty()) {
+                roughness = Quantities.parse(spec.roughness(), QuantityKind.ROUGHNESS, "roughness");
+                low = roughness;
+                high = roughness;
+                b.roughnessSource("given in the project file");
+            }
+        } else {
+            if (spec.innerDiameter().isEmpty()) {
+                throw new InputException("innerDiameter", "missing; give a catalog pipe or an inner diameter");
+            }
+            if (spec.roughness().isEmpty()) {
+                throw new InputException("roughness", "missing; an explicit bore needs its absolute roughness");
+            }
+            diameter = Quantities.parse(spec.innerDiameter(), QuantityKind.DIAMETER, "innerDiameter");
+            roughness = Quantities.parse(spec.roughness(), QuantityKind.ROUGHNESS, "roughness");
+            low = roughness;
+            high = roughness;
+        }
+        InputException.requirePositive("innerDiameter", diameter);
+        InputException.requireNonNegative("roughness", roughness);
+        if (roughness >= diameter) {
+            throw new InputException(
+                    "roughness",
+                    String.format(
+                            "roughness %s is not smaller than the inner diameter %s",
+                            Quantities.formatNumber(roughness) + " m",
+                            Quantities.formatNumber(diameter) + " m"));
+        }
+        b.bore(diameter, roughness).roughnessRange(Math.min(low, roughness), Math.max(high, roughness));
+        for (int j = 0; j < spec.fittings().size(); j++) {
+            Project.FittingSpec fs = spec.fittings().get(j);
+            String path = "fittings[" + j + "]";
+            Fitting fitting;
+            try {
+                if (!fs.lossCoefficient().isEmpty()) {
+                    double k = Quantities.parse(fs.lossCoefficient(), QuantityKind.DIMENSIONLESS, "lossCoefficient");
+                    String replaces = "";
+                    try {
+                        replaces = catalog.fitting(fs.kind()).description();
+                    } catch (InputException notInCatalog) {
+                        replaces = fs.kind();
+                    }
+                    fitting = new GivenLossCoefficient(fs.kind(), k, replaces);
+                } else {
+                    fitting = catalog.fitting(fs.kind());
+                }
+            } catch (InputException e) {
+                throw e.where().isEmpty() ? new InputException(path + ".kind", e.problem()) : e.at(path);
+            }
+            b.fitting(new FittingUse(fitting, fs.count()));
+        }
+        if (!spec.lossCoefficient().isEmpty()) {
+            b.extraLossCoefficient(InputException.requireNonNegative(
+                    "lossCoefficient",
+                    Quantities.parse(spec.lossCoefficient(), QuantityKind.DIMENSIONLESS, "lossCoefficient")));
+        }
+        if (!spec.elevationChange().isEmpty()) {
+            b.elevationChange(Quantities.parse(spec.elevationChange(), QuantityKind.LENGTH, "elevationChange"));
+        }
+        return b.build();
+    }
+
+    private static String scheduleLabel(String schedule) {
+        return schedule.matches("\\d+S?") ? "Sch " + schedule : schedule;
+    }
+
+    private static EndCondition end(Project.EndSpec spec) {
+        double level = spec.level().isEmpty() ? 0 : Quantities.parse(spec.level(), QuantityKind.LENGTH, "level");
+        double pressure =
+                spec.pressure().isEmpty() ? 0 : Quantities.parse(spec.pressure(), QuantityKind.PRESSURE, "pressure");
+        return new EndCondition(level, pressure);
+    }
+
+    private static DesignLimits limits(Project.LimitsSpec spec) {
+        DesignLimits d = DesignLimits.USUAL;
+        return new DesignLimits(
+                spec.minimumVelocity().isEmpty()
+                        ? d.minimumVelocity()
+                        : Quantities.parse(spec.minimumVelocity(), QuantityKind.VELOCITY, "minimumVelocity"),
+                spec.maximumVelocity().isEmpty()
+                        ? d.maximumVelocity()
+                        : Quantities.parse(spec.maximumVelocity(), QuantityKind.VELOCITY, "maximumVelocity"),
+                spec.maximumFrictionLossPer100m().isEmpty()
+                        ? d.maximumFrictionLossPer100m()
+                        : Quantities.parse(
+                                spec.maximumFrictionLossPer100m(), QuantityKind.HEAD, "maximumFrictionLossPer100m"),
+                spec.headBudget().isEmpty()
+                        ? d.headBudget()
+                        : Quantities.parse(spec.headBudget(), QuantityKind.HEAD, "headBudget"),
+                spec.npshMargin().isEmpty()
+                        ? d.npshMargin()
+                        : Quantities.parse(spec.npshMargin(), QuantityKind.HEAD, "npshMargin"));
+    }
+
+    private static PumpCurve pump(Project.PumpSpec spec) {
+        List<PumpCurve.Point> points = new ArrayList<>();
+        for (int i = 0; i < spec.points().size(); i++) {
+            Project.PumpPointSpec pt = spec.points().get(i);
+            String path = "points[" + i + "]";
+            points.add(new PumpCurve.Point(
+                    Quantities.parse(pt.flow(), QuantityKind.VOLUMETRIC_FLOW, path + ".flow"),
+                    Quantities.parse(pt.head(), QuantityKind.HEAD, path + ".head")));
+        }
+        OptionalDouble npshr = spec.npshRequired().isEmpty()
+                ? OptionalDouble.empty()
+                : OptionalDouble.of(Quantities.parse(spec.npshRequired(), QuantityKind.HEAD, "npshRequired"));
+        try {
+            return PumpCurve.fit(spec.name(), points, npshr);
+        } catch (InputException e) {
+            String where = e.where().startsWith("pump.") ? e.where().substring(5) : e.where();
+            throw new InputException(where, e.problem());
+        }
+    }
+
+    private List<SizeSelector.CandidateSize> candidates(Project.SizingSpec spec) {
+        Material material;
+        try {
+            material = catalog.material(spec.material());
+        } catch (InputException e) {
+            throw e.at("material");
+        }
+        List<SizeSelector.CandidateSize> list = new ArrayList<>();
+        for (PipeSize size : catalog.sizes(material.sizeTable(), spec.schedule())) {
+            list.add(new SizeSelector.CandidateSize(
+                    size.nominal() + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())),
+                    size.innerDiameter()));
+        }
+        if (list.isEmpty()) {
+            throw new InputException(
+                    "schedule",
+                    "no sizes of schedule \"" + spec.schedule() + "\" in table " + material.sizeTable());
+        }
+        return list;
+    }
+
+    private static ResolvedProject.CurveRange curve(Project.CurveSpec spec) {
+        double min = spec.minimumFlow().isEmpty()
+                ? 0
+                : Quantities.parse(spec.minimumFlow(), QuantityKind.VOLUMETRIC_FLOW, "minimumFlow");
+        double max = Quantities.parse(spec.maximumFlow(), QuantityKind.VOLUMETRIC_FLOW, "maximumFlow");
+        if (max <= min) {
+            throw new InputException("maximumFlow", "must exceed the minimum flow");
+        }
+        if (spec.points() < 2 || spec.points() > 100_000) {
+            throw new InputException("points", "must be between 2 and 100000, got " + spec.points());
+        }
+        return new ResolvedProject.CurveRange(min, max, spec.points());
+    }
+
+    /** The folder relative paths are resolved against. */
+    Path baseFolder() {
+        return baseFolder;
+    }
+}

@@ -1,0 +1,64 @@
+package org.headway.report;
+
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.Locale;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.headway.system.SegmentResult;
+import org.headway.project.AtomicFiles;
+
+/** Writes the per-segment results as CSV: one header row with units, SI values, round-trippable numbers. */
+public final class CsvSheetWriter {
+
+    /** Column headers, units in brackets. */
+    public static final String[] HEADER = {
+        "segment",
+        "velocity [m/s]",
+        "reynolds [-]",
+        "relative_roughness [-]",
+        "regime",
+        "friction_factor [-]",
+        "friction_method",
+        "major_head_loss [m]",
+        "loss_coefficient_total [-]",
+        "minor_head_loss [m]",
+        "outlet_energy_grade [m]",
+        "outlet_hydraulic_grade [m]"
+    };
+
+    private CsvSheetWriter() {}
+
+    /** Writes the CSV atomically. */
+    public static void write(HeadLossSheet sheet, Path target, boolean overwrite) {
+        AtomicFiles.write(target, overwrite, out -> {
+            Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+            write(sheet.result().segments(), w);
+            w.flush();
+        });
+    }
+
+    /** Writes the table to a writer (used by the CLI for stdout too). */
+    public static void write(Iterable<SegmentResult> segments, Appendable w) throws java.io.IOException {
+        CSVPrinter p = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+        p.printRecord((Object[]) HEADER);
+        for (SegmentResult s : segments) {
+            p.printRecord(
+                    SafeText.cell(s.name()),
+                    Double.toString(s.velocity()),
+                    Double.toString(s.reynolds()),
+                    Double.toString(s.relativeRoughness()),
+                    s.regime().name().toLowerCase(Locale.ROOT),
+                    Double.toString(s.frictionFactor()),
+                    s.frictionMethod(),
+                    Double.toString(s.majorHeadLoss()),
+                    Double.toString(s.totalLossCoefficient()),
+                    Double.toString(s.minorHeadLoss()),
+                    Double.toString(s.outletEnergyGrade()),
+                    Double.toString(s.outletHydraulicGrade()));
+        }
+        p.flush();
+    }
+}

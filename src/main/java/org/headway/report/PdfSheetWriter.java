@@ -1,0 +1,298 @@
+package org.headway.report;
+
+import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
+import java.awt.geom.Rectangle2D;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Calendar;
+import java.util.List;
+import java.util.Locale;
+import java.util.TimeZone;
+import org.apache.pdfbox.pdmodel.PDDocumentInformation;
+import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
+import org.headway.caution.Caution;
+import org.headway.project.AtomicFiles;
+import org.headway.project.Project;
+import org.headway.system.FittingUse;
+import org.headway.system.PipeRun;
+import org.headway.system.RunResult;
+import org.headway.system.Segment;
+import org.headway.system.SegmentResult;
+import org.headway.units.Quantities;
+import org.headway.units.QuantityKind;
+import org.headway.units.UnitSystem;
+import org.jfree.chart.JFreeChart;
+
+/** Writes the head-loss sheet as a PDF: title block, inputs, results, charts, methods, cautions. */
+public final class PdfSheetWriter {
+
+    /** Chart drawing size in points before scaling to the text width. */
+    private static final float CHART_WIDTH = 640f;
+
+    private static final float CHART_HEIGHT = 400f;
+    private static final float BODY = 8.5f;
+    private static final float SMALL = 7.5f;
+
+    private PdfSheetWriter() {}
+
+    /**
+     * Writes the PDF atomically.
+     *
+     * @param sheet the sheet content
+     * @param target the file
+     * @param overwrite whether an existing file may be replaced
+     * @param units units the sheet is printed in
+     */
+    public static void write(HeadLossSheet sheet, Path target, boolean overwrite, UnitSystem units) {
+        AtomicFiles.write(target, overwrite, out -> {
+            try (PdfLayout pdf = new PdfLayout()) {
+                compose(pdf, sheet, units);
+                pdf.doc.save(out);
+            }
+        });
+    }
+
+    private static void compose(PdfLayout pdf, HeadLossSheet sheet, UnitSystem u) throws IOException {
+        Project p = sheet.project();
+        PipeRun run = sheet.run();
+        RunResult r = sheet.result();
+        PDDocumentInformation info = pdf.doc.getDocumentInformation();
+        info.setTitle("Head-loss sheet: " + p.title());
+        info.setCreator("Headway " + sheet.version());
+        info.setSubject("input hash " + sheet.inputHash());
+        // A fixed creation date from the project keeps regenerated sheets comparable; fall back to none.
+        Calendar epoch = Calendar.getInstance(TimeZone.getTimeZone("UTC"), Locale.ROOT);
+        epoch.setTimeInMillis(0);
+        info.setCreationDate(epoch);
+
+        pdf.heading("Head-loss sheet", 16);
+        pdf.paragraph(p.title().isEmpty() ? "(untitled run)" : p.title(), pdf.bold, 11, PdfLayout.MARGIN, pdf.width());
+        pdf.space(4);
+        Project.TitleBlock t = p.titleBlock();
+        List<String[]> title = new ArrayList<>();
+        title.add(new String[] {"Job / reference", blank(t.job()), "Revision", blank(t.revision())});
+        title.add(new String[] {"Prepared by", blank(t.preparedBy()), "Checked by", blank(t.checkedBy())});
+        title.add(new String[] {"Date", blank(t.date()), "Headway version", sheet.version()});
+        pdf.table(new String[] {"Title block", "", "", ""}, title, new float[] {0.18f, 0.32f, 0.18f, 0.32f}, BODY);
+        if (!t.notes().isEmpty()) {
+            pdf.paragraph("Notes: " + t.notes(), SMALL);
+        }
+        pdf.space(4);
+        pdf.note("CAUTION — " + org.headway.caution.Caution.GENERAL_REVIEW.message(), BODY);
+
+        // Inputs
+        pdf.heading("Inputs", 12);
+        var f = run.fluid();
+        List<String[]> fluid = new ArrayList<>();
+        fluid.add(row("Fluid", f.fluid(), ""));
+        fluid.add(row("Temperature", q(f.temperature(), QuantityKind.TEMPERATURE, u), "as given"));
+        fluid.add(row("Pressure (absolute)", q(f.pressure(), QuantityKind.PRESSURE, u), "as given or standard atmosphere"));
+        fluid.add(row("Density ρ", q(f.density(), QuantityKind.DENSITY, u), f.densitySource()));
+        fluid.add(row("Dynamic viscosity μ", q(f.dynamicViscosity(), QuantityKind.DYNAMIC_VISCOSITY, u), f.viscositySource()));
+        fluid.add(row("Kinematic viscosity ν", q(f.kinematicViscosity(), QuantityKind.KINEMATIC_VISCOSITY, u), "μ/ρ"));
+        if (f.vapourPressure().isPresent()) {
+            fluid.add(row(
+                    "Vapour pressure p_v",
+                    q(f.vapourPressure().getAsDouble(), QuantityKind.PRESSURE, u),
+                    f.vapourPressureSource()));
+        }
+        fluid.add(row("Design flow Q", q(run.designFlow(), QuantityKind.VOLUMETRIC_FLOW, u),
+                "flow uncertainty ±" + Quantities.formatNumber(run.flowUncertainty() * 100) + " %"));
+        fluid.add(row("Friction method", run.friction().displayName(), run.friction().id()));
+        fluid.add(row("Source end", end(run.source().level(), run.source().pressure(), u), "level above pipe inlet; gauge pressure"));
+        fluid.add(row("Delivery end", end(run.delivery().level(), run.delivery().pressure(), u), "level above pipe outlet; gauge pressure"));
+        if (run.pump().isPresent()) {
+            var pump = run.pump().get();
+            fluid.add(row(
+                    "Pump",
+                    pump.name() + ", upstream of segment " + (run.pumpPosition() + 1),
+                    pump.points().size() + " points, quadratic fit R² = " + String.format(Locale.ROOT, "%.5f", pump.rSquared())
+                            + pump.npshRequired().stream()
+                                    .mapToObj(v -> ", NPSH required " + q(v, QuantityKind.HEAD, u))
+                                    .findFirst()
+                                    .orElse("")));
+        }
+        pdf.table(new String[] {"Quantity", "Value", "Source / note"}, fluid, new float[] {0.25f, 0.3f, 0.45f}, BODY);
+
+        List<String[]> pipes = new ArrayList<>();
+        for (Segment s : run.segments()) {
+            pipes.add(new String[] {
+                s.name(),
+                q(s.length(), QuantityKind.LENGTH, u),
+                s.pipeDescription(),
+                q(s.innerDiameter(), QuantityKind.DIAMETER, u),
+                q(s.roughness(), QuantityKind.ROUGHNESS, u) + " (" + q(s.roughnessLow(), QuantityKind.ROUGHNESS, u)
+                        + "–" + q(s.roughnessHigh(), QuantityKind.ROUGHNESS, u) + ")",
+                s.roughnessSource(),
+                q(s.elevationChange(), QuantityKind.LENGTH, u)
+            });
+        }
+        pdf.space(4);
+        pdf.table(
+                new String[] {"Segment", "Length", "Pipe", "Inner dia.", "Roughness ε (range)", "ε source", "Δz"},
+                pipes,
+                new float[] {0.15f, 0.08f, 0.22f, 0.09f, 0.17f, 0.21f, 0.08f},
+                SMALL);
+
+        List<String[]> fittings = new ArrayList<>();
+        for (int i = 0; i < run.segments().size(); i++) {
+            Segment s = run.segments().get(i);
+            SegmentResult sr = r.segments().get(i);
+            for (FittingUse use : s.fittings()) {
+                double k = sr.reynolds() > 0 ? use.fitting().lossCoefficient(sr.reynolds(), s.innerDiameter()) : 0;
+                fittings.add(new String[] {
+                    s.name(),
+                    use.count() + " × " + use.fitting().description(),
+                    use.fitting().method(),
+                    Quantities.formatNumber(k),
+                    use.fitting().source()
+                });
+            }
+            if (s.extraLossCoefficient() > 0) {
+                fittings.add(new String[] {
+                    s.name(), "additional K", "given in project", Quantities.formatNumber(s.extraLossCoefficient()), ""
+                });
+            }
+        }
+        if (!fittings.isEmpty()) {
+            pdf.space(4);
+            pdf.table(
+                    new String[] {"Segment", "Fitting", "Method", "K each", "Source"},
+                    fittings,
+                    new float[] {0.15f, 0.3f, 0.15f, 0.08f, 0.32f},
+                    SMALL);
+        }
+
+        // Results
+        pdf.heading("Results at the design flow", 12);
+        String h = Quantities.unitSymbol(QuantityKind.HEAD, u);
+        List<String[]> res = new ArrayList<>();
+        for (SegmentResult s : r.segments()) {
+            res.add(new String[] {
+                s.name(),
+                n(Quantities.fromSi(s.velocity(), QuantityKind.VELOCITY, u)),
+                n(s.reynolds()),
+                s.regime().name().toLowerCase(Locale.ROOT),
+                n(s.relativeRoughness()),
+                n(s.frictionFactor()) + " (" + s.frictionMethod() + ")",
+                n(Quantities.fromSi(s.majorHeadLoss(), QuantityKind.HEAD, u)),
+                n(s.totalLossCoefficient()),
+                n(Quantities.fromSi(s.minorHeadLoss(), QuantityKind.HEAD, u))
+            });
+        }
+        pdf.table(
+                new String[] {
+                    "Segment",
+                    "V [" + Quantities.unitSymbol(QuantityKind.VELOCITY, u) + "]",
+                    "Re",
+                    "Regime",
+                    "ε/D",
+                    "f (method)",
+                    "h_f [" + h + "]",
+                    "ΣK",
+                    "h_m [" + h + "]"
+                },
+                res,
+                new float[] {0.16f, 0.08f, 0.1f, 0.1f, 0.09f, 0.17f, 0.1f, 0.08f, 0.12f},
+                SMALL);
+        List<String[]> totals = new ArrayList<>();
+        totals.add(row("Friction loss Σh_f", q(r.totals().frictionHeadLoss(), QuantityKind.HEAD, u), ""));
+        totals.add(row("Fitting loss Σh_m", q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u), ""));
+        totals.add(row("Static head", q(r.totals().staticHead(), QuantityKind.HEAD, u), "elevation and end heads"));
+        totals.add(row("Total head H", q(r.totals().totalHead(), QuantityKind.HEAD, u), "what the pump must supply"));
+        totals.add(row(
+                "Pressure drop",
+                q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u),
+                "ρ g (Σh_f + Σh_m)"));
+        r.npshAvailable().ifPresent(v -> totals.add(row("NPSH available", q(v, QuantityKind.HEAD, u), "at the pump inlet")));
+        if (sheet.operatingPoint() != null) {
+            var op = sheet.operatingPoint();
+            totals.add(row(
+                    "Pump operating point",
+                    op.found()
+                            ? q(op.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at " + q(op.head(), QuantityKind.HEAD, u)
+                            : "none",
+                    op.message()));
+        }
+        if (sheet.band() != null) {
+            var b = sheet.band();
+            totals.add(row(
+                    "Head-loss band",
+                    q(b.headLoss().nominal(), QuantityKind.HEAD, u) + " (" + q(b.headLoss().low(), QuantityKind.HEAD, u)
+                            + " to " + q(b.headLoss().high(), QuantityKind.HEAD, u) + ")",
+                    "roughness range and flow ±" + Quantities.formatNumber(b.flowUncertainty() * 100) + " %"));
+            totals.add(row(
+                    "Total-head band",
+                    q(b.totalHead().low(), QuantityKind.HEAD, u) + " to " + q(b.totalHead().high(), QuantityKind.HEAD, u),
+                    "same corners"));
+        }
+        pdf.space(4);
+        pdf.table(new String[] {"Total", "Value", "Note"}, totals, new float[] {0.25f, 0.35f, 0.4f}, BODY);
+
+        // Charts
+        pdf.heading("Charts", 12);
+        chart(pdf, SheetCharts.system(sheet, u));
+        chart(pdf, SheetCharts.grades(sheet, u));
+        chart(pdf, SheetCharts.friction(sheet));
+
+        // Methods
+        pdf.heading("Methods", 12);
+        for (Method m : sheet.methods()) {
+            pdf.paragraph(m.name(), pdf.bold, BODY, PdfLayout.MARGIN, pdf.width());
+            pdf.paragraph("    " + m.equation(), pdf.regular, BODY, PdfLayout.MARGIN + 8, pdf.width() - 8);
+            pdf.paragraph("    " + m.citation(), pdf.regular, SMALL, PdfLayout.MARGIN + 8, pdf.width() - 8);
+            pdf.space(3);
+        }
+        pdf.heading("Assumptions", 12);
+        pdf.paragraph(
+                "Steady, incompressible, isothermal flow of a Newtonian liquid filling every pipe. Elevations are"
+                        + " measured from the run inlet. Velocity at the source and delivery ends is neglected; a"
+                        + " discharge into a tank carries its exit loss as a fitting. Minor losses use the K of each"
+                        + " fitting referred to the velocity in its own segment. Fluid properties are evaluated once"
+                        + " at the run temperature. Gravity is standard gravity.",
+                BODY);
+
+        pdf.heading("Cautions", 12);
+        for (Caution c : sheet.cautions()) {
+            pdf.paragraph(
+                    "• [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + c.message() + " (basis: " + c.basis()
+                            + ")",
+                    BODY);
+        }
+        pdf.footers("Headway " + sheet.version() + " · input hash " + sheet.inputHash().substring(0, 16)
+                + " · estimates for design review; check against local codes");
+    }
+
+    private static void chart(PdfLayout pdf, JFreeChart chart) throws IOException {
+        PdfBoxGraphics2D g = new PdfBoxGraphics2D(pdf.doc, CHART_WIDTH, CHART_HEIGHT);
+        try {
+            chart.draw(g, new Rectangle2D.Double(0, 0, CHART_WIDTH, CHART_HEIGHT));
+        } finally {
+            g.dispose();
+        }
+        PDFormXObject form = g.getXFormObject();
+        pdf.form(form, CHART_WIDTH, CHART_HEIGHT);
+    }
+
+    private static String[] row(String a, String b, String c) {
+        return new String[] {a, b, c};
+    }
+
+    private static String blank(String s) {
+        return s == null || s.isEmpty() ? "______________________" : s;
+    }
+
+    private static String end(double level, double pressure, UnitSystem u) {
+        return "level " + q(level, QuantityKind.LENGTH, u) + ", " + q(pressure, QuantityKind.PRESSURE, u);
+    }
+
+    private static String q(double si, QuantityKind kind, UnitSystem u) {
+        return Quantities.format(si, kind, u);
+    }
+
+    private static String n(double v) {
+        return Quantities.formatNumber(v);
+    }
+
+}
