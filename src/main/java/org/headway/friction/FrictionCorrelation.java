@@ -33,4 +33,17 @@ public interface FrictionCorrelation {
      * @return the friction factor with regime, method, iterations and cautions
      */
     FrictionResult evaluate(double reynolds, double relativeRoughness);
+
+    /**
+     * The friction factor alone, for loops that evaluate many points (system curves). The same
+     * value as {@code evaluate(reynolds, relativeRoughness).frictionFactor()}; implementations
+     * override it to skip building the result and its cautions.
+     *
+     * @param reynolds Reynolds number (ratio), finite and positive
+     * @param relativeRoughness ε/D (ratio), 0 ≤ ε/D &lt; 1
+     * @return the Darcy friction factor (ratio)
+     */
+    default double frictionFactor(double reynolds, double relativeRoughness) {
+        return evaluate(reynolds, relativeRoughness).frictionFactor();
+    }
 }
