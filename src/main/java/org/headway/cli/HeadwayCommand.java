@@ -18,7 +18,8 @@ import picocli.CommandLine.Command;
             CommandLine.HelpCommand.class,
             DemoCommand.class,
             SolveCommand.class,
-            SheetCommand.class
+            SheetCommand.class,
+            FluidCommand.class
         })
 public final class HeadwayCommand implements Runnable {
 
