@@ -19,7 +19,8 @@ import picocli.CommandLine.Command;
             DemoCommand.class,
             SolveCommand.class,
             SheetCommand.class,
-            FluidCommand.class
+            FluidCommand.class,
+            CatalogCommand.class
         })
 public final class HeadwayCommand implements Runnable {
 

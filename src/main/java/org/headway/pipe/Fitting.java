@@ -1,5 +1,8 @@
 package org.headway.pipe;
 
+import java.util.List;
+import org.headway.caution.Caution;
+
 /**
  * A fitting or valve with its loss-coefficient method (fixed K, 2-K or 3-K).
  *
@@ -27,4 +30,16 @@ public interface Fitting {
      * @return K (ratio), finite and non-negative
      */
     double lossCoefficient(double reynolds, double innerDiameter);
+
+    /**
+     * What a reviewer should know about using this fitting's K at the given conditions, e.g. a
+     * fixed K used in laminar flow. Empty when the conditions lie inside the method's stated range.
+     *
+     * @param reynolds Reynolds number in the pipe (ratio), positive
+     * @param innerDiameter pipe inner diameter (m), positive
+     * @return cautions, possibly empty, never null
+     */
+    default List<Caution> cautions(double reynolds, double innerDiameter) {
+        return List.of();
+    }
 }

@@ -1,0 +1,111 @@
+package org.headway.pipe;
+
+import java.util.List;
+import java.util.Locale;
+import org.headway.caution.Caution;
+import org.headway.caution.InputException;
+
+/**
+ * Hooper's two-constant fitting loss coefficient, which grows at low Reynolds number and in small
+ * pipes.
+ *
+ * <p>K = K₁/Re + K∞ (1 + 1/D), with Re the pipe Reynolds number (ratio), D the pipe inner diameter in
+ * inches, K₁ and K∞ tabulated per fitting (ratio). K is referred to the pipe velocity.
+ *
+ * <p>Validity: the author presents the method for laminar through turbulent flow in commercial pipe
+ * sizes; this class flags inner diameters outside {@link #DIAMETER_LOW_INCHES}–{@link
+ * #DIAMETER_HIGH_INCHES} in (the span of the usual fitting tables, from memory) with a Caution.
+ *
+ * <p>Citation: Hooper, W.B. (1981), "The two-K method predicts head losses in pipe fittings",
+ * Chemical Engineering, Aug. 24, 1981, pp. 96–100 (equation and coefficient table).
+ */
+public final class TwoK implements Fitting {
+
+    /** Smallest inner diameter the tables cover (in), from memory. */
+    public static final double DIAMETER_LOW_INCHES = 0.25;
+    /** Largest inner diameter the tables cover (in), from memory. */
+    public static final double DIAMETER_HIGH_INCHES = 24.0;
+
+    private final String id;
+    private final String description;
+    private final double laminarCoefficient;
+    private final double turbulentCoefficient;
+    private final String source;
+
+    /**
+     * @param id stable id
+     * @param description plain-words description
+     * @param laminarCoefficient K₁ (ratio), not negative
+     * @param turbulentCoefficient K∞ (ratio), not negative
+     * @param source publication and table the coefficients come from
+     */
+    public TwoK(String id, String description, double laminarCoefficient, double turbulentCoefficient, String source) {
+        this.id = FittingChecks.requireText("id", id);
+        this.description = FittingChecks.requireText("description", description);
+        this.laminarCoefficient = InputException.requireNonNegative("k1", laminarCoefficient);
+        this.turbulentCoefficient = InputException.requireNonNegative("k_inf", turbulentCoefficient);
+        this.source = FittingChecks.requireText("source", source);
+    }
+
+    @Override
+    public String id() {
+        return id;
+    }
+
+    @Override
+    public String description() {
+        return description;
+    }
+
+    @Override
+    public String method() {
+        return "2-K (Hooper 1981)";
+    }
+
+    @Override
+    public String source() {
+        return source;
+    }
+
+    /** K₁ (ratio). */
+    public double laminarCoefficient() {
+        return laminarCoefficient;
+    }
+
+    /** K∞ (ratio). */
+    public double turbulentCoefficient() {
+        return turbulentCoefficient;
+    }
+
+    @Override
+    public double lossCoefficient(double reynolds, double innerDiameter) {
+        FittingChecks.requireFlow(reynolds, innerDiameter);
+        double inches = innerDiameter / FittingChecks.METRES_PER_INCH;
+        return laminarCoefficient / reynolds + turbulentCoefficient * (1.0 + 1.0 / inches);
+    }
+
+    @Override
+    public List<Caution> cautions(double reynolds, double innerDiameter) {
+        FittingChecks.requireFlow(reynolds, innerDiameter);
+        double inches = innerDiameter / FittingChecks.METRES_PER_INCH;
+        if (inches < DIAMETER_LOW_INCHES || inches > DIAMETER_HIGH_INCHES) {
+            return List.of(Caution.warning(
+                    "fitting-size-outside-data",
+                    String.format(
+                            Locale.ROOT,
+                            "%s: inner diameter %.2f in lies outside %.2f–%.0f in covered by the 2-K tables;"
+                                    + " K is extrapolated.",
+                            id,
+                            inches,
+                            DIAMETER_LOW_INCHES,
+                            DIAMETER_HIGH_INCHES),
+                    "Hooper 1981 (range from memory)"));
+        }
+        return List.of();
+    }
+
+    @Override
+    public String toString() {
+        return id + " (2-K: K1 = " + laminarCoefficient + ", Kinf = " + turbulentCoefficient + ")";
+    }
+}
