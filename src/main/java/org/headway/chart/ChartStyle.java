@@ -57,8 +57,7 @@ public final class ChartStyle {
 
     /** Dashed line of a width. */
     public static Stroke dashed(float width) {
-        return new BasicStroke(
-                width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {6f, 4f}, 0f);
+        return new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 1f, new float[] {6f, 4f}, 0f);
     }
 
     /** Applies the common look to a chart with an XY plot. */

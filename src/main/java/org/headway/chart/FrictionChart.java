@@ -118,7 +118,7 @@ public final class FrictionChart {
         reAxis.setRange(spec.minReynolds(), spec.maxReynolds());
         reAxis.setSmallestValue(1e-300);
         LogarithmicAxis fAxis = new LogarithmicAxis("Darcy friction factor f");
-        fAxis.setRange(0.006, 0.11);
+        fAxis.setRange(0.005, 0.11);
         fAxis.setStrictValuesFlag(false);
         fAxis.setAutoRangeNextLogFlag(false);
 
@@ -143,7 +143,8 @@ public final class FrictionChart {
                     low.add(re, f);
                 }
             }
-            double edge = spec.method().evaluate(FlowRegimes.TURBULENT_LIMIT, rr).frictionFactor();
+            double edge =
+                    spec.method().evaluate(FlowRegimes.TURBULENT_LIMIT, rr).frictionFactor();
             low.add(FlowRegimes.TURBULENT_LIMIT, edge);
             curves.addSeries(s);
             curvesLow.addSeries(low);
@@ -244,15 +245,24 @@ public final class FrictionChart {
         XYSeriesCollection ops = new XYSeriesCollection();
         if (!spec.operatingPoints().isEmpty()) {
             XYSeries os = new XYSeries("pipe-run segments", false, true);
+            // Segments at the same point (same bore and flow) share one marker and one label.
+            java.util.Map<String, List<String>> labels = new java.util.LinkedHashMap<>();
+            java.util.Map<String, double[]> where = new java.util.HashMap<>();
             for (MarkedPoint p : spec.operatingPoints()) {
                 if (p.reynolds() > 0 && p.frictionFactor() > 0) {
-                    os.add(p.reynolds(), p.frictionFactor());
-                    XYTextAnnotation a = new XYTextAnnotation(" " + p.label(), p.reynolds(), p.frictionFactor());
-                    a.setFont(ChartStyle.FONT.deriveFont(Font.BOLD, 10f));
-                    a.setTextAnchor(TextAnchor.BOTTOM_LEFT);
-                    a.setPaint(new Color(0x8A2F1B));
-                    plot.addAnnotation(a);
+                    String key = String.format(java.util.Locale.ROOT, "%.4g|%.4g", p.reynolds(), p.frictionFactor());
+                    labels.computeIfAbsent(key, k -> new ArrayList<>()).add(p.label());
+                    where.putIfAbsent(key, new double[] {p.reynolds(), p.frictionFactor()});
                 }
+            }
+            for (var e : labels.entrySet()) {
+                double[] at = where.get(e.getKey());
+                os.add(at[0], at[1]);
+                XYTextAnnotation a = new XYTextAnnotation("  " + String.join(", ", e.getValue()), at[0], at[1]);
+                a.setFont(ChartStyle.FONT.deriveFont(Font.BOLD, 9f));
+                a.setTextAnchor(TextAnchor.CENTER_LEFT);
+                a.setPaint(new Color(0x8A2F1B));
+                plot.addAnnotation(a);
             }
             ops.addSeries(os);
         }

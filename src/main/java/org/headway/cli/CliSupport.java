@@ -27,7 +27,8 @@ final class CliSupport {
     static double[] curveRange(String text) {
         String[] parts = text.split(":");
         if (parts.length != 3) {
-            throw new InputException("--curve", "expected QMIN:QMAX:N such as \"0 L/s:20 L/s:11\", got \"" + text + "\"");
+            throw new InputException(
+                    "--curve", "expected QMIN:QMAX:N such as \"0 L/s:20 L/s:11\", got \"" + text + "\"");
         }
         double min = Quantities.parse(parts[0].strip(), QuantityKind.VOLUMETRIC_FLOW, "--curve QMIN");
         double max = Quantities.parse(parts[1].strip(), QuantityKind.VOLUMETRIC_FLOW, "--curve QMAX");
@@ -39,5 +40,4 @@ final class CliSupport {
         }
         return new double[] {min, max, n};
     }
-
 }

@@ -45,7 +45,11 @@ public final class DemoCommand implements Callable<Integer> {
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
 
-    @Option(names = "--reports", paramLabel = "DIR", defaultValue = "reports", description = "Folder for the sheet (default ${DEFAULT-VALUE}).")
+    @Option(
+            names = "--reports",
+            paramLabel = "DIR",
+            defaultValue = "reports",
+            description = "Folder for the sheet (default ${DEFAULT-VALUE}).")
     Path reports;
 
     @Override
@@ -54,13 +58,13 @@ public final class DemoCommand implements Callable<Integer> {
         out.println("Headway demo — invented data, for demonstration only.");
         out.println();
         out.println("1. Friction factors for a few invented cases");
-        out.printf("   %-10s %-10s %-14s %-12s %s%n", "Re", "ε/D", "method", "f", "regime");
+        out.printf("   %-10s %-10s %-20s %-12s %s%n", "Re", "ε/D", "method", "f", "regime");
         double[][] cases = {{1500, 0}, {3000, 1e-4}, {5e4, 0}, {2e5, 2.5e-4}, {1e6, 1e-3}, {1e7, 0.01}};
         for (double[] c : cases) {
             FrictionResult fr = FrictionMethods.byId("auto").evaluate(c[0], c[1]);
             out.printf(
                     java.util.Locale.ROOT,
-                    "   %-10.4g %-10.3g %-14s %-12.6f %s%n",
+                    "   %-10.4g %-10.3g %-20s %-12.6f %s%n",
                     c[0],
                     c[1],
                     fr.method(),
@@ -71,7 +75,8 @@ public final class DemoCommand implements Callable<Integer> {
         out.println("2. Pipe run: " + DEMO_PROJECT.substring(1));
         Project project = ProjectFile.parse(resource(DEMO_PROJECT));
         ResolvedProject resolved = ProjectResolver.resolve(project, Catalog.bundled(), Path.of("."));
-        RunResult result = HeadLossCalculator.solve(resolved.run(), resolved.run().designFlow());
+        RunResult result =
+                HeadLossCalculator.solve(resolved.run(), resolved.run().designFlow());
         OperatingPoint op = resolved.run().pump().isPresent() ? OperatingPoint.find(resolved.run()) : null;
         RunText.print(
                 out,

@@ -82,10 +82,11 @@ final class RunText {
                     + Quantities.formatNumber(band.flowUncertainty() * 100) + " %)");
         }
         if (operating != null) {
-            out.println("Pump: " + (operating.found()
-                    ? "operating point " + q(operating.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
-                            + q(operating.head(), QuantityKind.HEAD, u)
-                    : operating.message()));
+            out.println("Pump: "
+                    + (operating.found()
+                            ? "operating point " + q(operating.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
+                                    + q(operating.head(), QuantityKind.HEAD, u)
+                            : operating.message()));
             for (Caution c : operating.cautions()) {
                 out.println("  caution: " + c.message());
             }

@@ -48,10 +48,16 @@ public final class SheetCommand implements Callable<Integer> {
     @Option(names = "--force", description = "Replace existing files.")
     boolean force;
 
-    @Option(names = "--units", defaultValue = "si", description = "Units on the PDF: si or us (default ${DEFAULT-VALUE}).")
+    @Option(
+            names = "--units",
+            defaultValue = "si",
+            description = "Units on the PDF: si or us (default ${DEFAULT-VALUE}).")
     String units;
 
-    @Option(names = "--catalog", paramLabel = "DIR", description = "Folder of catalog files to add to the bundled ones.")
+    @Option(
+            names = "--catalog",
+            paramLabel = "DIR",
+            description = "Folder of catalog files to add to the bundled ones.")
     Path catalogFolder;
 
     @Override

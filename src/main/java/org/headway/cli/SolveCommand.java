@@ -1,14 +1,9 @@
 package org.headway.cli;
 
-import com.fasterxml.jackson.databind.node.ArrayNode;
-import com.fasterxml.jackson.databind.node.JsonNodeFactory;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
-import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 import org.headway.pipe.Catalog;
 import org.headway.project.ProjectFile;
@@ -59,7 +54,10 @@ public final class SolveCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "PROJECT.json", description = "Project file.")
     Path project;
 
-    @Option(names = "--mode", defaultValue = "headloss", description = "headloss, flow or size (default ${DEFAULT-VALUE}).")
+    @Option(
+            names = "--mode",
+            defaultValue = "headloss",
+            description = "headloss, flow or size (default ${DEFAULT-VALUE}).")
     Mode mode;
 
     @Option(
@@ -78,10 +76,16 @@ public final class SolveCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text, json or csv (default ${DEFAULT-VALUE}).")
     Format format;
 
-    @Option(names = "--units", defaultValue = "si", description = "Text output units: si or us (default ${DEFAULT-VALUE}).")
+    @Option(
+            names = "--units",
+            defaultValue = "si",
+            description = "Text output units: si or us (default ${DEFAULT-VALUE}).")
     String units;
 
-    @Option(names = "--catalog", paramLabel = "DIR", description = "Folder of catalog files to add to the bundled ones.")
+    @Option(
+            names = "--catalog",
+            paramLabel = "DIR",
+            description = "Folder of catalog files to add to the bundled ones.")
     Path catalogFolder;
 
     @Override
@@ -117,7 +121,8 @@ public final class SolveCommand implements Callable<Integer> {
                 sizeChecks = selection.candidates();
                 run = selection.run();
                 result = HeadLossCalculator.solve(run, run.designFlow());
-                modeNote = selection.chosen()
+                modeNote = selection
+                        .chosen()
                         .map(c -> "smallest size meeting the limits: " + c.label())
                         .orElse("no candidate size meets the limits");
             }
@@ -135,8 +140,9 @@ public final class SolveCommand implements Callable<Integer> {
         UncertaintyBand band = run.designFlow() > 0 && mode == Mode.headloss ? UncertaintyBand.evaluate(run) : null;
 
         switch (format) {
-            case json -> out.println(
-                    RunJson.toJson(run, result, mode.name(), modeNote, curvePoints, operating, band, sizeChecks));
+            case json ->
+                out.println(
+                        RunJson.toJson(run, result, mode.name(), modeNote, curvePoints, operating, band, sizeChecks));
             case csv -> {
                 try {
                     org.headway.report.CsvSheetWriter.write(result.segments(), out);
@@ -144,8 +150,9 @@ public final class SolveCommand implements Callable<Integer> {
                     throw new java.io.UncheckedIOException(e);
                 }
             }
-            default -> RunText.print(
-                    out, run, result, system, mode.name(), modeNote, curvePoints, operating, band, sizeChecks);
+            default ->
+                RunText.print(
+                        out, run, result, system, mode.name(), modeNote, curvePoints, operating, band, sizeChecks);
         }
         out.flush();
         return HeadwayCommand.EXIT_OK;

@@ -88,7 +88,8 @@ public final class ProjectResolver {
         }
         List<SizeSelector.CandidateSize> candidates = new ArrayList<>();
         if (p.sizing().isPresent()) {
-            List<SizeSelector.CandidateSize> found = attempt("sizing", () -> candidates(p.sizing().get()));
+            List<SizeSelector.CandidateSize> found =
+                    attempt("sizing", () -> candidates(p.sizing().get()));
             if (found != null) {
                 candidates.addAll(found);
             }
@@ -221,9 +222,7 @@ public final class ProjectResolver {
                     vapour,
                     spec.density().isEmpty() ? state.densitySource() : given,
                     spec.viscosity().isEmpty() ? state.viscositySource() : given,
-                    spec.vapourPressure().isEmpty()
-                            ? (state == null ? "" : state.vapourPressureSource())
-                            : given,
+                    spec.vapourPressure().isEmpty() ? (state == null ? "" : state.vapourPressureSource()) : given,
                     cautions);
         }
         return state;
@@ -263,7 +262,7 @@ public final class ProjectResolver {
             roughness = material.roughness();
             low = material.roughnessLow();
             high = material.roughnessHigh();
-            String description = material.name() + ", " + size.nominal()
+            String description = material.name() + ", " + sizeLabel(size)
                     + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())) + " (" + size.table()
                     + ")";
             b.pipeDescription(description).pipeCondition(material.condition()).roughnessSource(material.source());
@@ -296,8 +295,7 @@ public final class ProjectResolver {
                     "roughness",
                     String.format(
                             "roughness %s is not smaller than the inner diameter %s",
-                            Quantities.formatNumber(roughness) + " m",
-                            Quantities.formatNumber(diameter) + " m"));
+                            Quantities.formatNumber(roughness) + " m", Quantities.formatNumber(diameter) + " m"));
         }
         b.bore(diameter, roughness).roughnessRange(Math.min(low, roughness), Math.max(high, roughness));
         for (int j = 0; j < spec.fittings().size(); j++) {
@@ -331,6 +329,12 @@ public final class ProjectResolver {
             b.elevationChange(Quantities.parse(spec.elevationChange(), QuantityKind.LENGTH, "elevationChange"));
         }
         return b.build();
+    }
+
+    /** "NPS 4" for the tables that use nominal pipe size, the bare nominal size otherwise. */
+    static String sizeLabel(PipeSize size) {
+        boolean nps = size.table().startsWith("asme-b36") || size.table().equals("astm-d1785");
+        return (nps ? "NPS " : "") + size.nominal();
     }
 
     private static String scheduleLabel(String schedule) {
@@ -395,13 +399,12 @@ public final class ProjectResolver {
         List<SizeSelector.CandidateSize> list = new ArrayList<>();
         for (PipeSize size : catalog.sizes(material.sizeTable(), spec.schedule())) {
             list.add(new SizeSelector.CandidateSize(
-                    size.nominal() + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())),
+                    sizeLabel(size) + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())),
                     size.innerDiameter()));
         }
         if (list.isEmpty()) {
             throw new InputException(
-                    "schedule",
-                    "no sizes of schedule \"" + spec.schedule() + "\" in table " + material.sizeTable());
+                    "schedule", "no sizes of schedule \"" + spec.schedule() + "\" in table " + material.sizeTable());
         }
         return list;
     }

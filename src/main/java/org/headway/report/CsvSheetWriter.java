@@ -7,8 +7,8 @@ import java.nio.file.Path;
 import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
-import org.headway.system.SegmentResult;
 import org.headway.project.AtomicFiles;
+import org.headway.system.SegmentResult;
 
 /** Writes the per-segment results as CSV: one header row with units, SI values, round-trippable numbers. */
 public final class CsvSheetWriter {
@@ -42,7 +42,8 @@ public final class CsvSheetWriter {
 
     /** Writes the table to a writer (used by the CLI for stdout too). */
     public static void write(Iterable<SegmentResult> segments, Appendable w) throws java.io.IOException {
-        CSVPrinter p = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+        CSVPrinter p = new CSVPrinter(
+                w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
         p.printRecord((Object[]) HEADER);
         for (SegmentResult s : segments) {
             p.printRecord(

@@ -146,7 +146,8 @@ public record HeadLossSheet(
         list.add(new Method(
                 "Fluid properties",
                 "ρ, μ at the run temperature and pressure",
-                "density: " + run.fluid().densitySource() + "; viscosity: " + run.fluid().viscositySource()
+                "density: " + run.fluid().densitySource() + "; viscosity: "
+                        + run.fluid().viscositySource()
                         + (run.fluid().vapourPressureSource().isEmpty()
                                 ? ""
                                 : "; vapour pressure: " + run.fluid().vapourPressureSource())));

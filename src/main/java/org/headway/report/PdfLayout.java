@@ -79,7 +79,12 @@ final class PdfLayout implements AutoCloseable {
     }
 
     void heading(String text, float size) throws IOException {
-        ensure(size * 2.2f);
+        heading(text, size, 60f);
+    }
+
+    /** A heading kept on the same page as at least {@code keepWith} points of what follows it. */
+    void heading(String text, float size, float keepWith) throws IOException {
+        ensure(size * 2.2f + keepWith);
         y -= size * 0.6f;
         write(text, bold, size, MARGIN, y - size, INK);
         y -= size * 1.5f;

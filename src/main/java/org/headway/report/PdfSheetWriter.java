@@ -87,9 +87,13 @@ public final class PdfSheetWriter {
         List<String[]> fluid = new ArrayList<>();
         fluid.add(row("Fluid", f.fluid(), ""));
         fluid.add(row("Temperature", q(f.temperature(), QuantityKind.TEMPERATURE, u), "as given"));
-        fluid.add(row("Pressure (absolute)", q(f.pressure(), QuantityKind.PRESSURE, u), "as given or standard atmosphere"));
+        fluid.add(row(
+                "Pressure (absolute)", q(f.pressure(), QuantityKind.PRESSURE, u), "as given or standard atmosphere"));
         fluid.add(row("Density ρ", q(f.density(), QuantityKind.DENSITY, u), f.densitySource()));
-        fluid.add(row("Dynamic viscosity μ", q(f.dynamicViscosity(), QuantityKind.DYNAMIC_VISCOSITY, u), f.viscositySource()));
+        fluid.add(row(
+                "Dynamic viscosity μ",
+                q(f.dynamicViscosity(), QuantityKind.DYNAMIC_VISCOSITY, u),
+                f.viscositySource()));
         fluid.add(row("Kinematic viscosity ν", q(f.kinematicViscosity(), QuantityKind.KINEMATIC_VISCOSITY, u), "μ/ρ"));
         if (f.vapourPressure().isPresent()) {
             fluid.add(row(
@@ -97,17 +101,27 @@ public final class PdfSheetWriter {
                     q(f.vapourPressure().getAsDouble(), QuantityKind.PRESSURE, u),
                     f.vapourPressureSource()));
         }
-        fluid.add(row("Design flow Q", q(run.designFlow(), QuantityKind.VOLUMETRIC_FLOW, u),
+        fluid.add(row(
+                "Design flow Q",
+                q(run.designFlow(), QuantityKind.VOLUMETRIC_FLOW, u),
                 "flow uncertainty ±" + Quantities.formatNumber(run.flowUncertainty() * 100) + " %"));
-        fluid.add(row("Friction method", run.friction().displayName(), run.friction().id()));
-        fluid.add(row("Source end", end(run.source().level(), run.source().pressure(), u), "level above pipe inlet; gauge pressure"));
-        fluid.add(row("Delivery end", end(run.delivery().level(), run.delivery().pressure(), u), "level above pipe outlet; gauge pressure"));
+        fluid.add(row(
+                "Friction method", run.friction().displayName(), run.friction().id()));
+        fluid.add(row(
+                "Source end",
+                end(run.source().level(), run.source().pressure(), u),
+                "level above pipe inlet; gauge pressure"));
+        fluid.add(row(
+                "Delivery end",
+                end(run.delivery().level(), run.delivery().pressure(), u),
+                "level above pipe outlet; gauge pressure"));
         if (run.pump().isPresent()) {
             var pump = run.pump().get();
             fluid.add(row(
                     "Pump",
                     pump.name() + ", upstream of segment " + (run.pumpPosition() + 1),
-                    pump.points().size() + " points, quadratic fit R² = " + String.format(Locale.ROOT, "%.5f", pump.rSquared())
+                    pump.points().size() + " points, quadratic fit R² = "
+                            + String.format(Locale.ROOT, "%.5f", pump.rSquared())
                             + pump.npshRequired().stream()
                                     .mapToObj(v -> ", NPSH required " + q(v, QuantityKind.HEAD, u))
                                     .findFirst()
@@ -116,9 +130,10 @@ public final class PdfSheetWriter {
         pdf.table(new String[] {"Quantity", "Value", "Source / note"}, fluid, new float[] {0.25f, 0.3f, 0.45f}, BODY);
 
         List<String[]> pipes = new ArrayList<>();
-        for (Segment s : run.segments()) {
+        for (int i = 0; i < run.segments().size(); i++) {
+            Segment s = run.segments().get(i);
             pipes.add(new String[] {
-                s.name(),
+                (i + 1) + ". " + s.name(),
                 q(s.length(), QuantityKind.LENGTH, u),
                 s.pipeDescription(),
                 q(s.innerDiameter(), QuantityKind.DIAMETER, u),
@@ -168,9 +183,10 @@ public final class PdfSheetWriter {
         pdf.heading("Results at the design flow", 12);
         String h = Quantities.unitSymbol(QuantityKind.HEAD, u);
         List<String[]> res = new ArrayList<>();
-        for (SegmentResult s : r.segments()) {
+        for (int i = 0; i < r.segments().size(); i++) {
+            SegmentResult s = r.segments().get(i);
             res.add(new String[] {
-                s.name(),
+                (i + 1) + ". " + s.name(),
                 n(Quantities.fromSi(s.velocity(), QuantityKind.VELOCITY, u)),
                 n(s.reynolds()),
                 s.regime().name().toLowerCase(Locale.ROOT),
@@ -201,17 +217,16 @@ public final class PdfSheetWriter {
         totals.add(row("Fitting loss Σh_m", q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u), ""));
         totals.add(row("Static head", q(r.totals().staticHead(), QuantityKind.HEAD, u), "elevation and end heads"));
         totals.add(row("Total head H", q(r.totals().totalHead(), QuantityKind.HEAD, u), "what the pump must supply"));
-        totals.add(row(
-                "Pressure drop",
-                q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u),
-                "ρ g (Σh_f + Σh_m)"));
-        r.npshAvailable().ifPresent(v -> totals.add(row("NPSH available", q(v, QuantityKind.HEAD, u), "at the pump inlet")));
+        totals.add(row("Pressure drop", q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u), "ρ g (Σh_f + Σh_m)"));
+        r.npshAvailable()
+                .ifPresent(v -> totals.add(row("NPSH available", q(v, QuantityKind.HEAD, u), "at the pump inlet")));
         if (sheet.operatingPoint() != null) {
             var op = sheet.operatingPoint();
             totals.add(row(
                     "Pump operating point",
                     op.found()
-                            ? q(op.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at " + q(op.head(), QuantityKind.HEAD, u)
+                            ? q(op.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
+                                    + q(op.head(), QuantityKind.HEAD, u)
                             : "none",
                     op.message()));
         }
@@ -219,19 +234,21 @@ public final class PdfSheetWriter {
             var b = sheet.band();
             totals.add(row(
                     "Head-loss band",
-                    q(b.headLoss().nominal(), QuantityKind.HEAD, u) + " (" + q(b.headLoss().low(), QuantityKind.HEAD, u)
-                            + " to " + q(b.headLoss().high(), QuantityKind.HEAD, u) + ")",
+                    q(b.headLoss().nominal(), QuantityKind.HEAD, u) + " ("
+                            + q(b.headLoss().low(), QuantityKind.HEAD, u) + " to "
+                            + q(b.headLoss().high(), QuantityKind.HEAD, u) + ")",
                     "roughness range and flow ±" + Quantities.formatNumber(b.flowUncertainty() * 100) + " %"));
             totals.add(row(
                     "Total-head band",
-                    q(b.totalHead().low(), QuantityKind.HEAD, u) + " to " + q(b.totalHead().high(), QuantityKind.HEAD, u),
+                    q(b.totalHead().low(), QuantityKind.HEAD, u) + " to "
+                            + q(b.totalHead().high(), QuantityKind.HEAD, u),
                     "same corners"));
         }
         pdf.space(4);
         pdf.table(new String[] {"Total", "Value", "Note"}, totals, new float[] {0.25f, 0.35f, 0.4f}, BODY);
 
         // Charts
-        pdf.heading("Charts", 12);
+        pdf.heading("Charts", 12, CHART_HEIGHT * pdf.width() / CHART_WIDTH);
         chart(pdf, SheetCharts.system(sheet, u));
         chart(pdf, SheetCharts.grades(sheet, u));
         chart(pdf, SheetCharts.friction(sheet));
@@ -260,8 +277,8 @@ public final class PdfSheetWriter {
                             + ")",
                     BODY);
         }
-        pdf.footers("Headway " + sheet.version() + " · input hash " + sheet.inputHash().substring(0, 16)
-                + " · estimates for design review; check against local codes");
+        pdf.footers("Headway " + sheet.version() + " · input hash "
+                + sheet.inputHash().substring(0, 16) + " · estimates for design review; check against local codes");
     }
 
     private static void chart(PdfLayout pdf, JFreeChart chart) throws IOException {
@@ -294,5 +311,4 @@ public final class PdfSheetWriter {
     private static String n(double v) {
         return Quantities.formatNumber(v);
     }
-
 }

@@ -90,16 +90,18 @@ public final class SheetCharts {
         List<FrictionChart.MarkedPoint> points = new ArrayList<>();
         double maxRe = 1e8;
         double minRe = 1e3;
-        for (SegmentResult s : sheet.result().segments()) {
+        for (int i = 0; i < sheet.result().segments().size(); i++) {
+            SegmentResult s = sheet.result().segments().get(i);
             if (s.reynolds() > 0) {
-                points.add(new FrictionChart.MarkedPoint(s.name(), s.reynolds(), s.frictionFactor()));
+                // Numbered like the results table; full names would pile up where segments share a point.
+                points.add(new FrictionChart.MarkedPoint(String.valueOf(i + 1), s.reynolds(), s.frictionFactor()));
                 maxRe = Math.max(maxRe, s.reynolds() * 3);
                 minRe = Math.min(minRe, s.reynolds() / 3);
             }
         }
         List<Double> roughness = new ArrayList<>(FrictionChart.Spec.USUAL_ROUGHNESS);
         return FrictionChart.build(new FrictionChart.Spec(
-                "Friction factor against Reynolds number (Colebrook–White curves)",
+                "Friction factor against Reynolds number (Colebrook–White curves; squares: segments by number)",
                 FrictionMethods.byId("colebrook"),
                 roughness,
                 Math.max(minRe, 500),

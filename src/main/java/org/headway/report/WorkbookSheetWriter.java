@@ -7,12 +7,12 @@ import java.util.Locale;
 import org.dhatim.fastexcel.Workbook;
 import org.dhatim.fastexcel.Worksheet;
 import org.headway.caution.Caution;
+import org.headway.project.AtomicFiles;
 import org.headway.system.Gravity;
 import org.headway.system.PipeRun;
 import org.headway.system.RunResult;
 import org.headway.system.Segment;
 import org.headway.system.SegmentResult;
-import org.headway.project.AtomicFiles;
 
 /**
  * Writes the head-loss workbook (.xlsx): an Inputs sheet of SI values and a Results sheet whose
@@ -89,8 +89,11 @@ public final class WorkbookSheetWriter {
             ws.value(row, 7, SafeText.cell(s.roughnessSource()));
         }
         int note = FIRST_SEGMENT_ROW + run.segments().size() + 1;
-        ws.value(note, 0, "ΣK is Headway's value at the design flow: 2-K and 3-K fittings depend on Re and"
-                + " bore, so it does not follow a changed flow here.");
+        ws.value(
+                note,
+                0,
+                "ΣK is Headway's value at the design flow: 2-K and 3-K fittings depend on Re and"
+                        + " bore, so it does not follow a changed flow here.");
         ws.width(0, 34);
         for (int c = 1; c < 6; c++) {
             ws.width(c, 20);
@@ -114,8 +117,11 @@ public final class WorkbookSheetWriter {
         RunResult r = sheet.result();
         ws.value(0, 0, "Results — formulas on the Inputs sheet (SI units)");
         ws.style(0, 0).bold().fontSize(13).set();
-        ws.value(1, 0, "f is Headway's value (" + run.friction().displayName()
-                + "); the Swamee–Jain column is an explicit estimate for the checker.");
+        ws.value(
+                1,
+                0,
+                "f is Headway's value (" + run.friction().displayName()
+                        + "); the Swamee–Jain column is an explicit estimate for the checker.");
         String[] header = {
             "segment",
             "velocity V [m/s]",
@@ -165,8 +171,18 @@ public final class WorkbookSheetWriter {
         ws.value(t, 3, "Headway value");
         String inFirst = String.valueOf(FIRST_SEGMENT_ROW + 1);
         String inLast = String.valueOf(FIRST_SEGMENT_ROW + n);
-        totalRow(ws, t + 1, "friction loss Σh_f [m]", "SUM(G" + first + ":G" + last + ")", r.totals().frictionHeadLoss());
-        totalRow(ws, t + 2, "minor loss Σh_m [m]", "SUM(H" + first + ":H" + last + ")", r.totals().minorHeadLoss());
+        totalRow(
+                ws,
+                t + 1,
+                "friction loss Σh_f [m]",
+                "SUM(G" + first + ":G" + last + ")",
+                r.totals().frictionHeadLoss());
+        totalRow(
+                ws,
+                t + 2,
+                "minor loss Σh_m [m]",
+                "SUM(H" + first + ":H" + last + ")",
+                r.totals().minorHeadLoss());
         totalRow(
                 ws,
                 t + 3,

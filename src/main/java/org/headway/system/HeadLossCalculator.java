@@ -89,6 +89,11 @@ public final class HeadLossCalculator {
                     segmentCautions.add(c.about(s.name()));
                 }
                 kTotal += fittingK(s, reynolds);
+                for (FittingUse use : s.fittings()) {
+                    for (Caution c : use.fitting().cautions(reynolds, s.innerDiameter())) {
+                        segmentCautions.add(c.about(s.name()));
+                    }
+                }
             }
             double major = s.length() == 0 ? 0 : f * s.length() / s.innerDiameter() * velocityHead;
             double minorLoss = kTotal * velocityHead;

@@ -67,15 +67,24 @@ class HeadLossCalculatorTest {
         double q = 0.009;
         RunResult a = HeadLossCalculator.solve(RunFixtures.run(WATER, "auto", List.of(whole)), q);
         RunResult b = HeadLossCalculator.solve(RunFixtures.run(WATER, "auto", List.of(first, second)), q);
-        assertEquals(a.totals().totalHead(), b.totals().totalHead(), Math.abs(a.totals().totalHead()) * EXACT);
+        assertEquals(
+                a.totals().totalHead(),
+                b.totals().totalHead(),
+                Math.abs(a.totals().totalHead()) * EXACT);
         assertEquals(a.totals().staticHead(), b.totals().staticHead(), 1e-12);
         assertEquals(
-                a.totals().frictionHeadLoss(), b.totals().frictionHeadLoss(), a.totals().frictionHeadLoss() * EXACT);
+                a.totals().frictionHeadLoss(),
+                b.totals().frictionHeadLoss(),
+                a.totals().frictionHeadLoss() * EXACT);
     }
 
     @Test
     void zeroFlowGivesStaticHeadOnly() {
-        Segment rise = Segment.builder("riser").length(50).bore(0.1, 4.5e-5).elevationChange(18).build();
+        Segment rise = Segment.builder("riser")
+                .length(50)
+                .bore(0.1, 4.5e-5)
+                .elevationChange(18)
+                .build();
         PipeRun run = RunFixtures.run(WATER, "auto", List.of(rise));
         RunResult r = HeadLossCalculator.solve(run, 0);
         assertEquals(18.0, r.totals().totalHead(), 0);
@@ -87,7 +96,11 @@ class HeadLossCalculatorTest {
     @Test
     void minorLossOfFixedKScalesWithFlowSquared() {
         // A fixed K loss is K V²/2g, exactly quadratic in flow (common practice, no source).
-        Segment valve = Segment.builder("valve").length(0).bore(0.1, 0).extraLossCoefficient(5).build();
+        Segment valve = Segment.builder("valve")
+                .length(0)
+                .bore(0.1, 0)
+                .extraLossCoefficient(5)
+                .build();
         PipeRun run = RunFixtures.run(WATER, "auto", List.of(valve));
         double h1 = HeadLossCalculator.headLossOnly(run, 0.01);
         double h2 = HeadLossCalculator.headLossOnly(run, 0.03);
@@ -111,8 +124,16 @@ class HeadLossCalculatorTest {
 
     @Test
     void gradeLinesCloseOnTheDeliveryHeadWithAPump() {
-        Segment a = Segment.builder("suction").length(10).bore(0.1, 4.5e-5).elevationChange(-1).build();
-        Segment b = Segment.builder("discharge").length(200).bore(0.08, 4.5e-5).elevationChange(20).build();
+        Segment a = Segment.builder("suction")
+                .length(10)
+                .bore(0.1, 4.5e-5)
+                .elevationChange(-1)
+                .build();
+        Segment b = Segment.builder("discharge")
+                .length(200)
+                .bore(0.08, 4.5e-5)
+                .elevationChange(20)
+                .build();
         PumpCurve pump = PumpCurve.fit(
                 "p",
                 List.of(new PumpCurve.Point(0, 40), new PumpCurve.Point(0.01, 36), new PumpCurve.Point(0.02, 25)),
@@ -137,7 +158,9 @@ class HeadLossCalculatorTest {
         assertTrue(r.npshAvailable().isPresent());
         // NPSHa = p_atm/ρg + source level − suction losses − pump elevation − p_v/ρg.
         double g = Gravity.STANDARD;
-        double expected = 2 - r.segments().get(0).headLoss() - (-1)
+        double expected = 2
+                - r.segments().get(0).headLoss()
+                - (-1)
                 + (PipeRun.STANDARD_ATMOSPHERE - 2339) / (WATER.density() * g);
         assertEquals(expected, r.npshAvailable().getAsDouble(), 1e-9);
         assertTrue(r.cautions().contains(Caution.GENERAL_REVIEW));
@@ -145,7 +168,11 @@ class HeadLossCalculatorTest {
 
     @Test
     void smallNpshMarginRaisesACavitationCaution() {
-        Segment a = Segment.builder("long suction").length(400).bore(0.05, 4.5e-5).elevationChange(4).build();
+        Segment a = Segment.builder("long suction")
+                .length(400)
+                .bore(0.05, 4.5e-5)
+                .elevationChange(4)
+                .build();
         PumpCurve pump = PumpCurve.fit(
                 "p",
                 List.of(new PumpCurve.Point(0, 30), new PumpCurve.Point(0.004, 27), new PumpCurve.Point(0.008, 20)),

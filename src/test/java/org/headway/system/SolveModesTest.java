@@ -11,9 +11,9 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import org.headway.caution.InputException;
 import org.headway.fluid.FluidState;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.junit.jupiter.api.Test;
 
 class SolveModesTest {
 
@@ -21,8 +21,16 @@ class SolveModesTest {
     private static final FluidState OIL = RunFixtures.liquid(870, 0.05, 100);
 
     private static PipeRun gravityRun(FluidState fluid, double sourceLevel, String method) {
-        Segment a = Segment.builder("a").length(150).bore(0.1, 4.5e-5).extraLossCoefficient(0.5).build();
-        Segment b = Segment.builder("b").length(300).bore(0.08, 4.5e-5).elevationChange(-6).extraLossCoefficient(1.0)
+        Segment a = Segment.builder("a")
+                .length(150)
+                .bore(0.1, 4.5e-5)
+                .extraLossCoefficient(0.5)
+                .build();
+        Segment b = Segment.builder("b")
+                .length(300)
+                .bore(0.08, 4.5e-5)
+                .elevationChange(-6)
+                .extraLossCoefficient(1.0)
                 .build();
         return new PipeRun(
                 "gravity",
@@ -56,7 +64,9 @@ class SolveModesTest {
         double flow = 2e-4; // Re ≈ 28 in the 80 mm pipe
         FlowSolver.Solution s = FlowSolver.solve(run, HeadLossCalculator.totalHead(run, flow));
         assertEquals(flow, s.flow(), flow * 1e-9);
-        assertEquals(org.headway.friction.FlowRegime.LAMINAR, s.result().segments().get(0).regime());
+        assertEquals(
+                org.headway.friction.FlowRegime.LAMINAR,
+                s.result().segments().get(0).regime());
     }
 
     @Test
@@ -69,8 +79,12 @@ class SolveModesTest {
 
     @Test
     void reverseAndNoFlowAreReported() {
-        PipeRun uphill = gravityRun(WATER, 0, "auto").withSegments(List.of(
-                Segment.builder("up").length(10).bore(0.1, 0).elevationChange(5).build()));
+        PipeRun uphill = gravityRun(WATER, 0, "auto")
+                .withSegments(List.of(Segment.builder("up")
+                        .length(10)
+                        .bore(0.1, 0)
+                        .elevationChange(5)
+                        .build()));
         FlowSolver.Solution s = FlowSolver.solve(uphill, 2);
         assertEquals(FlowSolver.Outcome.REVERSE, s.outcome());
         assertTrue(s.message().contains("back to source"), s.message());
@@ -95,7 +109,10 @@ class SolveModesTest {
             boolean ok = r.totals().totalHead() <= 30;
             for (int i = 0; i < r.segments().size(); i++) {
                 ok &= r.segments().get(i).velocity() <= 2.4;
-                ok &= r.segments().get(i).majorHeadLoss() / trial.segments().get(i).length() * 100 <= 3.0;
+                ok &= r.segments().get(i).majorHeadLoss()
+                                / trial.segments().get(i).length()
+                                * 100
+                        <= 3.0;
             }
             if (ok && (best == null || c.innerDiameter() < best.innerDiameter())) {
                 best = c;
@@ -109,8 +126,8 @@ class SolveModesTest {
     @Test
     void sizeSelectionSaysWhenNothingFits() {
         PipeRun run = gravityRun(WATER, 0, "auto").withDesignFlow(0.5);
-        SizeSelector.Selection sel = SizeSelector.select(
-                run, List.of(new SizeSelector.CandidateSize("tiny", 0.01)), DesignLimits.USUAL);
+        SizeSelector.Selection sel =
+                SizeSelector.select(run, List.of(new SizeSelector.CandidateSize("tiny", 0.01)), DesignLimits.USUAL);
         assertTrue(sel.chosen().isEmpty());
         assertFalse(sel.candidates().get(0).accepted());
     }
@@ -134,13 +151,26 @@ class SolveModesTest {
     void operatingPointLiesOnBothCurves() {
         PumpCurve pump = PumpCurve.fit(
                 "p",
-                List.of(new PumpCurve.Point(0, 45), new PumpCurve.Point(0.01, 42), new PumpCurve.Point(0.02, 33),
+                List.of(
+                        new PumpCurve.Point(0, 45),
+                        new PumpCurve.Point(0.01, 42),
+                        new PumpCurve.Point(0.02, 33),
                         new PumpCurve.Point(0.03, 18)),
                 OptionalDouble.empty());
         PipeRun base = gravityRun(WATER, 0, "auto");
         PipeRun run = new PipeRun(
-                "p", WATER, base.friction(), base.segments(), base.source(), new EndCondition(20, 0), Optional.of(pump),
-                0, PipeRun.STANDARD_ATMOSPHERE, 0.01, 0, DesignLimits.USUAL);
+                "p",
+                WATER,
+                base.friction(),
+                base.segments(),
+                base.source(),
+                new EndCondition(20, 0),
+                Optional.of(pump),
+                0,
+                PipeRun.STANDARD_ATMOSPHERE,
+                0.01,
+                0,
+                DesignLimits.USUAL);
         OperatingPoint op = OperatingPoint.find(run);
         assertTrue(op.found(), op.message());
         assertEquals(op.head(), HeadLossCalculator.totalHead(run, op.flow()), 1e-9);
@@ -155,8 +185,18 @@ class SolveModesTest {
                 OptionalDouble.empty());
         PipeRun base = gravityRun(WATER, 0, "auto");
         PipeRun run = new PipeRun(
-                "p", WATER, base.friction(), base.segments(), base.source(), new EndCondition(30, 0), Optional.of(weak),
-                0, PipeRun.STANDARD_ATMOSPHERE, 0.01, 0, DesignLimits.USUAL);
+                "p",
+                WATER,
+                base.friction(),
+                base.segments(),
+                base.source(),
+                new EndCondition(30, 0),
+                Optional.of(weak),
+                0,
+                PipeRun.STANDARD_ATMOSPHERE,
+                0.01,
+                0,
+                DesignLimits.USUAL);
         OperatingPoint op = OperatingPoint.find(run);
         assertFalse(op.found());
         assertTrue(op.message().startsWith("no intersection"), op.message());
@@ -176,7 +216,11 @@ class SolveModesTest {
 
     @Test
     void uncertaintyBandBracketsTheNominal() {
-        Segment aged = Segment.builder("aged").length(500).bore(0.1, 1.5e-4).roughnessRange(4.5e-5, 1e-3).build();
+        Segment aged = Segment.builder("aged")
+                .length(500)
+                .bore(0.1, 1.5e-4)
+                .roughnessRange(4.5e-5, 1e-3)
+                .build();
         PipeRun run = gravityRun(WATER, 0, "auto").withSegments(List.of(aged)).withDesignFlow(0.01);
         UncertaintyBand band = UncertaintyBand.evaluate(run);
         assertTrue(band.headLoss().low() < band.headLoss().nominal());
