@@ -316,7 +316,8 @@ public final class ProjectResolver {
                     fitting = catalog.fitting(fs.kind());
                 }
             } catch (InputException e) {
-                throw e.where().isEmpty() ? new InputException(path + ".kind", e.problem()) : e.at(path);
+                throw new InputException(
+                        path + (fs.lossCoefficient().isEmpty() ? ".kind" : ".lossCoefficient"), e.problem());
             }
             b.fitting(new FittingUse(fitting, fs.count()));
         }
