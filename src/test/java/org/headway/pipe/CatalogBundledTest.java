@@ -36,7 +36,7 @@ class CatalogBundledTest {
         assertEquals(List.of("asme-b36.10m", "asme-b36.19m", "astm-b88", "astm-d1785"), catalog.tables());
         Set<String> methods =
                 catalog.fittings().stream().map(Fitting::method).collect(Collectors.toCollection(TreeSet::new));
-        assertEquals(Set.of("fixed K", "2-K (Hooper 1981)", "3-K (Darby)"), methods);
+        assertEquals(Set.of("fixed K", "2-K (Hooper 1981)", "3-K (Darby 2001)"), methods);
     }
 
     /** The jar lists its files by name; a file added to fluids-data/catalog must be listed too. */
