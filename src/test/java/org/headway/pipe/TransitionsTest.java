@@ -89,6 +89,15 @@ class TransitionsTest {
     }
 
     @Test
+    void lowReynoldsIsFlagged() {
+        assertEquals(
+                "transition-low-reynolds", Transitions.cautions(3000).get(0).code());
+        assertTrue(Transitions.cautions(3000).get(0).message().contains("Re = 3000"));
+        assertTrue(Transitions.cautions(1e5).isEmpty());
+        assertThrows(InputException.class, () -> Transitions.cautions(-1));
+    }
+
+    @Test
     void badGeometryIsRejected() {
         InputException reversed = assertThrows(InputException.class, () -> Transitions.suddenExpansion(0.1, 0.05));
         assertTrue(reversed.getMessage().startsWith("downstreamDiameter: an expansion needs"), reversed.getMessage());
