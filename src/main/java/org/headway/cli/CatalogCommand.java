@@ -28,6 +28,7 @@ import picocli.CommandLine.Spec;
 @Command(
         name = "catalog",
         mixinStandardHelpOptions = true,
+        versionProvider = HeadwayCommand.Version.class,
         description = {
             "List catalog data: materials (roughness), sizes (nominal size and schedule to diameters) or"
                     + " fittings (loss-coefficient method and coefficients).",

@@ -1,6 +1,7 @@
 package org.headway.pipe;
 
 import java.util.List;
+import java.util.Locale;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 
@@ -72,7 +73,7 @@ public final class FixedK implements Fitting {
             return List.of(Caution.warning(
                     "fixed-k-low-reynolds",
                     id + ": fixed K = " + coefficient + " is a turbulent-flow value; at Re = "
-                            + String.format(java.util.Locale.ROOT, "%.0f", reynolds)
+                            + String.format(Locale.ROOT, "%.0f", reynolds)
                             + " the real loss is larger. Use a 2-K or 3-K fitting for low Reynolds numbers.",
                     "common practice, no source"));
         }

@@ -15,17 +15,17 @@ import org.headway.caution.InputException;
  *
  * <p>Validity: fitted by the author to published fitting data over laminar to turbulent flow in
  * commercial sizes; this class flags inner diameters outside {@link #DIAMETER_LOW_INCHES}–{@link
- * #DIAMETER_HIGH_INCHES} in (the span of the data, from memory) with a Caution.
+ * #DIAMETER_HIGH_INCHES} in (an assumed span of common fitting sizes, no source) with a Caution.
  *
- * <p>Citation: Darby, R. (1999), "Correlate pressure drops through fittings", Chemical Engineering
- * 106(7), 101–104; coefficient table repeated in Darby, R., Chemical Engineering Fluid Mechanics, 2nd
- * ed., Marcel Dekker, 2001 (from memory; table number not checked).
+ * <p>Citation: Darby, R., Chemical Engineering Fluid Mechanics, 2nd ed., Marcel Dekker, 2001, 3-K
+ * coefficient table; first published as Darby, R. (1999), "Correlate pressure drops through
+ * fittings", Chemical Engineering 106(7), 101–104 (both from memory; table number not checked).
  */
 public final class ThreeK implements Fitting {
 
-    /** Smallest inner diameter the data cover (in), from memory. */
+    /** Smallest inner diameter not flagged (in); assumed, no source. */
     public static final double DIAMETER_LOW_INCHES = 0.25;
-    /** Largest inner diameter the data cover (in), from memory. */
+    /** Largest inner diameter not flagged (in); assumed, no source. */
     public static final double DIAMETER_HIGH_INCHES = 24.0;
     /** Exponent of D in the size term, as published. */
     public static final double DIAMETER_EXPONENT = 0.3;
@@ -72,7 +72,7 @@ public final class ThreeK implements Fitting {
 
     @Override
     public String method() {
-        return "3-K (Darby)";
+        return "3-K (Darby 2001)";
     }
 
     @Override
@@ -118,7 +118,7 @@ public final class ThreeK implements Fitting {
                             inches,
                             DIAMETER_LOW_INCHES,
                             DIAMETER_HIGH_INCHES),
-                    "Darby 3-K (range from memory)"));
+                    "Darby 2001 3-K method; size range assumed, no source"));
         }
         return List.of();
     }

@@ -1,5 +1,8 @@
 package org.headway.pipe;
 
+import java.util.List;
+import java.util.Locale;
+import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 
 /**
@@ -24,6 +27,9 @@ public final class Transitions {
     public static final String BORDA_CARNOT = "Borda–Carnot sudden-expansion loss, K = (1 − β²)²";
     /** Crane TP-410 citation. */
     public static final String CRANE_TP410 = "Crane TP-410 (1988) p. A-26, from memory";
+
+    /** Reynolds number below which these turbulent-flow forms are flagged (common practice, no source). */
+    public static final double TURBULENT_REYNOLDS = 1.0e4;
 
     private static final double HALF_TURN = Math.PI;
     private static final double CRANE_ANGLE_BREAK = Math.PI / 4.0;
@@ -120,6 +126,27 @@ public final class Transitions {
                 ? CRANE_TP410 + ", sudden contraction K = 0.5 (1 − β²)"
                 : CRANE_TP410 + ", gradual contraction";
         return new TransitionLoss(k, ReferenceSection.DOWNSTREAM, upstreamDiameter, downstreamDiameter, basis);
+    }
+
+    /**
+     * What a reviewer should know about using these turbulent-flow coefficients at a Reynolds number.
+     *
+     * @param reynolds Reynolds number in the smaller pipe (ratio), positive
+     * @return a warning below {@link #TURBULENT_REYNOLDS}, else empty
+     */
+    public static List<Caution> cautions(double reynolds) {
+        InputException.requirePositive("reynolds", reynolds);
+        if (reynolds < TURBULENT_REYNOLDS) {
+            return List.of(Caution.warning(
+                    "transition-low-reynolds",
+                    String.format(
+                            Locale.ROOT,
+                            "diameter-change K values are turbulent-flow forms; at Re = %.0f the loss depends on Re"
+                                    + " and may differ markedly.",
+                            reynolds),
+                    "common practice, no source"));
+        }
+        return List.of();
     }
 
     private static double expansionRatio(double upstreamDiameter, double downstreamDiameter) {

@@ -14,16 +14,16 @@ import org.headway.caution.InputException;
  *
  * <p>Validity: the author presents the method for laminar through turbulent flow in commercial pipe
  * sizes; this class flags inner diameters outside {@link #DIAMETER_LOW_INCHES}–{@link
- * #DIAMETER_HIGH_INCHES} in (the span of the usual fitting tables, from memory) with a Caution.
+ * #DIAMETER_HIGH_INCHES} in (an assumed span of common fitting sizes, no source) with a Caution.
  *
  * <p>Citation: Hooper, W.B. (1981), "The two-K method predicts head losses in pipe fittings",
  * Chemical Engineering, Aug. 24, 1981, pp. 96–100 (equation and coefficient table).
  */
 public final class TwoK implements Fitting {
 
-    /** Smallest inner diameter the tables cover (in), from memory. */
+    /** Smallest inner diameter not flagged (in); assumed, no source. */
     public static final double DIAMETER_LOW_INCHES = 0.25;
-    /** Largest inner diameter the tables cover (in), from memory. */
+    /** Largest inner diameter not flagged (in); assumed, no source. */
     public static final double DIAMETER_HIGH_INCHES = 24.0;
 
     private final String id;
@@ -99,7 +99,7 @@ public final class TwoK implements Fitting {
                             inches,
                             DIAMETER_LOW_INCHES,
                             DIAMETER_HIGH_INCHES),
-                    "Hooper 1981 (range from memory)"));
+                    "Hooper 1981 2-K method; size range assumed, no source"));
         }
         return List.of();
     }

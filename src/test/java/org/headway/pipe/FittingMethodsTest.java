@@ -1,0 +1,126 @@
+package org.headway.pipe;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.headway.caution.Caution;
+import org.headway.caution.InputException;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/**
+ * Checks of the 2-K and 3-K formulas against their own limits. No published worked example of
+ * either method was at hand, so these are the formula identities (K → K∞(1 + 1/D) at large Re,
+ * K·Re → K₁ at small Re) and hand calculations from the printed equations.
+ */
+class FittingMethodsTest {
+
+    private static final double INCH = 0.0254;
+    /** Exact arithmetic identities: only rounding error. */
+    private static final double ROUNDING = 1e-12;
+
+    private final TwoK hooperFlangedElbow = new TwoK("e", "elbow", 800, 0.25, "Hooper 1981 table, from memory");
+    private final ThreeK darbyFlangedElbow = new ThreeK("e", "elbow", 800, 0.091, 4.0, "Darby table, from memory");
+
+    @ParameterizedTest
+    @ValueSource(doubles = {0.5, 1.0, 2.067, 4.026, 12.0})
+    void twoKTendsToTurbulentValueAtLargeReynolds(double inches) {
+        double expected = 0.25 * (1.0 + 1.0 / inches);
+        assertEquals(expected, hooperFlangedElbow.lossCoefficient(1e15, inches * INCH), 1e-9);
+    }
+
+    @ParameterizedTest
+    @ValueSource(doubles = {1e-3, 1e-2, 0.1})
+    void twoKScalesWithInverseReynoldsWhenLaminar(double reynolds) {
+        double k = hooperFlangedElbow.lossCoefficient(reynolds, 2.067 * INCH);
+        // K·Re = K1 + Re·K∞(1 + 1/D): the second term vanishes as Re → 0
+        double turbulentPart = reynolds * 0.25 * (1.0 + 1.0 / 2.067);
+        assertEquals(800.0 + turbulentPart, k * reynolds, 1e-9);
+        double halved = hooperFlangedElbow.lossCoefficient(reynolds / 2, 2.067 * INCH);
+        assertEquals(2.0, halved / k, 1e-3);
+    }
+
+    @Test
+    void twoKHandCalculation() {
+        // Hooper (1981) K = K1/Re + K∞ (1 + 1/D[in]); K1 = 800, K∞ = 0.25, D = 4 in, Re = 1e5:
+        // 800/1e5 + 0.25 * 1.25 = 0.008 + 0.3125 = 0.3205 (hand calculation)
+        assertEquals(0.3205, hooperFlangedElbow.lossCoefficient(1e5, 4 * INCH), ROUNDING);
+    }
+
+    @ParameterizedTest
+    @ValueSource(doubles = {0.5, 1.0, 2.067, 6.065, 12.0})
+    void threeKTendsToTurbulentValueAtLargeReynolds(double inches) {
+        double expected = 0.091 * (1.0 + 4.0 / Math.pow(inches, 0.3));
+        assertEquals(expected, darbyFlangedElbow.lossCoefficient(1e15, inches * INCH), 1e-9);
+    }
+
+    @Test
+    void threeKHandCalculationAtOneInch() {
+        // Darby K = K1/Re + Ki (1 + Kd/D[in]^0.3); at D = 1 in the size term is Kd exactly:
+        // 800/1e4 + 0.091 * (1 + 4) = 0.08 + 0.455 = 0.535 (hand calculation)
+        assertEquals(0.535, darbyFlangedElbow.lossCoefficient(1e4, INCH), ROUNDING);
+    }
+
+    @Test
+    void threeKScalesWithInverseReynoldsWhenLaminar() {
+        double k = darbyFlangedElbow.lossCoefficient(1e-3, 2 * INCH);
+        assertEquals(800.0, k * 1e-3, 1e-3);
+    }
+
+    @Test
+    void bothMethodsFallWithSizeInTurbulentFlow() {
+        double small = hooperFlangedElbow.lossCoefficient(1e6, 1 * INCH);
+        double large = hooperFlangedElbow.lossCoefficient(1e6, 12 * INCH);
+        assertTrue(small > large);
+        assertTrue(
+                darbyFlangedElbow.lossCoefficient(1e6, 1 * INCH) > darbyFlangedElbow.lossCoefficient(1e6, 12 * INCH));
+    }
+
+    @Test
+    void fixedKIgnoresReynoldsButWarnsInLaminarFlow() {
+        FixedK elbow = new FixedK("elbow-90-standard", "elbow", 0.75, "Perry, from memory");
+        assertEquals(0.75, elbow.lossCoefficient(1e3, 0.05), 0.0);
+        assertEquals(0.75, elbow.lossCoefficient(1e6, 0.05), 0.0);
+        List<Caution> low = elbow.cautions(2000, 0.05);
+        assertEquals(1, low.size());
+        assertEquals("fixed-k-low-reynolds", low.get(0).code());
+        assertTrue(low.get(0).message().contains("Re = 2000"), low.get(0).message());
+        assertEquals(List.of(), elbow.cautions(1e5, 0.05));
+    }
+
+    @Test
+    void sizeOutsideTheTablesIsFlagged() {
+        assertEquals(List.of(), hooperFlangedElbow.cautions(1e5, 4 * INCH));
+        List<Caution> big = hooperFlangedElbow.cautions(1e5, 48 * INCH);
+        assertEquals("fitting-size-outside-data", big.get(0).code());
+        assertTrue(big.get(0).message().contains("48.00 in"), big.get(0).message());
+        assertEquals(
+                "fitting-size-outside-data",
+                darbyFlangedElbow.cautions(1e5, 0.1 * INCH).get(0).code());
+    }
+
+    @Test
+    void badFlowConditionsAreRejected() {
+        InputException re = assertThrows(InputException.class, () -> hooperFlangedElbow.lossCoefficient(0, 0.05));
+        assertEquals("reynolds: must be greater than zero, got 0.0", re.getMessage());
+        InputException d = assertThrows(InputException.class, () -> darbyFlangedElbow.lossCoefficient(1e5, Double.NaN));
+        assertEquals("innerDiameter: must be a finite number, got NaN", d.getMessage());
+        InputException k = assertThrows(InputException.class, () -> new FixedK("x", "x", -1, "s"));
+        assertEquals("k: must not be negative, got -1.0", k.getMessage());
+    }
+
+    @Test
+    void everyBundledFittingGivesFiniteNonNegativeK() {
+        for (Fitting f : Catalog.bundled().fittings()) {
+            for (double re : new double[] {10, 1e3, 1e5, 1e8}) {
+                for (double inches : new double[] {0.5, 2, 24}) {
+                    double k = f.lossCoefficient(re, inches * INCH);
+                    assertTrue(Double.isFinite(k) && k >= 0, f.id() + " Re " + re + " D " + inches);
+                }
+            }
+        }
+    }
+}
