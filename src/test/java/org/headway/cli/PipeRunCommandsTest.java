@@ -1,0 +1,138 @@
+package org.headway.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.headway.pipe.Catalog;
+import org.headway.project.ProjectFile;
+import org.headway.project.ProjectResolver;
+import org.headway.system.FlowSolver;
+import org.headway.system.HeadLossCalculator;
+import org.headway.system.RunResult;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+/** `headway solve`, `sheet` and `demo` driven as a user would, output checked against the engine. */
+class PipeRunCommandsTest {
+
+    @TempDir
+    Path dir;
+
+    private Path project;
+    private final StringWriter out = new StringWriter();
+    private final StringWriter err = new StringWriter();
+
+    @BeforeEach
+    void writeDemoProject() throws Exception {
+        project = dir.resolve("demo.json");
+        Files.writeString(project, DemoCommand.resource(DemoCommand.DEMO_PROJECT));
+    }
+
+    private int run(String... args) {
+        CommandLine cl = HeadwayCommand.commandLine();
+        cl.setOut(new PrintWriter(out));
+        cl.setErr(new PrintWriter(err));
+        return cl.execute(args);
+    }
+
+    @Test
+    void solveJsonHasTheDocumentedKeysAndTheEngineValues() throws Exception {
+        assertEquals(0, run("solve", project.toString(), "--format", "json"), err::toString);
+        JsonNode json = new ObjectMapper().readTree(out.toString());
+        RunResult r = HeadLossCalculator.solve(
+                ProjectResolver.resolve(ProjectFile.load(project), Catalog.bundled(), dir)
+                        .run(),
+                0.009);
+        JsonNode seg = json.get("segments").get(2);
+        for (String key : new String[] {
+            "velocity_m_per_s", "reynolds", "friction_factor", "major_head_loss_m", "minor_head_loss_m"
+        }) {
+            assertTrue(seg.has(key), key);
+        }
+        assertEquals(
+                r.segments().get(2).majorHeadLoss(),
+                seg.get("major_head_loss_m").asDouble(),
+                0);
+        JsonNode totals = json.get("totals");
+        assertEquals(
+                r.totals().frictionHeadLoss(),
+                totals.get("friction_head_loss_m").asDouble(),
+                0);
+        assertEquals(r.totals().minorHeadLoss(), totals.get("minor_head_loss_m").asDouble(), 0);
+        assertEquals(r.totals().totalHead(), totals.get("total_head_m").asDouble(), 0);
+        assertEquals(r.totals().pressureDrop(), totals.get("pressure_drop_pa").asDouble(), 0);
+        assertTrue(json.get("cautions").size() >= 1);
+    }
+
+    @Test
+    void solveFlowModeReturnsTheFlowForTheGivenHead() throws Exception {
+        var run = ProjectResolver.resolve(ProjectFile.load(project), Catalog.bundled(), dir)
+                .run();
+        double head = HeadLossCalculator.totalHead(run, 0.008);
+        assertEquals(
+                0,
+                run("solve", project.toString(), "--mode", "flow", "--available-head", head + " m", "--format", "json"),
+                err::toString);
+        JsonNode json = new ObjectMapper().readTree(out.toString());
+        assertEquals(0.008, json.get("flow_m3_per_s").asDouble(), 0.008 * 1e-9);
+        assertEquals(FlowSolver.Outcome.FLOWING, FlowSolver.solve(run, head).outcome());
+    }
+
+    @Test
+    void solveSizeModeListsCandidates() {
+        assertEquals(0, run("solve", project.toString(), "--mode", "size"), err::toString);
+        String text = out.toString();
+        assertTrue(text.contains("smallest size meeting the limits"), text);
+        assertTrue(text.contains("rejected: velocity"), text);
+    }
+
+    @Test
+    void solveTextShowsCurveAndCautions() {
+        assertEquals(0, run("solve", project.toString(), "--curve", "0 L/s:12 L/s:4", "--units", "us"), err::toString);
+        String text = out.toString();
+        assertTrue(text.contains("System curve:"));
+        assertTrue(text.contains("gpm"));
+        assertTrue(text.contains("licensed or otherwise qualified engineer"));
+    }
+
+    @Test
+    void badProjectExitsTwoWithOneLine() throws Exception {
+        Files.writeString(project, Files.readString(project).replace("\"6 m\"", "\"-6 m\""));
+        assertEquals(2, run("solve", project.toString()));
+        assertEquals(1, err.toString().strip().lines().count(), err.toString());
+        assertTrue(err.toString().contains("segments[0].length"), err.toString());
+    }
+
+    @Test
+    void sheetWritesFilesAndRefusesToOverwrite() throws Exception {
+        Path pdf = dir.resolve("out/sheet.pdf");
+        assertEquals(
+                0, run("sheet", project.toString(), "--out", pdf.toString(), "--workbook", "--csv"), err::toString);
+        assertTrue(Files.size(pdf) > 10_000);
+        assertTrue(Files.exists(dir.resolve("out/sheet.xlsx")));
+        assertTrue(Files.exists(dir.resolve("out/sheet.csv")));
+        long before = Files.getLastModifiedTime(pdf).toMillis();
+        assertEquals(2, run("sheet", project.toString(), "--out", pdf.toString()));
+        assertTrue(err.toString().contains("--force"), err.toString());
+        assertEquals(before, Files.getLastModifiedTime(pdf).toMillis());
+        assertEquals(0, run("sheet", project.toString(), "--out", pdf.toString(), "--force"), err::toString);
+    }
+
+    @Test
+    void demoRunsTheWholeJob() throws Exception {
+        Path reports = dir.resolve("reports");
+        assertEquals(0, run("demo", "--reports", reports.toString()), err::toString);
+        assertTrue(out.toString().contains("Total head"));
+        assertTrue(Files.size(reports.resolve("demo-orchard-booster.pdf")) > 10_000);
+        assertTrue(Files.exists(reports.resolve("demo-orchard-booster.xlsx")));
+        assertTrue(Files.exists(reports.resolve("demo-orchard-booster.csv")));
+    }
+}
