@@ -45,7 +45,7 @@ final class RunText {
         String h = Quantities.unitSymbol(QuantityKind.HEAD, u);
         out.printf(
                 Locale.ROOT,
-                "%-22s %9s %11s %-12s %9s %9s %7s %9s%n",
+                "%-28s %9s %11s %-12s %9s %9s %7s %9s%n",
                 "segment",
                 "V [" + v + "]",
                 "Re",
@@ -57,8 +57,8 @@ final class RunText {
         for (SegmentResult s : r.segments()) {
             out.printf(
                     Locale.ROOT,
-                    "%-22s %9s %11s %-12s %9s %9s %7s %9s%n",
-                    clip(s.name(), 22),
+                    "%-28s %9s %11s %-12s %9s %9s %7s %9s%n",
+                    clip(s.name(), 28),
                     n(Quantities.fromSi(s.velocity(), QuantityKind.VELOCITY, u)),
                     n(s.reynolds()),
                     s.regime().name().toLowerCase(Locale.ROOT),
@@ -94,7 +94,20 @@ final class RunText {
         if (!sizes.isEmpty()) {
             out.println();
             out.println("Size candidates (smallest first):");
-            for (SizeSelector.SizeCheck c : sizes) {
+            int chosen = -1;
+            for (int i = 0; i < sizes.size(); i++) {
+                if (sizes.get(i).accepted()) {
+                    chosen = i;
+                    break;
+                }
+            }
+            // Show the sizes around the choice; the JSON output lists every candidate.
+            int from = chosen < 0 ? Math.max(0, sizes.size() - 4) : Math.max(0, chosen - 3);
+            int to = chosen < 0 ? sizes.size() : Math.min(sizes.size(), chosen + 3);
+            if (from > 0) {
+                out.println("  (" + from + " smaller sizes rejected, not shown; --format json lists all)");
+            }
+            for (SizeSelector.SizeCheck c : sizes.subList(from, to)) {
                 out.printf(
                         Locale.ROOT,
                         "  %-16s D %-10s V %-10s total %-10s %s%n",
@@ -103,6 +116,9 @@ final class RunText {
                         q(c.maximumVelocity(), QuantityKind.VELOCITY, u),
                         q(c.totalHead(), QuantityKind.HEAD, u),
                         c.accepted() ? "meets the limits" : "rejected: " + String.join("; ", c.reasons()));
+            }
+            if (to < sizes.size()) {
+                out.println("  (" + (sizes.size() - to) + " larger sizes also meet the limits, not shown)");
             }
         }
         if (!curve.isEmpty()) {

@@ -178,11 +178,14 @@ public final class HeadLossCalculator {
                             minor, friction),
                     "common practice, no source"));
         }
-        if (run.pump().isEmpty() && totalHead > 0 && flow > 0) {
-            cautions.add(Caution.warning(
-                    "head-deficit",
+        // Round-off of a balanced gravity run leaves ~1e-14 m; only a real deficit is worth a caution.
+        double resolution = 1e-9 * Math.max(1.0, Math.abs(staticHead) + friction + minor);
+        if (run.pump().isEmpty() && totalHead > resolution && flow > 0) {
+            cautions.add(Caution.note(
+                    "head-required",
                     String.format(
-                            "the run has no pump but needs %.3g m of head at this flow; the ends alone cannot drive it",
+                            "no pump is given for this run; at this flow it needs %.3g m of head that the ends alone"
+                                    + " do not supply",
                             totalHead),
                     "energy balance"));
         }
