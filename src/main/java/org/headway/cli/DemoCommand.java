@@ -33,8 +33,9 @@ import picocli.CommandLine.Spec;
         name = "demo",
         mixinStandardHelpOptions = true,
         description = {
-            "Run Headway on its bundled demo (an invented orchard booster line): solve the run, print the",
-            "results and write its head-loss sheet (PDF, workbook, CSV) into reports/.",
+            "Run the whole job on the bundled, invented demo project.",
+            "Solves an invented orchard booster line, prints the results and writes its head-loss sheet",
+            "(PDF, workbook, CSV) into reports/, replacing the demo's own earlier files.",
             "The demo data are invented; do not use them for design."
         })
 public final class DemoCommand implements Callable<Integer> {

@@ -24,9 +24,9 @@ import picocli.CommandLine.Spec;
         name = "sheet",
         mixinStandardHelpOptions = true,
         description = {
-            "Write the head-loss sheet of a project for review: PDF, and with --workbook an .xlsx with live",
-            "formulas, with --csv the per-segment table. Files go to reports/ unless --out says otherwise;",
-            "existing files are kept unless --force is given."
+            "Write a project's head-loss sheet for review (PDF, workbook, CSV).",
+            "With --workbook also an .xlsx whose results are live formulas; with --csv the per-segment table.",
+            "Files go to reports/ unless --out says otherwise; existing files are kept unless --force is given."
         })
 public final class SheetCommand implements Callable<Integer> {
 

@@ -28,8 +28,10 @@ import picocli.CommandLine.Spec;
         name = "solve",
         mixinStandardHelpOptions = true,
         description = {
-            "Solve a pipe run: head loss for the design flow, flow for an available head, or the",
-            "smallest catalog size meeting the project's limits.",
+            "Solve a pipe run: head loss, flow for a head, or size for limits.",
+            "--mode headloss (default): losses and total head at the design flow.",
+            "--mode flow: the flow an available head drives through the run.",
+            "--mode size: the smallest catalog size meeting the project's limits.",
             "Results are estimates for design review against local codes by a qualified engineer."
         })
 public final class SolveCommand implements Callable<Integer> {
