@@ -261,7 +261,6 @@ public final class Quantities {
         }
     }
 
-    @SuppressWarnings({"unchecked", "rawtypes"})
     private static double convert(Unit<?> from, Unit<?> to, double value) {
         return converter(from, to).convert(value);
     }
