@@ -2,6 +2,7 @@ package org.headway.fluid;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvFileSource;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -32,5 +33,16 @@ class If97Region1Test {
     void fastDensityMatchesTable5Volume(double temperature, double pressureMpa, String printed) {
         double density = If97Region1.density(temperature, pressureMpa * 1e6);
         assertEquals(Double.parseDouble(printed), 1 / density, PrintedDigits.tolerance(printed));
+    }
+
+    /** The written-out density path and the Table 2 loop are the same equation: agreement to round-off. */
+    @Test
+    void fastDensityEqualsTheTable2Loop() {
+        for (double t = 273.15; t <= 623.15; t += 10) {
+            for (double p = If97Region4.saturationPressure(t) * 1.0001; p <= 100e6; p = p * 3 + 1e5) {
+                double loop = 1 / If97Region1.properties(t, p).specificVolume();
+                assertEquals(loop, If97Region1.density(t, p), loop * 1e-13, t + " K, " + p + " Pa");
+            }
+        }
     }
 }
