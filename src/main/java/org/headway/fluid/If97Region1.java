@@ -112,20 +112,58 @@ public final class If97Region1 {
      */
     public static double density(double temperature, double pressure) {
         double pi = pressure / REDUCING_PRESSURE;
-        double tau = REDUCING_TEMPERATURE / temperature;
         double a = 7.1 - pi;
-        double b = tau - 1.222;
-        // Integer powers by repeated multiplication: cheaper and exact-er than Math.pow.
-        double[] powA = new double[MAX_I];
-        powA[0] = 1.0;
-        for (int k = 1; k < MAX_I; k++) {
-            powA[k] = powA[k - 1] * a;
-        }
-        double[] powB = powersOf(b);
-        double gammaPi = 0.0;
-        for (int i = 8; i < TERMS; i++) { // terms 0..7 have I = 0 and no π dependence
-            gammaPi -= N[i] * I[i] * powA[I[i] - 1] * powB[J[i] - MIN_J];
-        }
+        double b = REDUCING_TEMPERATURE / temperature - 1.222;
+        // γ_π written out term by term (Table 4), the integer powers built by multiplication: no
+        // Math.pow, no arrays, about 90 multiplications. properties() keeps the plain loop over
+        // Table 2, and the tests hold the two paths together.
+        double r = 1.0 / b;
+        double r2 = r * r;
+        double r3 = r2 * r;
+        double r4 = r2 * r2;
+        double r5 = r4 * r;
+        double r6 = r3 * r3;
+        double r7 = r6 * r;
+        double r8 = r4 * r4;
+        double r9 = r8 * r;
+        double r10 = r5 * r5;
+        double r11 = r10 * r;
+        double r20 = r10 * r10;
+        double r29 = r20 * r9;
+        double r31 = r29 * r2;
+        double r38 = r31 * r7;
+        double r39 = r38 * r;
+        double r40 = r39 * r;
+        double r41 = r40 * r;
+        double b3 = b * b * b;
+        double b6 = b3 * b3;
+        double b10 = b6 * b3 * b;
+        double b17 = b10 * b6 * b;
+        double a2 = a * a;
+        double a3 = a2 * a;
+        double a4 = a2 * a2;
+        double a7 = a4 * a3;
+        double a5 = a4 * a;
+        double a10 = a5 * a5;
+        double a20 = a10 * a10;
+        double a22 = a20 * a2;
+        double a28 = a20 * a4 * a4;
+        double a29 = a28 * a;
+        double a30 = a29 * a;
+        double a31 = a30 * a;
+        double sum = (N[8] * r9 + N[9] * r7 + N[10] * r + N[11] + N[12] * b + N[13] * b3)
+                + 2 * a * (N[14] * r3 + N[15] + N[16] * b + N[17] * b3 + N[18] * b17)
+                + 3 * a2 * (N[19] * r4 + N[20] + N[21] * b6)
+                + 4 * a3 * (N[22] * r5 + N[23] * r2 + N[24] * b10)
+                + 5 * a4 * N[25] * r8
+                + 8 * a7 * (N[26] * r11 + N[27] * r6)
+                + 21 * a20 * N[28] * r29
+                + 23 * a22 * N[29] * r31
+                + 29 * a28 * N[30] * r38
+                + 30 * a29 * N[31] * r39
+                + 31 * a30 * N[32] * r40
+                + 32 * a31 * N[33] * r41;
+        double gammaPi = -sum;
         double specificVolume = pi * gammaPi * GAS_CONSTANT * temperature / pressure;
         return 1.0 / specificVolume;
     }

@@ -22,8 +22,10 @@ package org.headway.fluid;
  * seawater: a review of existing correlations and data, Desalination and Water Treatment 16 (2010)
  * 354-380; density Eq. (8), viscosity Eqs. (22)-(23), vapour pressure Eqs. (28)-(29). The
  * coefficients, ranges and equation numbers here are from memory of that paper and are checked in
- * the tests against independent references (TEOS-10/IAPWS-08 density and boiling point, the IAPWS
- * pure-water formulations, ITTC seawater values).
+ * the tests against independent references. Measured: density within 0.05 % of TEOS-10 (0-40 °C,
+ * 10-40 g/kg); pure-water viscosity within 0.12 % of IAPWS 2008 (0-90 °C); vapour pressure within
+ * 0.02 % of IF97 for pure water but up to 0.2 % low against IAPWS-08 seawater boiling points at
+ * 35-70 g/kg, so the salinity term as recalled does not reach the ±0.1 % stated above.
  */
 public final class Sharqawy2010 {
 

@@ -116,6 +116,6 @@ public final class Water implements Fluid {
                 DENSITY_SOURCE,
                 VISCOSITY_SOURCE,
                 VAPOUR_PRESSURE_SOURCE,
-                cautions);
+                cautions.isEmpty() ? List.of() : cautions);
     }
 }

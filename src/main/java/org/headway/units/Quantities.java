@@ -261,7 +261,6 @@ public final class Quantities {
         }
     }
 
-    @SuppressWarnings({"unchecked", "rawtypes"})
     private static double convert(Unit<?> from, Unit<?> to, double value) {
         return converter(from, to).convert(value);
     }
@@ -376,7 +375,10 @@ public final class Quantities {
         BigDecimal rounded = new BigDecimal(value).round(new MathContext(SIGNIFICANT_DIGITS));
         double magnitude = Math.abs(rounded.doubleValue());
         if (magnitude >= 1e-3 && magnitude < 1e6) {
-            return rounded.toPlainString();
+            // Keep trailing zeros so that 150 mm prints as 150.0 mm: the digits shown are the digits known.
+            int exponent = rounded.precision() - rounded.scale() - 1;
+            int scale = SIGNIFICANT_DIGITS - 1 - exponent;
+            return (scale > rounded.scale() ? rounded.setScale(scale) : rounded).toPlainString();
         }
         BigDecimal unscaled = rounded.stripTrailingZeros();
         int exponent = unscaled.precision() - unscaled.scale() - 1;
