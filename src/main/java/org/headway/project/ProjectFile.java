@@ -394,6 +394,12 @@ public final class ProjectFile {
         }
 
         String at(String key) {
+            if (!key.matches("[A-Za-z_][A-Za-z0-9_]*")) {
+                // Odd keys (empty, spaces, dots, control characters) are quoted so the path stays readable.
+                String shown = key.length() > 40 ? key.substring(0, 40) + "…" : key;
+                String quoted = "[\"" + shown.replace("\"", "\\\"").replaceAll("\\p{Cntrl}", "?") + "\"]";
+                return (path.isEmpty() ? "$" : path) + quoted;
+            }
             return path.isEmpty() ? key : path + "." + key;
         }
 

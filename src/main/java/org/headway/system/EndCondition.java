@@ -19,6 +19,11 @@ public record EndCondition(double level, double pressure) {
     public EndCondition {
         InputException.requireFinite("level", level);
         InputException.requireFinite("pressure", pressure);
+        if (Math.abs(level) > 1e5 || Math.abs(pressure) > 1e9) {
+            throw new InputException(
+                    Math.abs(level) > 1e5 ? "level" : "pressure",
+                    "value beyond the plausible limits (±100 km, ±1 GPa); check the number and its unit");
+        }
     }
 
     /**

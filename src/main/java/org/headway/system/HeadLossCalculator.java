@@ -166,6 +166,12 @@ public final class HeadLossCalculator {
         }
 
         double totalHead = staticHead + friction + minor;
+        if (!Double.isFinite(totalHead) || !Double.isFinite(rho * g * totalHead)) {
+            throw new InputException(
+                    "flow",
+                    "the head loss at " + flow + " m³/s overflows double precision; check flows, lengths and diameters"
+                            + " and their units");
+        }
         RunTotals totals = new RunTotals(
                 friction, minor, staticHead, totalHead, rho * g * (friction + minor), rho * g * totalHead);
 

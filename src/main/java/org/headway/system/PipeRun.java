@@ -40,6 +40,9 @@ public record PipeRun(
         double flowUncertainty,
         DesignLimits limits) {
 
+    /** Largest design flow accepted (m³/s), above the flow of most rivers; guards against unit slips. */
+    public static final double MAX_FLOW = 1e4;
+
     /** Standard atmosphere, 101 325 Pa (ISO 2533). */
     public static final double STANDARD_ATMOSPHERE = 101_325.0;
 
@@ -61,6 +64,12 @@ public record PipeRun(
         }
         InputException.requirePositive("atmospheric pressure", atmosphericPressure);
         InputException.requireNonNegative("flow", designFlow);
+        if (designFlow > MAX_FLOW) {
+            throw new InputException(
+                    "flow",
+                    "value " + designFlow + " m³/s is beyond the plausible limit of " + MAX_FLOW
+                            + " m³/s; check the number and its unit");
+        }
         InputException.requireNonNegative("flow uncertainty", flowUncertainty);
         if (flowUncertainty >= 1) {
             throw new InputException("flow uncertainty", "must be below 100 %, got " + flowUncertainty * 100 + " %");

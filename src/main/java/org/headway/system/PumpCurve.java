@@ -98,9 +98,15 @@ public final class PumpCurve {
             }
             h[i] = points.get(i).head();
         }
-        RealVector solution = new QRDecomposition(new Array2DRowRealMatrix(a, false))
-                .getSolver()
-                .solve(new ArrayRealVector(h, false));
+        RealVector solution;
+        try {
+            solution = new QRDecomposition(new Array2DRowRealMatrix(a, false))
+                    .getSolver()
+                    .solve(new ArrayRealVector(h, false));
+        } catch (org.apache.commons.math3.linear.SingularMatrixException e) {
+            throw new InputException(
+                    "pump.points", "the points do not determine a curve: their flows are too close together");
+        }
         double[] coefficients = new double[degree + 1];
         double factor = 1;
         for (int j = 0; j <= degree; j++) {
@@ -119,6 +125,12 @@ public final class PumpCurve {
             ssTot += (h[i] - mean) * (h[i] - mean);
         }
         double r2 = ssTot == 0 ? 1.0 : 1.0 - ssRes / ssTot;
+        for (double c : coefficients) {
+            if (!Double.isFinite(c)) {
+                throw new InputException(
+                        "pump.points", "the points do not determine a curve: their flows span too small a range");
+            }
+        }
         return new PumpCurve(name, List.copyOf(points), coefficients, r2, npshRequired);
     }
 

@@ -36,10 +36,23 @@ public record Segment(
         double extraLossCoefficient,
         double elevationChange) {
 
+    /** Longest segment accepted (m): 10,000 km, far beyond any real run; guards against typos like 1e308. */
+    public static final double MAX_LENGTH = 1e7;
+    /** Largest bore accepted (m). */
+    public static final double MAX_DIAMETER = 100;
+    /** Largest elevation change accepted (m), about the depth of the deepest ocean trench ×10. */
+    public static final double MAX_ELEVATION_CHANGE = 1e5;
+    /** Largest explicit loss coefficient accepted (ratio). */
+    public static final double MAX_LOSS_COEFFICIENT = 1e6;
+
     public Segment {
         Objects.requireNonNull(name, "name");
         InputException.requireNonNegative("length", length);
         InputException.requirePositive("inner diameter", innerDiameter);
+        requireAtMost("length", length, MAX_LENGTH, "m");
+        requireAtMost("inner diameter", innerDiameter, MAX_DIAMETER, "m");
+        requireAtMost("elevation change", Math.abs(elevationChange), MAX_ELEVATION_CHANGE, "m");
+        requireAtMost("loss coefficient", extraLossCoefficient, MAX_LOSS_COEFFICIENT, "");
         InputException.requireNonNegative("roughness", roughness);
         InputException.requireNonNegative("roughness low", roughnessLow);
         InputException.requireNonNegative("roughness high", roughnessHigh);
@@ -65,6 +78,15 @@ public record Segment(
         roughnessSource = roughnessSource == null ? "" : roughnessSource;
         pipeDescription = pipeDescription == null ? "" : pipeDescription;
         pipeCondition = pipeCondition == null ? "" : pipeCondition;
+    }
+
+    private static void requireAtMost(String field, double value, double max, String unit) {
+        if (value > max) {
+            throw new InputException(
+                    field,
+                    "value " + value + (unit.isEmpty() ? "" : " " + unit) + " is beyond the plausible limit of " + max
+                            + (unit.isEmpty() ? "" : " " + unit) + "; check the number and its unit");
+        }
     }
 
     /** Relative roughness ε/D (ratio). */
