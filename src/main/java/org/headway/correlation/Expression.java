@@ -637,7 +637,7 @@ public final class Expression {
                     }
                     throw error(t, "expected a number, a name or '(' but found " + describe(t));
                 default:
-                    throw error(t, "the expression ends where a number, a name or '(' is expected");
+                    throw error(t, "found the end of the expression where a number, a name or '(' is expected");
             }
         }
 
