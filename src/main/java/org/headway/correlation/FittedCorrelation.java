@@ -62,7 +62,7 @@ public final class FittedCorrelation {
             VariableRange r = this.variableRanges.get(v);
             if (!Double.isFinite(r.min()) || !Double.isFinite(r.max()) || r.min() > r.max()) {
                 throw new InputException(
-                        "ranges[" + v + "]", "range of " + r.name() + " must be finite with min ≤ max, got " + r);
+                        "variables[" + v + "]", "range of " + r.name() + " must be finite with min ≤ max, got " + r);
             }
         }
         List<String> names = new ArrayList<>();
