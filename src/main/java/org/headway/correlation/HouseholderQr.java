@@ -164,25 +164,25 @@ final class HouseholderQr {
      * the ε·κ²·‖r‖ term that limits plain QR when the residual is large.
      *
      * @param rhs right-hand side b; not modified
-     * @param steps refinement steps
+     * @param steps most refinement steps (fewer when the correction falls below rounding)
      * @return x minimising ‖A x − b‖₂
      */
     double[] solveRefined(double[] rhs, int steps) {
         double[] x = solveScaled(rhs.clone());
         double[] r = new double[rows];
+        double[] terms = new double[cols + 2];
+        double[] factors = new double[cols + 2];
         for (int i = 0; i < rows; i++) {
-            double[] terms = new double[cols + 1];
-            double[] factors = new double[cols + 1];
             terms[0] = rhs[i];
             factors[0] = 1.0;
+            terms[1] = 0.0;
+            factors[1] = 0.0;
             for (int k = 0; k < cols; k++) {
-                terms[k + 1] = scaled[k][i];
-                factors[k + 1] = -x[k];
+                terms[k + 2] = scaled[k][i];
+                factors[k + 2] = -x[k];
             }
             r[i] = dot2(terms, factors);
         }
-        double[] terms = new double[cols + 2];
-        double[] factors = new double[cols + 2];
         for (int step = 0; step < steps; step++) {
             double[] f = new double[rows];
             for (int i = 0; i < rows; i++) {
@@ -210,11 +210,17 @@ final class HouseholderQr {
             double[] dr = f;
             System.arraycopy(h, 0, dr, 0, cols);
             applyQ(dr);
+            double change = 0.0;
             for (int k = 0; k < cols; k++) {
                 x[k] += dx[k];
+                change = Math.max(change, Math.abs(dx[k]) / Math.max(Math.abs(x[k]), Double.MIN_NORMAL));
             }
             for (int i = 0; i < rows; i++) {
                 r[i] += dr[i];
+            }
+            // Converged to working precision: further steps cannot change x.
+            if (change < 0x1p-60) {
+                break;
             }
         }
         for (int k = 0; k < cols; k++) {
