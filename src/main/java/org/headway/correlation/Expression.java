@@ -123,6 +123,32 @@ public final class Expression {
      *     skip derivatives
      */
     public void evaluate(double[][] columns, double[] parameterValues, double[] values, double[][] jacobian) {
+        double[][] gradient = evaluateColumns(columns, parameterValues, values, jacobian != null);
+        if (jacobian != null) {
+            int n = values.length;
+            int p = parameters.size();
+            for (int j = 0; j < n; j++) {
+                double[] row = jacobian[j];
+                for (int k = 0; k < p; k++) {
+                    row[k] = gradient[k][j];
+                }
+            }
+        }
+    }
+
+    /**
+     * Evaluates at many points, with the derivatives laid out by parameter (the layout a QR
+     * factorisation by columns wants).
+     *
+     * @param columns one array per variable, all of the same length n (units of the data)
+     * @param parameterValues one value per parameter
+     * @param values receives n model values
+     * @param withGradient whether to compute derivatives
+     * @return ∂value/∂parameter as {@code gradient[parameter][point]} (fresh arrays, zeros for a
+     *     parameter the expression does not use), or null without derivatives
+     */
+    public double[][] evaluateColumns(
+            double[][] columns, double[] parameterValues, double[] values, boolean withGradient) {
         if (columns.length != variables.size()) {
             throw new IllegalArgumentException("expected " + variables.size() + " columns, got " + columns.length);
         }
@@ -131,7 +157,6 @@ public final class Expression {
                     "expected " + parameters.size() + " parameters, got " + parameterValues.length);
         }
         int n = values.length;
-        boolean withGradient = jacobian != null;
         int p = parameters.size();
         double[][] val = new double[program.length][];
         double[][][] grad = new double[program.length][][];
@@ -167,15 +192,17 @@ public final class Expression {
         }
         int last = program.length - 1;
         System.arraycopy(val[last], 0, values, 0, n);
-        if (withGradient) {
-            double[][] g = grad[last];
-            for (int j = 0; j < n; j++) {
-                double[] row = jacobian[j];
-                for (int k = 0; k < p; k++) {
-                    row[k] = g == null || g[k] == null ? 0.0 : g[k][j];
-                }
-            }
+        if (!withGradient) {
+            return null;
         }
+        double[][] out = new double[p][];
+        double[][] g = grad[last];
+        for (int k = 0; k < p; k++) {
+            double[] column = g == null ? null : g[k];
+            // Leaves share arrays (a parameter's tangent of ones, a column's values): copy those.
+            out[k] = column == null ? new double[n] : column == ones ? column.clone() : column;
+        }
+        return out;
     }
 
     @Override

@@ -169,33 +169,9 @@ final class HouseholderQr {
      */
     double[] solveRefined(double[] rhs, int steps) {
         double[] x = solveScaled(rhs.clone());
-        double[] r = new double[rows];
-        double[] terms = new double[cols + 2];
-        double[] factors = new double[cols + 2];
-        for (int i = 0; i < rows; i++) {
-            terms[0] = rhs[i];
-            factors[0] = 1.0;
-            terms[1] = 0.0;
-            factors[1] = 0.0;
-            for (int k = 0; k < cols; k++) {
-                terms[k + 2] = scaled[k][i];
-                factors[k + 2] = -x[k];
-            }
-            r[i] = dot2(terms, factors);
-        }
+        double[] r = residual(rhs, new double[rows], x);
         for (int step = 0; step < steps; step++) {
-            double[] f = new double[rows];
-            for (int i = 0; i < rows; i++) {
-                terms[0] = rhs[i];
-                factors[0] = 1.0;
-                terms[1] = r[i];
-                factors[1] = -1.0;
-                for (int k = 0; k < cols; k++) {
-                    terms[k + 2] = scaled[k][i];
-                    factors[k + 2] = -x[k];
-                }
-                f[i] = dot2(terms, factors);
-            }
+            double[] f = residual(rhs, r, x);
             double[] g = new double[cols];
             for (int k = 0; k < cols; k++) {
                 g[k] = -dot2(scaled[k], r);
@@ -219,7 +195,7 @@ final class HouseholderQr {
                 r[i] += dr[i];
             }
             // Converged to working precision: further steps cannot change x.
-            if (change < 0x1p-60) {
+            if (change < 0x1p-52) {
                 break;
             }
         }
@@ -227,6 +203,37 @@ final class HouseholderQr {
             x[k] /= columnScale[k];
         }
         return x;
+    }
+
+    /**
+     * b − r − A x for every row, accumulated as if in doubled precision (error-free products and
+     * sums, compensation added at the end), column by column so the loops stream through memory.
+     */
+    private double[] residual(double[] b, double[] r, double[] x) {
+        double[] sum = new double[rows];
+        double[] compensation = new double[rows];
+        for (int i = 0; i < rows; i++) {
+            double t = b[i] - r[i];
+            double z = t - b[i];
+            compensation[i] = (b[i] - (t - z)) + (-r[i] - z);
+            sum[i] = t;
+        }
+        for (int k = 0; k < cols; k++) {
+            double[] a = scaled[k];
+            double xk = -x[k];
+            for (int i = 0; i < rows; i++) {
+                double product = a[i] * xk;
+                double productError = Math.fma(a[i], xk, -product);
+                double t = sum[i] + product;
+                double z = t - sum[i];
+                compensation[i] += productError + (sum[i] - (t - z)) + (product - z);
+                sum[i] = t;
+            }
+        }
+        for (int i = 0; i < rows; i++) {
+            sum[i] += compensation[i];
+        }
+        return sum;
     }
 
     private double[] solveScaled(double[] b) {

@@ -514,33 +514,44 @@ public final class LeastSquaresFitter {
             this.p = expression.parameters().size();
         }
 
-        /** Weighted values and Jacobian; non-finite points are returned as -1 in {@code bad[0]}. */
-        double evaluate(double[] point, double[] values, double[][] jacobian, int[] bad) {
+        /**
+         * Weighted values and Jacobian by columns; the first point where the model is not finite
+         * is returned in {@code bad[0]} (−1 if none).
+         *
+         * @return the weighted residual sum of squares
+         */
+        double evaluate(double[] point, double[] values, double[][][] jacobianOut, int[] bad) {
             evaluations++;
-            expression.evaluate(columns, point, values, jacobian);
+            double[][] jac = expression.evaluateColumns(columns, point, values, true);
             int n = values.length;
-            double cost = 0.0;
             bad[0] = -1;
+            boolean[] undefined = null;
+            for (int i = 0; i < n; i++) {
+                if (!Double.isFinite(values[i])) {
+                    undefined = mark(undefined, n, i, bad);
+                }
+            }
+            for (int k = 0; k < p; k++) {
+                double[] column = jac[k];
+                for (int i = 0; i < n; i++) {
+                    if (!Double.isFinite(column[i])) {
+                        undefined = mark(undefined, n, i, bad);
+                    }
+                    column[i] *= rootWeights[i];
+                }
+            }
             // A point where the model is undefined gets a large finite residual, so that the
             // optimizer rejects the step that led there instead of propagating NaN.
             double penalty = 1e100 / Math.sqrt(n);
+            double cost = 0.0;
             for (int i = 0; i < n; i++) {
-                boolean finite = Double.isFinite(values[i]);
-                double[] row = jacobian[i];
-                for (int k = 0; k < p; k++) {
-                    finite &= Double.isFinite(row[k]);
-                }
-                if (finite) {
-                    values[i] *= rootWeights[i];
+                if (undefined != null && undefined[i]) {
+                    values[i] = target[i] + penalty;
                     for (int k = 0; k < p; k++) {
-                        row[k] *= rootWeights[i];
+                        jac[k][i] = 0.0;
                     }
                 } else {
-                    if (bad[0] < 0) {
-                        bad[0] = i;
-                    }
-                    values[i] = target[i] + penalty;
-                    java.util.Arrays.fill(row, 0.0);
+                    values[i] *= rootWeights[i];
                 }
                 double r = target[i] - values[i];
                 cost = Math.fma(r, r, cost);
@@ -549,16 +560,33 @@ public final class LeastSquaresFitter {
                 bestCost = cost;
                 bestPoint = point.clone();
             }
+            jacobianOut[0] = jac;
             return cost;
+        }
+
+        private static boolean[] mark(boolean[] undefined, int n, int i, int[] bad) {
+            boolean[] u = undefined == null ? new boolean[n] : undefined;
+            u[i] = true;
+            if (bad[0] < 0 || i < bad[0]) {
+                bad[0] = i;
+            }
+            return u;
         }
 
         @Override
         public Pair<RealVector, RealMatrix> value(RealVector point) {
             int n = target.length;
             double[] values = new double[n];
-            double[][] jacobian = new double[n][p];
-            evaluate(point.toArray(), values, jacobian, new int[1]);
-            return new Pair<>(new ArrayRealVector(values, false), new Array2DRowRealMatrix(jacobian, false));
+            double[][][] jac = new double[1][][];
+            evaluate(point.toArray(), values, jac, new int[1]);
+            double[][] rows = new double[n][p];
+            for (int k = 0; k < p; k++) {
+                double[] column = jac[0][k];
+                for (int i = 0; i < n; i++) {
+                    rows[i][k] = column[i];
+                }
+            }
+            return new Pair<>(new ArrayRealVector(values, false), new Array2DRowRealMatrix(rows, false));
         }
     }
 
@@ -581,7 +609,7 @@ public final class LeastSquaresFitter {
         double[][] columns = data.columns();
         TrackedModel model = new TrackedModel(expression, columns, sw, target);
         int[] bad = new int[1];
-        model.evaluate(plan.start, new double[n], new double[n][p], bad);
+        model.evaluate(plan.start, new double[n], new double[1][][], bad);
         if (bad[0] >= 0) {
             throw new InputException(
                     "start",
@@ -625,16 +653,9 @@ public final class LeastSquaresFitter {
         if (polished > 0) {
             stop += "; then " + polished + " Gauss–Newton polishing step(s)";
         }
-        double[] values = new double[n];
-        double[][] jac = new double[n][p];
-        model.evaluate(point, values, jac, bad);
-        double[][] jcols = new double[p][n];
-        for (int i = 0; i < n; i++) {
-            for (int k = 0; k < p; k++) {
-                jcols[k][i] = jac[i][k];
-            }
-        }
-        Covariance cov = covariance(new HouseholderQr(jcols), plan.parameterNames);
+        double[][][] jac = new double[1][][];
+        model.evaluate(point, new double[n], jac, bad);
+        Covariance cov = covariance(new HouseholderQr(jac[0]), plan.parameterNames);
         double[] predicted = new double[n];
         expression.evaluate(columns, point, predicted, null);
         List<Caution> extra = new ArrayList<>();
@@ -666,20 +687,16 @@ public final class LeastSquaresFitter {
         int accepted = 0;
         double[] point = from.clone();
         double[] values = new double[n];
-        double[][] jac = new double[n][p];
+        double[][][] jac = new double[1][][];
         int[] bad = new int[1];
         double cost = model.evaluate(point, values, jac, bad);
         double previousStep = Double.POSITIVE_INFINITY;
         for (int step = 0; step < POLISHING_STEPS; step++) {
-            double[][] jcols = new double[p][n];
             double[] r = new double[n];
             for (int i = 0; i < n; i++) {
                 r[i] = model.target[i] - values[i];
-                for (int k = 0; k < p; k++) {
-                    jcols[k][i] = jac[i][k];
-                }
             }
-            HouseholderQr qr = new HouseholderQr(jcols);
+            HouseholderQr qr = new HouseholderQr(jac[0]);
             if (!(qr.diagonalRatio() > 0.0)) {
                 break;
             }
@@ -694,7 +711,7 @@ public final class LeastSquaresFitter {
                 break;
             }
             double[] trialValues = new double[n];
-            double[][] trialJac = new double[n][p];
+            double[][][] trialJac = new double[1][][];
             double trialCost = model.evaluate(trial, trialValues, trialJac, bad);
             if (bad[0] >= 0 || !(trialCost <= cost * (1.0 + COST_ROUNDING))) {
                 break;

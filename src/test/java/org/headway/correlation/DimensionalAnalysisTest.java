@@ -180,4 +180,17 @@ class DimensionalAnalysisTest {
                 a.groups().stream().anyMatch(g -> g.exponents().equals(Map.of("beta", 1, "dT", 1))),
                 a.groups().toString());
     }
+
+    @Test
+    void darcyLikeGroupIsRecognisedInEitherOrientation() {
+        // Δp·D/(ρV²L): the Darcy friction factor up to the factor 2 (White, Fluid Mechanics, ch. 6,
+        // from memory). The method of repeating variables gives Euler number and L/D instead; the
+        // name is recognised when the product is formed.
+        List<DimensionalVariable> vars = List.of(DP, RHO, V, D, L);
+        assertEquals(
+                "Darcy friction factor-like group (Δp·D/(ρV²L))",
+                FamiliarGroups.name(vars, new int[] {1, -1, -2, 1, -1}));
+        assertEquals(null, FamiliarGroups.name(vars, new int[] {-1, 1, 2, -1, 1}));
+        assertEquals("Euler number", FamiliarGroups.name(vars, new int[] {1, -1, -2, 0, 0}));
+    }
 }
