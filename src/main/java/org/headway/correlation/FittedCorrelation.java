@@ -56,7 +56,8 @@ public final class FittedCorrelation {
         this.statistics = Objects.requireNonNull(statistics, "statistics");
         if (this.variableRanges.size() != this.variableNames.size()) {
             throw new InputException(
-                    "ranges", "need one data range per variable " + variableNames + ", got " + variableRanges.size());
+                    "variables",
+                    "need one data range per variable " + variableNames + ", got " + variableRanges.size());
         }
         for (int v = 0; v < this.variableNames.size(); v++) {
             VariableRange r = this.variableRanges.get(v);

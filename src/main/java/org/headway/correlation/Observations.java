@@ -7,11 +7,15 @@ import org.headway.caution.InputException;
 /**
  * Data to fit: one response column and one or more explanatory columns, optionally weighted.
  *
- * <p>Values are in whatever consistent units the user's columns carry; the fit is unit-agnostic.
+ * <p>Explanatory column names must be usable in an {@link Expression} (letters, digits, underscore,
+ * not starting with a digit). Values are in whatever consistent units the user's columns carry; the fit is unit-agnostic.
  * Weights w multiply squared residuals (minimising Σ wᵢ rᵢ²); use w = 1/σᵢ² for known point
  * variances.
  */
 public final class Observations {
+
+    private static final java.util.regex.Pattern IDENTIFIER =
+            java.util.regex.Pattern.compile("[\\p{L}_][\\p{L}\\p{Nd}_]*");
 
     private final String responseName;
     private final double[] response;
@@ -34,6 +38,14 @@ public final class Observations {
         this.variableNames = List.copyOf(variableNames);
         if (columns.length != variableNames.size()) {
             throw new InputException("data", "got " + columns.length + " columns for names " + variableNames);
+        }
+        for (String name : this.variableNames) {
+            if (!IDENTIFIER.matcher(name).matches()) {
+                throw new InputException(
+                        name,
+                        "a column used in a model must be named with letters, digits and _ (not starting with a"
+                                + " digit) so that the model can refer to it; rename the column");
+            }
         }
         int n = response.length;
         if (n == 0) {

@@ -254,4 +254,18 @@ class LeastSquaresFitterTest {
         assertEquals(0.5, fit.parameter("c").value(), 5 * fit.parameter("c").standardError());
         assertEquals(0.01, fit.residualStandardDeviation(), 0.0005);
     }
+
+    @Test
+    void columnNamesMustBeUsableInAModel() {
+        InputException e = assertThrows(
+                InputException.class,
+                () -> Observations.of("f", new double[] {1, 2}, List.of("eps/D"), new double[] {0.1, 0.2}));
+        assertEquals("eps/D", e.where());
+        assertTrue(e.problem().contains("rename the column"), e.getMessage());
+        // Greek letters are letters: ε and ρ are valid names.
+        assertEquals(
+                List.of("ε"),
+                Observations.of("f", new double[] {1, 2}, List.of("ε"), new double[] {1, 2})
+                        .variableNames());
+    }
 }
