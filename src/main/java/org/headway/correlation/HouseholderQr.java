@@ -168,6 +168,19 @@ final class HouseholderQr {
      * @return x minimising ‖A x − b‖₂
      */
     double[] solveRefined(double[] rhs, int steps) {
+        return solveRefined(rhs, steps, null);
+    }
+
+    /**
+     * As {@link #solveRefined(double[], int)}, stopping as soon as every correction is below the
+     * given absolute size (e.g. rounding of the quantity x is added to).
+     *
+     * @param rhs right-hand side b; not modified
+     * @param steps most refinement steps
+     * @param negligible per component, a correction size that no longer matters, or null
+     * @return x minimising ‖A x − b‖₂
+     */
+    double[] solveRefined(double[] rhs, int steps, double[] negligible) {
         double[] x = solveScaled(rhs.clone());
         double[] r = residual(rhs, new double[rows], x);
         for (int step = 0; step < steps; step++) {
@@ -186,16 +199,19 @@ final class HouseholderQr {
             double[] dr = f;
             System.arraycopy(h, 0, dr, 0, cols);
             applyQ(dr);
-            double change = 0.0;
+            boolean negligibleChange = true;
             for (int k = 0; k < cols; k++) {
                 x[k] += dx[k];
-                change = Math.max(change, Math.abs(dx[k]) / Math.max(Math.abs(x[k]), Double.MIN_NORMAL));
+                double limit = negligible == null
+                        ? 0x1p-52 * Math.abs(x[k])
+                        : Math.max(negligible[k] * columnScale[k], 0x1p-52 * Math.abs(x[k]));
+                negligibleChange &= Math.abs(dx[k]) <= limit;
             }
             for (int i = 0; i < rows; i++) {
                 r[i] += dr[i];
             }
-            // Converged to working precision: further steps cannot change x.
-            if (change < 0x1p-52) {
+            // Converged to working precision (or to what the caller needs): further steps cannot matter.
+            if (negligibleChange) {
                 break;
             }
         }

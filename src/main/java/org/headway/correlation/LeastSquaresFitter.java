@@ -700,7 +700,12 @@ public final class LeastSquaresFitter {
             if (!(qr.diagonalRatio() > 0.0)) {
                 break;
             }
-            double[] delta = qr.solveRefined(r, REFINEMENT_STEPS);
+            // The step is added to the parameters: digits of it below their rounding do not matter.
+            double[] negligible = new double[p];
+            for (int k = 0; k < p; k++) {
+                negligible[k] = 0x1p-53 * Math.abs(point[k]);
+            }
+            double[] delta = qr.solveRefined(r, REFINEMENT_STEPS, negligible);
             double relativeStep = 0.0;
             double[] trial = point.clone();
             for (int k = 0; k < p; k++) {
