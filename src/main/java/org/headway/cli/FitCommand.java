@@ -81,6 +81,13 @@ public final class FitCommand implements Callable<Integer> {
     @Option(names = "--weights", paramLabel = "COL", description = "column of weights w (minimises Σ w r²)")
     String weights;
 
+    @Option(
+            names = "--max-iterations",
+            defaultValue = "10000",
+            paramLabel = "N",
+            description = "iteration budget of the nonlinear solver (default: ${DEFAULT-VALUE})")
+    int maxIterations;
+
     @Option(names = "--compare", description = "fit the usual forms side by side, ranked by AICc")
     boolean compare;
 
@@ -113,7 +120,12 @@ public final class FitCommand implements Callable<Integer> {
         if (expression != null) {
             forms.add(new FitForm.UserExpression(expression, parseStart(start)));
         }
-        LeastSquaresFitter fitter = new LeastSquaresFitter();
+        LeastSquaresFitter fitter;
+        try {
+            fitter = new LeastSquaresFitter().withMaxIterations(maxIterations);
+        } catch (InputException e) {
+            throw new InputException("--max-iterations", e.problem());
+        }
         PrintWriter out = spec.commandLine().getOut();
         FitResult chosen;
         if (compare) {
@@ -257,7 +269,8 @@ public final class FitCommand implements Callable<Integer> {
                     .setIgnoreEmptyLines(true)
                     .get();
             List<String> names = new ArrayList<>();
-            List<List<Double>> values = new ArrayList<>();
+            List<double[]> values = new ArrayList<>();
+            int rows = 0;
             try (Reader reader = Files.newBufferedReader(file, StandardCharsets.UTF_8);
                     CSVParser parser = csv.parse(reader)) {
                 boolean header = true;
@@ -271,7 +284,7 @@ public final class FitCommand implements Callable<Integer> {
                                 name = name.substring(1);
                             }
                             names.add(name);
-                            values.add(new ArrayList<>());
+                            values.add(new double[1024]);
                         }
                         header = false;
                         continue;
@@ -281,16 +294,22 @@ public final class FitCommand implements Callable<Integer> {
                                 file + " line " + line,
                                 "has " + record.size() + " values but the header names " + names.size() + " columns");
                     }
+                    if (rows == values.get(0).length) {
+                        for (int c = 0; c < values.size(); c++) {
+                            values.set(c, java.util.Arrays.copyOf(values.get(c), 2 * rows));
+                        }
+                    }
                     for (int c = 0; c < record.size(); c++) {
                         String cell = record.get(c);
                         try {
-                            values.get(c).add(Double.parseDouble(cell));
+                            values.get(c)[rows] = Double.parseDouble(cell);
                         } catch (NumberFormatException e) {
                             throw new InputException(
                                     file + " line " + line + ", column " + names.get(c),
                                     "'" + cell + "' is not a number");
                         }
                     }
+                    rows++;
                 }
             } catch (NoSuchFileException e) {
                 throw new InputException(file.toString(), "file not found");
@@ -302,8 +321,8 @@ public final class FitCommand implements Callable<Integer> {
                 throw new InputException(file.toString(), "is empty; expected a header row and data rows");
             }
             List<double[]> columns = new ArrayList<>();
-            for (List<Double> v : values) {
-                columns.add(v.stream().mapToDouble(Double::doubleValue).toArray());
+            for (double[] v : values) {
+                columns.add(java.util.Arrays.copyOf(v, rows));
             }
             return new Table(file, names, columns);
         }

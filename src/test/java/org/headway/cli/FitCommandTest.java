@@ -148,4 +148,39 @@ class FitCommandTest {
         assertTrue(run.out().contains("log-space-retransformation"), run.out());
         assertTrue(run.out().contains("Fitted range: x from 77.6000 to 378.400"), run.out());
     }
+
+    @Test
+    void exhaustedBudgetPrintsTheResultAndExitsOne() throws Exception {
+        Path csv = misraCsv();
+        CliRun run = CliRun.of(
+                "fit",
+                csv.toString(),
+                "--y",
+                "y",
+                "--x",
+                "x",
+                "--expression",
+                "b1*(1-exp(-b2*x))",
+                "--start",
+                "b1=500,b2=1e-4",
+                "--max-iterations",
+                "1");
+        assertEquals(1, run.exitCode(), run.err());
+        assertTrue(run.out().contains("converged: NO"), run.out());
+        assertTrue(run.out().contains("fit-not-converged"), run.out());
+    }
+
+    @Test
+    void weightsColumnIsUsed() throws Exception {
+        // Weighted mean Σwy/Σw = (1·1 + 3·2 + 0.5·4)/4.5 (definition; common practice, no source).
+        Path csv = dir.resolve("w.csv");
+        Files.writeString(csv, "y,w\n1,1\n2,3\n4,0.5\n");
+        CliRun run = CliRun.of(
+                "fit", csv.toString(), "--y", "y", "--form", "constant", "--weights", "w", "--format", "json");
+        assertEquals(0, run.exitCode(), run.err());
+        JsonNode json = new ObjectMapper().readTree(run.out());
+        assertEquals(9.0 / 4.5, json.get("parameters").get(0).get("value").doubleValue(), 1e-15);
+        CliRun bad = CliRun.of("fit", csv.toString(), "--y", "y", "--form", "constant", "--weights", "y2");
+        assertEquals(2, bad.exitCode());
+    }
 }

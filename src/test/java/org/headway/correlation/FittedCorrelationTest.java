@@ -105,4 +105,33 @@ class FittedCorrelationTest {
         assertTrue(estimate.cautions().isEmpty());
         assertEquals(1, loss.evaluate(10).cautions().size());
     }
+
+    @Test
+    void twoInputFrictionFitUsesRoughness() {
+        // Haaland (1983) explicit form 1/√f = −1.8 log10((ε/D/3.7)^1.11 + 6.9/Re) (from memory),
+        // sampled exactly and refitted with its two coefficients free.
+        int n = 40;
+        double[] re = new double[n];
+        double[] rr = new double[n];
+        double[] f = new double[n];
+        for (int i = 0; i < n; i++) {
+            re[i] = 1e4 * Math.pow(10, (i % 8) / 2.0);
+            rr[i] = 1e-5 * Math.pow(10, i / 8 * 0.75);
+            double s = -1.8 * Math.log10(Math.pow(rr[i] / 3.7, 1.11) + 6.9 / re[i]);
+            f[i] = 1 / (s * s);
+        }
+        FitResult fit = new LeastSquaresFitter()
+                .fit(
+                        Observations.of("f", f, List.of("Re", "rr"), re, rr),
+                        new FitForm.UserExpression(
+                                "(k*log10((rr/3.7)^1.11 + c/Re))^(-2)", java.util.Map.of("k", -2.0, "c", 5.0)));
+        assertEquals(-1.8, fit.parameter("k").value(), 1e-9);
+        assertEquals(6.9, fit.parameter("c").value(), 1e-7);
+        FittedFrictionCorrelation friction = new FittedFrictionCorrelation("rig", fit.toCorrelation());
+        FrictionResult r = friction.evaluate(1e5, 1e-4);
+        double s = -1.8 * Math.log10(Math.pow(1e-4 / 3.7, 1.11) + 6.9 / 1e5);
+        assertEquals(1 / (s * s), r.frictionFactor(), 1e-10);
+        assertTrue(r.cautions().isEmpty(), r.cautions().toString());
+        assertEquals(1, friction.evaluate(1e5, 0.5).cautions().size(), "ε/D outside the fitted range");
+    }
 }
