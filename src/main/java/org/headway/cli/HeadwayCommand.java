@@ -20,7 +20,9 @@ import picocli.CommandLine.Command;
             SolveCommand.class,
             SheetCommand.class,
             FluidCommand.class,
-            CatalogCommand.class
+            CatalogCommand.class,
+            FitCommand.class,
+            GroupsCommand.class
         })
 public final class HeadwayCommand implements Runnable {
 
