@@ -22,14 +22,6 @@ import org.headway.friction.ValidityRange;
  */
 public final class FittedFrictionCorrelation implements FrictionCorrelation {
 
-    /**
-     * Reynolds number below which flow is taken as laminar and above which as turbulent; between
-     * them, transitional (common practice, no source).
-     */
-    static final double LAMINAR_LIMIT = 2300.0;
-
-    static final double TURBULENT_LIMIT = 4000.0;
-
     private final String id;
     private final FittedCorrelation fit;
 
@@ -125,9 +117,7 @@ public final class FittedFrictionCorrelation implements FrictionCorrelation {
                             relativeRoughness),
                     FittedCorrelation.CITATION));
         }
-        FlowRegime regime = reynolds < LAMINAR_LIMIT
-                ? FlowRegime.LAMINAR
-                : reynolds > TURBULENT_LIMIT ? FlowRegime.TURBULENT : FlowRegime.TRANSITIONAL;
+        FlowRegime regime = org.headway.friction.FlowRegimes.of(reynolds);
         return new FrictionResult(f, reynolds, relativeRoughness, regime, id, 0, cautions);
     }
 }

@@ -232,8 +232,30 @@ public final class ProjectResolver {
         return InputException.requirePositive(field, v);
     }
 
+    /** Prefix of a friction method or fitting kind that names a saved fitted correlation. */
+    public static final String FITTED_PREFIX = "fitted:";
+
     private FrictionCorrelation friction(String id) {
+        if (id.startsWith(FITTED_PREFIX)) {
+            Path file = fittedFile(id);
+            return new org.headway.correlation.FittedFrictionCorrelation(stem(file), FittedCorrelationFile.load(file));
+        }
         return FrictionMethods.byId(id);
+    }
+
+    private Path fittedFile(String id) {
+        String name = id.substring(FITTED_PREFIX.length()).strip();
+        if (name.isEmpty()) {
+            throw new InputException(
+                    "", "\"" + FITTED_PREFIX + "\" must be followed by the path of a fitted-correlation file");
+        }
+        return baseFolder.resolve(name).normalize();
+    }
+
+    private static String stem(Path file) {
+        String n = file.getFileName().toString();
+        int dot = n.lastIndexOf('.');
+        return dot > 0 ? n.substring(0, dot) : n;
     }
 
     private Segment segment(Project.SegmentSpec spec, FluidState fluid) {
@@ -312,6 +334,12 @@ public final class ProjectResolver {
                         replaces = fs.kind();
                     }
                     fitting = new GivenLossCoefficient(fs.kind(), k, replaces);
+                } else if (fs.kind().startsWith(FITTED_PREFIX)) {
+                    Path file = fittedFile(fs.kind());
+                    fitting = new org.headway.system.FittedComponentLoss(
+                            new org.headway.correlation.FittedLossCoefficient(
+                                    stem(file), FittedCorrelationFile.load(file)),
+                            "fitted by the engineer, " + file.getFileName());
                 } else {
                     fitting = catalog.fitting(fs.kind());
                 }
