@@ -14,7 +14,7 @@ import picocli.CommandLine.Command;
             "Head loss for pipe runs, friction checks of rig data, and review sheets.",
             "Results are estimates for design review against local codes by a qualified engineer."
         },
-        subcommands = {CommandLine.HelpCommand.class})
+        subcommands = {CommandLine.HelpCommand.class, FrictionCommand.class})
 public final class HeadwayCommand implements Runnable {
 
     /** Exit code for success. */
