@@ -54,7 +54,7 @@ class AutoFrictionTest {
         double expected = (64 / FlowRegimes.LAMINAR_LIMIT + ColebrookReference.frictionFactor(4000, rr)) / 2;
         FrictionResult result = auto.evaluate(mid, rr);
         assertEquals(expected, result.frictionFactor(), 1e-14 * expected);
-        assertEquals(auto.frictionFactor(mid, rr), result.frictionFactor(), 0.0);
+        assertEquals(auto.frictionFactor(mid, rr), result.frictionFactor(), 1e-14 * expected);
         assertEquals(AutoFriction.TRANSITIONAL_METHOD, result.method());
         assertEquals(FlowRegime.TRANSITIONAL, result.regime());
         Caution caution = result.cautions().get(0);

@@ -137,6 +137,35 @@ class Colebrook1939Test {
     }
 
     @Test
+    void hotPathMatchesTheResidualCheckedSolveOverItsWholeBand() {
+        // The hot path's fixed schedule is trusted only because this grid covers its band:
+        // Re 1e3..1e15 in steps of 0.002 decades, ε/D from 0 to just below 1.
+        double[] roughness = {
+            0, 1e-9, 1e-7, 1e-6, 1e-5, 1e-4, 1e-3, 3e-3, 1e-2, 3e-2, 5e-2, 0.1, 0.3, 0.6, 0.9, Math.nextDown(1.0)
+        };
+        for (double rr : roughness) {
+            for (double exponent = 3; exponent <= 15; exponent += 0.002) {
+                double re = Math.pow(10, exponent);
+                double hot = solver.frictionFactor(re, rr);
+                double checked = solver.solve(re, rr).frictionFactor();
+                assertEquals(checked, hot, 1e-14 * checked, "Re " + re + ", ε/D " + rr);
+                double x = 1 / Math.sqrt(hot);
+                double residual = x + 2 * Math.log10(rr / 3.7 + 2.51 * x / re);
+                assertTrue(Math.abs(residual) <= 1e-14 * x, "residual " + residual + " at Re " + re + ", ε/D " + rr);
+            }
+        }
+    }
+
+    @Test
+    void approximateLogarithmMeetsItsStatedError() {
+        // Against java.lang.Math.log (IEEE-accurate to 1 ulp): stated absolute error below 1e-9.
+        for (double v = 1e-300; v < 1e300; v *= 1.0137) {
+            assertEquals(
+                    Math.log(v), Colebrook1939.approximateLn(v), 1e-9 * Math.max(1, Math.abs(Math.log(v))), "at " + v);
+        }
+    }
+
+    @Test
     void cautionsOutsideTheChart() {
         FrictionResult transitional = solver.evaluate(3000, 1e-4);
         assertTrue(transitional.cautions().stream().anyMatch(c -> c.code().equals("transitional-flow")));
