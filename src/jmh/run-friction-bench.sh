@@ -12,8 +12,8 @@ mvn -B -q -Pjmh test-compile
 mvn -B -q -Pjmh dependency:build-classpath -DincludeScope=test -Dmdep.outputFile="$out/cp.txt" >/dev/null
 cp="target/test-classes:target/classes:$(cat "$out/cp.txt")"
 
-echo "== writing the pairs and Java's values"
-java -cp "$cp" org.headway.friction.BenchPairs "$out"
+echo "== writing the pairs and Java's values; CPU-time pass, pinned to CPU $cpu"
+taskset -c "$cpu" java -Xmx2g -cp "$cp" org.headway.friction.BenchPairs "$out"
 
 echo "== JMH, one thread, pinned to CPU $cpu"
 taskset -c "$cpu" java -Xmx2g -cp "$cp" org.openjdk.jmh.Main 'ColebrookBenchmark' -f 1 -t 1 \
@@ -28,6 +28,7 @@ import json, sys, os
 folder = sys.argv[1]
 jmh = {r["benchmark"].rsplit(".", 1)[1]: r["primaryMetric"] for r in json.load(open(os.path.join(folder, "jmh.json")))}
 peer = json.load(open(os.path.join(folder, "peer.json")))
+cpu = json.load(open(os.path.join(folder, "java-cpu.json")))
 hot = jmh["solveHotPath"]
 print()
 print("Colebrook-White over %d pairs, one core" % peer["pairs"])
@@ -39,6 +40,9 @@ for name in ("solveHotPath", "evaluateWithCautions", "auto"):
 print("%-34s %12.1f %14.3e %16.2e" % ("NumPy/SciPy Lambert W (best of 5)", peer["peer_ns_per_op"], peer["peer_solves_per_s"], peer["peer_max_rel_error"]))
 print("peer median of 5: %.1f ns/op" % peer["peer_ns_per_op_median"])
 print("throughput ratio Java hot path / peer: %.2fx" % (peer["peer_ns_per_op"] / hot["score"]))
+print("CPU time per solve (thread/process CPU clock, best pass): Java hot path %.1f ns, Java auto %.1f ns,"
+      " peer %.1f ns -> ratio %.2fx" % (cpu["hot_cpu_ns_per_op"], cpu["auto_cpu_ns_per_op"], peer["peer_cpu_ns_per_op"],
+      peer["peer_cpu_ns_per_op"] / cpu["hot_cpu_ns_per_op"]))
 print("errors against: %s (%d points)" % (peer["reference"], peer["reference_points"]))
 print("peer vs Java over all pairs: max rel diff %.2e; peer non-finite values: %d; Lambert-W share %.3f" % (
     peer["peer_vs_java_max_rel_diff_all_pairs"], peer["peer_nan_count"], peer["peer_lambertw_share"]))

@@ -1,6 +1,8 @@
 package org.headway.friction;
 
 import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
 import java.nio.file.Files;
@@ -12,7 +14,8 @@ import java.util.SplittableRandom;
  * 4e3..1e8; ε/D zero for one pair in ten, otherwise log-uniform over 1e-6..5e-2; fixed seed.
  *
  * <p>{@code main(folder)} writes {@code re.f64}, {@code rr.f64} and Java's friction factors {@code
- * java-f.f64} as little-endian float64 arrays for the peer script to read.
+ * java-f.f64} as little-endian float64 arrays for the peer script to read, and {@code
+ * java-cpu.json} with the thread CPU time per solve.
  */
 public final class BenchPairs {
 
@@ -61,9 +64,40 @@ public final class BenchPairs {
         for (int i = 0; i < COUNT; i++) {
             f[i] = solver.frictionFactor(pairs[0][i], pairs[1][i]);
         }
+        Files.writeString(folder.resolve("java-cpu.json"), cpuTimes(pairs[0], pairs[1]));
         write(folder.resolve("re.f64"), pairs[0]);
         write(folder.resolve("rr.f64"), pairs[1]);
         write(folder.resolve("java-f.f64"), f);
+    }
+
+    /**
+     * CPU time of the thread per solve, best of 15 passes after 10 warm-up passes: a second opinion
+     * beside JMH's wall-clock score, less disturbed when other work shares the cores.
+     */
+    private static String cpuTimes(double[] re, double[] rr) {
+        ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+        Colebrook1939 solver = Colebrook1939.solver();
+        AutoFriction auto = new AutoFriction();
+        double sink = 0;
+        long bestHot = Long.MAX_VALUE;
+        long bestAuto = Long.MAX_VALUE;
+        for (int pass = 0; pass < 25; pass++) {
+            long start = threads.getCurrentThreadCpuTime();
+            for (int i = 0; i < re.length; i++) {
+                sink += solver.frictionFactor(re[i], rr[i]);
+            }
+            long middle = threads.getCurrentThreadCpuTime();
+            for (int i = 0; i < re.length; i++) {
+                sink += auto.frictionFactor(re[i], rr[i]);
+            }
+            long end = threads.getCurrentThreadCpuTime();
+            if (pass >= 10) {
+                bestHot = Math.min(bestHot, middle - start);
+                bestAuto = Math.min(bestAuto, end - middle);
+            }
+        }
+        return "{\"hot_cpu_ns_per_op\": " + (double) bestHot / re.length + ", \"auto_cpu_ns_per_op\": "
+                + (double) bestAuto / re.length + ", \"checksum\": " + sink + "}";
     }
 
     private static void write(Path file, double[] values) throws IOException {

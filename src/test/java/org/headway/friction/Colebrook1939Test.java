@@ -146,6 +146,8 @@ class Colebrook1939Test {
         for (double rr : roughness) {
             for (double exponent = 3; exponent <= 15; exponent += 0.002) {
                 double re = Math.pow(10, exponent);
+                double scheduled = Colebrook1939.scheduledInverseRoot(re, rr / 3.7, 2.51 / re);
+                assertTrue(scheduled > 0, "the schedule's entry check failed at Re " + re + ", ε/D " + rr);
                 double hot = solver.frictionFactor(re, rr);
                 double checked = solver.solve(re, rr).frictionFactor();
                 assertEquals(checked, hot, 1e-14 * checked, "Re " + re + ", ε/D " + rr);
@@ -157,12 +159,14 @@ class Colebrook1939Test {
     }
 
     @Test
-    void approximateLogarithmMeetsItsStatedError() {
-        // Against java.lang.Math.log (IEEE-accurate to 1 ulp): stated absolute error below 1e-9.
+    void crudeLogarithmMeetsItsStatedError() {
+        // Against java.lang.Math.log (IEEE-accurate to 1 ulp): stated absolute error at most 0.06,
+        // reached near mantissa 1/ln 2 where ln m − ln 2 (m − 1) peaks at 0.0597.
+        double worst = 0;
         for (double v = 1e-300; v < 1e300; v *= 1.0137) {
-            assertEquals(
-                    Math.log(v), Colebrook1939.approximateLn(v), 1e-9 * Math.max(1, Math.abs(Math.log(v))), "at " + v);
+            worst = Math.max(worst, Math.abs(Math.log(v) - Colebrook1939.crudeLn(v)));
         }
+        assertTrue(worst <= 0.06 && worst > 0.059, "worst " + worst);
     }
 
     @Test
