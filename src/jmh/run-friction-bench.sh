@@ -43,6 +43,8 @@ print("throughput ratio Java hot path / peer: %.2fx" % (peer["peer_ns_per_op"] /
 print("CPU time per solve (thread/process CPU clock, best pass): Java hot path %.1f ns, Java auto %.1f ns,"
       " peer %.1f ns -> ratio %.2fx" % (cpu["hot_cpu_ns_per_op"], cpu["auto_cpu_ns_per_op"], peer["peer_cpu_ns_per_op"],
       peer["peer_cpu_ns_per_op"] / cpu["hot_cpu_ns_per_op"]))
+print("variant peer, Wright omega for every pair: CPU %.1f ns/op, max rel error %.2e -> Java hot path ratio %.2fx" % (
+      peer["omega_cpu_ns_per_op"], peer["omega_max_rel_error"], peer["omega_cpu_ns_per_op"] / cpu["hot_cpu_ns_per_op"]))
 print("errors against: %s (%d points)" % (peer["reference"], peer["reference_points"]))
 print("peer vs Java over all pairs: max rel diff %.2e; peer non-finite values: %d; Lambert-W share %.3f" % (
     peer["peer_vs_java_max_rel_diff_all_pairs"], peer["peer_nan_count"], peer["peer_lambertw_share"]))
