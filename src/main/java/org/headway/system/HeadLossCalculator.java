@@ -253,7 +253,7 @@ public final class HeadLossCalculator {
             double velocity = flow / s.area();
             double velocityHead = velocity * velocity / (2 * Gravity.STANDARD);
             double reynolds = rho * velocity * s.innerDiameter() / mu;
-            double f = evaluateFriction(run, s, reynolds).frictionFactor();
+            double f = frictionFactorOnly(run, s, reynolds);
             double k = s.extraLossCoefficient() + fittingK(s, reynolds);
             double major = s.length() == 0 ? 0 : f * s.length() / s.innerDiameter() * velocityHead;
             total += major + k * velocityHead;
@@ -275,6 +275,14 @@ public final class HeadLossCalculator {
     private static FrictionResult evaluateFriction(PipeRun run, Segment s, double reynolds) {
         try {
             return run.friction().evaluate(reynolds, s.relativeRoughness());
+        } catch (InputException e) {
+            throw e.at("segment " + s.name() + ", ");
+        }
+    }
+
+    private static double frictionFactorOnly(PipeRun run, Segment s, double reynolds) {
+        try {
+            return run.friction().frictionFactor(reynolds, s.relativeRoughness());
         } catch (InputException e) {
             throw e.at("segment " + s.name() + ", ");
         }

@@ -226,4 +226,22 @@ class SolveModesTest {
         assertTrue(band.headLoss().low() < band.headLoss().nominal());
         assertTrue(band.headLoss().high() > band.headLoss().nominal());
     }
+
+    @Test
+    void bandTakesTurbulentFrictionInTransitionalFlow() {
+        // Re ≈ 3000 in the 80 mm pipe: the auto blend is below Colebrook there, so the high end must use Colebrook.
+        FluidState oil = RunFixtures.liquid(870, 0.02, 100);
+        Segment s = Segment.builder("mid").length(100).bore(0.08, 0).build();
+        double flow = 3000 * 0.02 / (870 * 0.08) * Math.PI * 0.08 * 0.08 / 4;
+        PipeRun run = gravityRun(oil, 0, "auto").withSegments(List.of(s)).withDesignFlow(flow);
+        UncertaintyBand band = UncertaintyBand.evaluate(run);
+        double u = run.flowUncertainty(); // the high end is also at Q(1 + u)
+        double colebrook = org.headway.friction.FrictionMethods.byId("colebrook")
+                .evaluate(3000 * (1 + u), 0)
+                .frictionFactor();
+        double v = flow * (1 + u) / s.area();
+        double expectedHigh = colebrook * 100 / 0.08 * v * v / (2 * Gravity.STANDARD);
+        assertEquals(expectedHigh, band.headLoss().high(), expectedHigh * 1e-12);
+        assertTrue(band.headLoss().high() > band.headLoss().nominal());
+    }
 }
