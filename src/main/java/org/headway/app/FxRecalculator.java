@@ -40,7 +40,9 @@ final class FxRecalculator implements Recalculator {
 
     @Override
     public boolean busy() {
-        return pending != null || (running != null && !running.isDone());
+        // The task's FX-side state, not FutureTask.isDone(): onSucceeded can run before the worker
+        // thread has marked the future done, which would leave "recalculating" showing for good.
+        return pending != null || (running != null && running.isRunning());
     }
 
     private void start() {

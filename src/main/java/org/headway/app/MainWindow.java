@@ -108,6 +108,7 @@ public final class MainWindow {
     public void attach(Stage stage, double width, double height) {
         stage.setScene(scene(width, height));
         stage.titleProperty().bind(editor.windowTitleProperty());
+        stage.setOnShown(e -> editorView.focusTable());
         stage.setOnCloseRequest(e -> {
             if (!editor.confirmDiscard()) {
                 e.consume();

@@ -171,7 +171,8 @@ public final class ProjectEditor {
             int number,
             String name,
             String length,
-            String pipe,
+            String material,
+            String size,
             String bore,
             String roughness,
             String fittings,
@@ -183,16 +184,26 @@ public final class ProjectEditor {
         List<Project.SegmentSpec> segments = project.get().segments();
         for (int i = 0; i < segments.size(); i++) {
             Project.SegmentSpec s = segments.get(i);
-            String pipe = s.pipe()
-                    .map(x -> x.material() + ", " + x.size() + (x.schedule().isEmpty() ? "" : " / " + x.schedule()))
+            String material = s.pipe()
+                    .map(x -> {
+                        try {
+                            return catalog.material(x.material()).name();
+                        } catch (InputException e) {
+                            return x.material() + " (unknown)";
+                        }
+                    })
                     .orElse("explicit bore");
+            String size = s.pipe()
+                    .map(x -> x.size() + (x.schedule().isEmpty() ? "" : " / " + x.schedule()))
+                    .orElse("—");
             double bore = boreOf(s);
             double roughness = roughnessOf(s);
             list.add(new SegmentSummary(
                     i + 1,
                     s.name(),
                     s.length(),
-                    pipe,
+                    material,
+                    size,
                     Double.isNaN(bore) ? "?" : text(bore, QuantityKind.DIAMETER),
                     Double.isNaN(roughness) ? "?" : text(roughness, QuantityKind.ROUGHNESS),
                     FittingsText.summary(s.fittings()),

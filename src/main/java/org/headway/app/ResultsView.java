@@ -32,16 +32,21 @@ final class ResultsView extends VBox {
         TableView<ResultsModel.SegmentRow> table = new TableView<>(model.rows());
         table.setId("results-table");
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
-        table.getColumns().add(column("#", 30, r -> String.valueOf(r.number())));
-        table.getColumns().add(column("Segment", 150, ResultsModel.SegmentRow::name));
-        table.getColumns().add(column("Velocity V", 85, ResultsModel.SegmentRow::velocity));
-        table.getColumns().add(column("Re", 85, ResultsModel.SegmentRow::reynolds));
-        table.getColumns().add(column("Regime", 80, ResultsModel.SegmentRow::regime));
-        table.getColumns().add(column("f", 60, ResultsModel.SegmentRow::frictionFactor));
-        table.getColumns().add(column("Friction h_f", 85, ResultsModel.SegmentRow::frictionLoss));
-        table.getColumns().add(column("ΣK", 50, ResultsModel.SegmentRow::lossCoefficient));
-        table.getColumns().add(column("Fittings h_m", 85, ResultsModel.SegmentRow::minorLoss));
-        table.getColumns().add(column("Loss h_f + h_m", 95, ResultsModel.SegmentRow::totalLoss));
+        table.getColumns()
+                .add(column("#", 28, "segment number, as on the friction chart", r -> String.valueOf(r.number())));
+        table.getColumns().add(column("Segment", 140, "segment name", ResultsModel.SegmentRow::name));
+        table.getColumns().add(column("V", 72, "mean velocity V = 4Q/(πD²)", ResultsModel.SegmentRow::velocity));
+        table.getColumns().add(column("Re", 70, "Reynolds number Re = ρVD/μ", ResultsModel.SegmentRow::reynolds));
+        table.getColumns()
+                .add(column(
+                        "Regime", 72, "laminar below Re 2300, turbulent from 4000", ResultsModel.SegmentRow::regime));
+        table.getColumns().add(column("f", 56, "Darcy friction factor", ResultsModel.SegmentRow::frictionFactor));
+        table.getColumns()
+                .add(column("h_f", 72, "friction loss h_f = f (L/D) V²/(2g)", ResultsModel.SegmentRow::frictionLoss));
+        table.getColumns()
+                .add(column("ΣK", 46, "sum of fitting loss coefficients", ResultsModel.SegmentRow::lossCoefficient));
+        table.getColumns().add(column("h_m", 72, "fittings loss h_m = ΣK V²/(2g)", ResultsModel.SegmentRow::minorLoss));
+        table.getColumns().add(column("h_f + h_m", 80, "segment head loss", ResultsModel.SegmentRow::totalLoss));
         table.setPrefHeight(220);
         table.setPlaceholder(new Label("No results yet"));
 
@@ -61,6 +66,22 @@ final class ResultsView extends VBox {
     }
 
     private void fillTotals(ResultsModel model) {
+        // Same lines as before (the usual case while editing): change the values in place, no flicker.
+        if (totals.getChildren().size() == 2 * model.totals().size()) {
+            boolean same = true;
+            for (int i = 0; i < model.totals().size() && same; i++) {
+                same = ((Label) totals.getChildren().get(2 * i))
+                        .getText()
+                        .equals(model.totals().get(i).label());
+            }
+            if (same) {
+                for (int i = 0; i < model.totals().size(); i++) {
+                    ((Label) totals.getChildren().get(2 * i + 1))
+                            .setText(model.totals().get(i).value());
+                }
+                return;
+            }
+        }
         totals.getChildren().clear();
         int row = 0;
         for (ResultsModel.TotalRow t : model.totals()) {
@@ -75,8 +96,11 @@ final class ResultsView extends VBox {
     }
 
     private static TableColumn<ResultsModel.SegmentRow, String> column(
-            String title, double width, Function<ResultsModel.SegmentRow, String> value) {
-        TableColumn<ResultsModel.SegmentRow, String> c = new TableColumn<>(title);
+            String title, double width, String tip, Function<ResultsModel.SegmentRow, String> value) {
+        TableColumn<ResultsModel.SegmentRow, String> c = new TableColumn<>();
+        Label header = new Label(title);
+        header.setTooltip(new javafx.scene.control.Tooltip(tip));
+        c.setGraphic(header);
         c.setPrefWidth(width);
         c.setSortable(false);
         c.setCellValueFactory(d -> new ReadOnlyStringWrapper(value.apply(d.getValue())));

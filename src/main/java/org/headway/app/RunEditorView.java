@@ -149,6 +149,11 @@ final class RunEditorView extends VBox {
         table.getSelectionModel().select(0);
     }
 
+    /** Puts the keyboard in the segment table (rather than in the title field) when the window opens. */
+    void focusTable() {
+        table.requestFocus();
+    }
+
     /** Selects a segment, e.g. from the cautions panel. */
     void select(int index) {
         table.getSelectionModel().select(index);
@@ -186,14 +191,14 @@ final class RunEditorView extends VBox {
         table.setPrefHeight(180);
         table.setMinHeight(120);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
-        table.getColumns().add(column("#", 30, s -> String.valueOf(s.number())));
-        table.getColumns().add(column("Name", 150, ProjectEditor.SegmentSummary::name));
-        table.getColumns().add(column("Length", 70, ProjectEditor.SegmentSummary::length));
-        table.getColumns().add(column("Pipe", 160, ProjectEditor.SegmentSummary::pipe));
-        table.getColumns().add(column("Bore", 75, ProjectEditor.SegmentSummary::bore));
-        table.getColumns().add(column("ε", 75, ProjectEditor.SegmentSummary::roughness));
-        table.getColumns().add(column("Fittings", 80, ProjectEditor.SegmentSummary::fittings));
-        table.getColumns().add(column("Rise", 60, ProjectEditor.SegmentSummary::elevation));
+        table.getColumns().add(column("#", 28, s -> String.valueOf(s.number())));
+        table.getColumns().add(column("Name", 120, ProjectEditor.SegmentSummary::name));
+        table.getColumns().add(column("Length", 52, ProjectEditor.SegmentSummary::length));
+        table.getColumns().add(column("Material", 130, ProjectEditor.SegmentSummary::material));
+        table.getColumns().add(column("Size", 48, ProjectEditor.SegmentSummary::size));
+        table.getColumns().add(column("Bore", 72, ProjectEditor.SegmentSummary::bore));
+        table.getColumns().add(column("Fittings", 70, ProjectEditor.SegmentSummary::fittings));
+        table.getColumns().add(column("Rise", 50, ProjectEditor.SegmentSummary::elevation));
         table.setPlaceholder(new Label("No segments"));
     }
 
@@ -273,8 +278,9 @@ final class RunEditorView extends VBox {
                 t -> set(SegmentField.ELEVATION, t));
         refreshers.add(() -> {
             boolean catalogPipe = spec().pipe().isPresent();
-            bore.setPromptText(catalogPipe ? "catalog bore (type to override)" : "required");
-            rough.setPromptText(catalogPipe ? "catalog value (type to override)" : "required");
+            ProjectEditor.SegmentSummary summary = editor.summaries().get(selected());
+            bore.setPromptText(catalogPipe ? "catalog: " + summary.bore() + " (type to override)" : "required");
+            rough.setPromptText(catalogPipe ? "catalog: " + summary.roughness() + " (type to override)" : "required");
         });
         Label hint = new Label(
                 "Fittings: catalog ids separated by commas, with ×N for a count and K=… to give a"

@@ -49,5 +49,17 @@ class ScreenshotTest {
             ImageIO.write(SwingFXUtils.fromFXImage(image[0], null), "png", file.toFile());
             assertTrue(Files.size(file) > 10_000, file + " holds a drawn window");
         }
+        // A trickle through the run: transitional flow raises cautions, so the panel opens.
+        robot.interact(() -> {
+            fx.window.tabs().getSelectionModel().select(0);
+            fx.editor.setFlow("0.12 L/s");
+        });
+        Thread.sleep(FxRecalculator.DEBOUNCE_MS * 2L);
+        fx.awaitResults();
+        assertTrue(fx.results.specificCautionCount() > 0, "a trickle flow raises cautions");
+        Path file = FOLDER.resolve("cautions.png");
+        WritableImage[] image = new WritableImage[1];
+        robot.interact(() -> image[0] = stage.getScene().snapshot(null));
+        ImageIO.write(SwingFXUtils.fromFXImage(image[0], null), "png", file.toFile());
     }
 }
