@@ -41,6 +41,10 @@ public final class MainWindow {
     /** Tab titles, also used by the screenshot test. */
     static final List<String> TABS = List.of("Results", "Grade lines", "System curve", "Friction chart");
 
+    private static final KeyCombination UNDO = KeyCombination.keyCombination("Shortcut+Z");
+    private static final KeyCombination REDO = KeyCombination.keyCombination("Shortcut+Y");
+    private static final KeyCombination REDO_ALT = KeyCombination.keyCombination("Shortcut+Shift+Z");
+
     private final ProjectEditor editor;
     private final ResultsModel results;
     private final Dialogs dialogs;
@@ -109,6 +113,17 @@ public final class MainWindow {
         stage.setScene(scene(width, height));
         stage.titleProperty().bind(editor.windowTitleProperty());
         stage.setOnShown(e -> editorView.focusTable());
+        // Undo and redo act on the project even while a text field has the keyboard; a text field would
+        // otherwise take the keys for its own typing history and the menu accelerators would never fire.
+        stage.getScene().addEventFilter(javafx.scene.input.KeyEvent.KEY_PRESSED, e -> {
+            if (UNDO.match(e)) {
+                e.consume();
+                editor.undo();
+            } else if (REDO.match(e) || REDO_ALT.match(e)) {
+                e.consume();
+                editor.redo();
+            }
+        });
         stage.setOnCloseRequest(e -> {
             if (!editor.confirmDiscard()) {
                 e.consume();

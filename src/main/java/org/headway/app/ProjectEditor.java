@@ -201,15 +201,24 @@ public final class ProjectEditor {
             list.add(new SegmentSummary(
                     i + 1,
                     s.name(),
-                    s.length(),
+                    shown(s.length(), QuantityKind.LENGTH),
                     material,
                     size,
                     Double.isNaN(bore) ? "?" : text(bore, QuantityKind.DIAMETER),
                     Double.isNaN(roughness) ? "?" : text(roughness, QuantityKind.ROUGHNESS),
                     FittingsText.summary(s.fittings()),
-                    s.elevationChange().isEmpty() ? "0" : s.elevationChange()));
+                    s.elevationChange().isEmpty() ? "0" : shown(s.elevationChange(), QuantityKind.LENGTH)));
         }
         return list;
+    }
+
+    /** Typed text re-expressed in the shown units, or the text itself when it does not parse. */
+    private String shown(String typed, QuantityKind kind) {
+        try {
+            return text(Quantities.parse(typed, kind), kind);
+        } catch (InputException e) {
+            return typed;
+        }
     }
 
     /** Roughness of a segment as it stands (m), NaN when it cannot be read. */
@@ -591,7 +600,9 @@ public final class ProjectEditor {
         try {
             next = edit.next();
         } catch (InputException e) {
-            messages.put(key, plain(e) + " — still using " + current(key));
+            // The message sits beside its field, so the field's own name is left out; an item number stays.
+            String text = e.where().contains("item") ? plain(e) : e.problem();
+            messages.put(key, text + " — still using " + current(key));
             return false;
         }
         messages.remove(key);

@@ -34,19 +34,19 @@ final class ResultsView extends VBox {
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         table.getColumns()
                 .add(column("#", 28, "segment number, as on the friction chart", r -> String.valueOf(r.number())));
-        table.getColumns().add(column("Segment", 140, "segment name", ResultsModel.SegmentRow::name));
-        table.getColumns().add(column("V", 72, "mean velocity V = 4Q/(πD²)", ResultsModel.SegmentRow::velocity));
-        table.getColumns().add(column("Re", 70, "Reynolds number Re = ρVD/μ", ResultsModel.SegmentRow::reynolds));
+        table.getColumns().add(column("Segment", 120, "segment name", ResultsModel.SegmentRow::name));
+        table.getColumns().add(column("V", 88, "mean velocity V = 4Q/(πD²)", ResultsModel.SegmentRow::velocity));
+        table.getColumns().add(column("Re", 62, "Reynolds number Re = ρVD/μ", ResultsModel.SegmentRow::reynolds));
         table.getColumns()
                 .add(column(
                         "Regime", 72, "laminar below Re 2300, turbulent from 4000", ResultsModel.SegmentRow::regime));
         table.getColumns().add(column("f", 56, "Darcy friction factor", ResultsModel.SegmentRow::frictionFactor));
         table.getColumns()
-                .add(column("h_f", 72, "friction loss h_f = f (L/D) V²/(2g)", ResultsModel.SegmentRow::frictionLoss));
+                .add(column("h_f", 88, "friction loss h_f = f (L/D) V²/(2g)", ResultsModel.SegmentRow::frictionLoss));
         table.getColumns()
                 .add(column("ΣK", 46, "sum of fitting loss coefficients", ResultsModel.SegmentRow::lossCoefficient));
-        table.getColumns().add(column("h_m", 72, "fittings loss h_m = ΣK V²/(2g)", ResultsModel.SegmentRow::minorLoss));
-        table.getColumns().add(column("h_f + h_m", 80, "segment head loss", ResultsModel.SegmentRow::totalLoss));
+        table.getColumns().add(column("h_m", 88, "fittings loss h_m = ΣK V²/(2g)", ResultsModel.SegmentRow::minorLoss));
+        table.getColumns().add(column("h_f + h_m", 88, "segment head loss", ResultsModel.SegmentRow::totalLoss));
         table.setPrefHeight(220);
         table.setPlaceholder(new Label("No results yet"));
 

@@ -192,8 +192,8 @@ final class RunEditorView extends VBox {
         table.setMinHeight(120);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         table.getColumns().add(column("#", 28, s -> String.valueOf(s.number())));
-        table.getColumns().add(column("Name", 120, ProjectEditor.SegmentSummary::name));
-        table.getColumns().add(column("Length", 52, ProjectEditor.SegmentSummary::length));
+        table.getColumns().add(column("Name", 112, ProjectEditor.SegmentSummary::name));
+        table.getColumns().add(column("Length", 58, ProjectEditor.SegmentSummary::length));
         table.getColumns().add(column("Material", 130, ProjectEditor.SegmentSummary::material));
         table.getColumns().add(column("Size", 48, ProjectEditor.SegmentSummary::size));
         table.getColumns().add(column("Bore", 72, ProjectEditor.SegmentSummary::bore));

@@ -106,6 +106,11 @@ class MainWindowUiTest {
         String expected = engineTotal("610 m");
         WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> expected.equals(totalShown(robot)));
         assertEquals("610 m", fx.editor.project().segments().get(2).length());
+        // Ctrl+Z with the keyboard still in the length field undoes the edit, not just the typing.
+        robot.press(KeyCode.CONTROL).press(KeyCode.Z).release(KeyCode.Z).release(KeyCode.CONTROL);
+        String original = engineTotal("420 m");
+        WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> original.equals(totalShown(robot)));
+        assertEquals("420 m", fx.editor.project().segments().get(2).length());
     }
 
     @Test

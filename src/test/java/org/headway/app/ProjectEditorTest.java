@@ -38,7 +38,7 @@ class ProjectEditorTest {
         assertFalse(editor.setSegmentField(2, SegmentField.LENGTH, "420 kPa"));
         assertEquals("420 m", editor.project().segments().get(2).length());
         String message = editor.messages().get("segments[2].length");
-        assertTrue(message.contains("420 kPa") && message.contains("length expected"), message);
+        assertTrue(message.startsWith("length expected, got \"420 kPa\""), message);
         assertTrue(message.endsWith("still using 420 m"), message);
         assertFalse(editor.dirtyProperty().get(), "a rejected edit changes nothing");
 
