@@ -23,6 +23,10 @@ public final class HeadwayApp extends Application {
 
     @Override
     public void start(Stage stage) {
+        boolean report = Boolean.getBoolean("headway.reportStartup");
+        if (report) {
+            System.err.println("headway: toolkit up " + sinceJvmStart() + " ms after JVM start");
+        }
         FxDialogs dialogs = new FxDialogs(stage);
         ProjectEditor editor = new ProjectEditor(Catalog.bundled(), dialogs, RecentFiles.inUserDataFolder());
         List<String> args = getParameters().getUnnamed();
@@ -35,7 +39,8 @@ public final class HeadwayApp extends Application {
         ResultsModel results = new ResultsModel(editor, new FxRecalculator(), version());
         MainWindow window = new MainWindow(editor, results, dialogs);
         window.attach(stage, WIDTH, HEIGHT);
-        if (Boolean.getBoolean("headway.reportStartup")) {
+        if (report) {
+            System.err.println("headway: window built " + sinceJvmStart() + " ms after JVM start");
             reportFirstFrame();
         }
         stage.show();
@@ -57,6 +62,10 @@ public final class HeadwayApp extends Application {
                 }
             }
         }.start();
+    }
+
+    private static long sinceJvmStart() {
+        return System.currentTimeMillis() - ManagementFactory.getRuntimeMXBean().getStartTime();
     }
 
     /** Version from the jar manifest, or a development marker when run from classes. */

@@ -284,8 +284,13 @@ public final class MainWindow {
         status.textProperty().bind(task.messageProperty());
         progress.setVisible(true);
         cancel.setVisible(true);
-        task.setOnSucceeded(e -> finishExport("Exported " + task.getValue().size() + " files beside "
-                + target.get().getFileName()));
+        task.setOnSucceeded(e -> finishExport("Exported "
+                + String.join(
+                        ", ",
+                        task.getValue().stream()
+                                .map(p -> p.getFileName().toString())
+                                .toList())
+                + " to " + target.get().toAbsolutePath().getParent()));
         task.setOnCancelled(e -> finishExport("Export cancelled; no files kept"));
         task.setOnFailed(e -> {
             Throwable t = task.getException();
