@@ -113,6 +113,8 @@ public final class MainWindow {
         stage.setScene(scene(width, height));
         stage.titleProperty().bind(editor.windowTitleProperty());
         stage.setOnShown(e -> editorView.focusTable());
+        stage.setMinWidth(1000);
+        stage.setMinHeight(640);
         // Undo and redo act on the project even while a text field has the keyboard; a text field would
         // otherwise take the keys for its own typing history and the menu accelerators would never fire.
         stage.getScene().addEventFilter(javafx.scene.input.KeyEvent.KEY_PRESSED, e -> {

@@ -192,14 +192,36 @@ final class RunEditorView extends VBox {
         table.setMinHeight(120);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         table.getColumns().add(column("#", 28, s -> String.valueOf(s.number())));
-        table.getColumns().add(column("Name", 112, ProjectEditor.SegmentSummary::name));
-        table.getColumns().add(column("Length", 58, ProjectEditor.SegmentSummary::length));
+        table.getColumns().add(editable(column("Name", 112, ProjectEditor.SegmentSummary::name), SegmentField.NAME));
+        table.getColumns()
+                .add(editable(column("Length", 58, ProjectEditor.SegmentSummary::length), SegmentField.LENGTH));
         table.getColumns().add(column("Material", 130, ProjectEditor.SegmentSummary::material));
         table.getColumns().add(column("Size", 48, ProjectEditor.SegmentSummary::size));
         table.getColumns().add(column("Bore", 72, ProjectEditor.SegmentSummary::bore));
         table.getColumns().add(column("Fittings", 70, ProjectEditor.SegmentSummary::fittings));
-        table.getColumns().add(column("Rise", 50, ProjectEditor.SegmentSummary::elevation));
+        table.getColumns()
+                .add(editable(column("Rise", 50, ProjectEditor.SegmentSummary::elevation), SegmentField.ELEVATION));
         table.setPlaceholder(new Label("No segments"));
+        table.setEditable(true);
+    }
+
+    /**
+     * Lets a column be edited in place (double-click, type, Enter). The edit goes through the same
+     * check as the field below; a rejected value puts the message beside that field and the cell
+     * shows the kept value again.
+     */
+    private TableColumn<ProjectEditor.SegmentSummary, String> editable(
+            TableColumn<ProjectEditor.SegmentSummary, String> column, SegmentField field) {
+        column.setCellFactory(javafx.scene.control.cell.TextFieldTableCell.forTableColumn());
+        column.setOnEditCommit(e -> {
+            int row = e.getTablePosition().getRow();
+            editingIndex = -1;
+            if (!editor.setSegmentField(row, field, e.getNewValue())) {
+                refresh();
+            }
+            table.getSelectionModel().select(row);
+        });
+        return column;
     }
 
     private static TableColumn<ProjectEditor.SegmentSummary, String> column(

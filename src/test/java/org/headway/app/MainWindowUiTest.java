@@ -114,6 +114,21 @@ class MainWindowUiTest {
     }
 
     @Test
+    void aLengthCanBeTypedIntoTheSegmentTable(FxRobot robot) throws Exception {
+        fx.awaitResults();
+        robot.doubleClickOn("420 m");
+        WaitForAsyncUtils.waitForFxEvents();
+        TextField cell = robot.lookup("#segment-table .text-field").queryAs(TextField.class);
+        robot.interact(cell::selectAll);
+        robot.write("430 m");
+        robot.type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals("430 m", fx.editor.project().segments().get(2).length());
+        String expected = engineTotal("430 m");
+        WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> expected.equals(totalShown(robot)));
+    }
+
+    @Test
     void aBadQuantityShowsTheMessageAndKeepsThePreviousValue(FxRobot robot) throws Exception {
         fx.awaitResults();
         String before = totalShown(robot);
