@@ -302,6 +302,110 @@ public final class ProjectEditor {
         });
     }
 
+    // ---- ends and limits ----
+
+    /** The end conditions and design limits the editor offers, with their message keys. */
+    public enum RunField {
+        SOURCE_LEVEL("ends.source.level"),
+        SOURCE_PRESSURE("ends.source.pressure"),
+        DELIVERY_LEVEL("ends.delivery.level"),
+        DELIVERY_PRESSURE("ends.delivery.pressure"),
+        MAXIMUM_VELOCITY("limits.maximumVelocity"),
+        MAXIMUM_FRICTION_LOSS("limits.maximumFrictionLossPer100m"),
+        HEAD_BUDGET("limits.headBudget");
+
+        private final String key;
+
+        RunField(String key) {
+            this.key = key;
+        }
+
+        /** Message key, as the JSON path in the project file. */
+        public String key() {
+            return key;
+        }
+    }
+
+    /** The text of an end condition or limit as it stands (empty = not given). */
+    public String runField(RunField field) {
+        Project p = project.get();
+        return switch (field) {
+            case SOURCE_LEVEL -> p.ends().source().level();
+            case SOURCE_PRESSURE -> p.ends().source().pressure();
+            case DELIVERY_LEVEL -> p.ends().delivery().level();
+            case DELIVERY_PRESSURE -> p.ends().delivery().pressure();
+            case MAXIMUM_VELOCITY -> p.limits().maximumVelocity();
+            case MAXIMUM_FRICTION_LOSS -> p.limits().maximumFrictionLossPer100m();
+            case HEAD_BUDGET -> p.limits().headBudget();
+        };
+    }
+
+    /**
+     * Changes an end condition (surface level above the adjacent pipe end, gauge pressure) or a
+     * design limit. Blank clears it: an open end at the pipe level, or the usual limit.
+     *
+     * @return whether the edit was accepted
+     */
+    public boolean setRunField(RunField field, String text) {
+        Project p = project.get();
+        String t = text == null ? "" : text.strip();
+        UnitSystem u = unitSystem.get();
+        return accept(field.key(), () -> {
+            String v = switch (field) {
+                case SOURCE_LEVEL, DELIVERY_LEVEL ->
+                    t.isEmpty() ? "" : QuantityText.accept(t, QuantityKind.LENGTH, u, "level", QuantityText.Sign.ANY);
+                case SOURCE_PRESSURE, DELIVERY_PRESSURE ->
+                    t.isEmpty()
+                            ? ""
+                            : QuantityText.accept(t, QuantityKind.PRESSURE, u, "gauge pressure", QuantityText.Sign.ANY);
+                case MAXIMUM_VELOCITY ->
+                    t.isEmpty()
+                            ? ""
+                            : QuantityText.accept(
+                                    t, QuantityKind.VELOCITY, u, "maximum velocity", QuantityText.Sign.POSITIVE);
+                case MAXIMUM_FRICTION_LOSS, HEAD_BUDGET ->
+                    t.isEmpty()
+                            ? ""
+                            : QuantityText.accept(t, QuantityKind.HEAD, u, "limit", QuantityText.Sign.POSITIVE);
+            };
+            Project.EndSpec src = p.ends().source();
+            Project.EndSpec dst = p.ends().delivery();
+            Project.LimitsSpec l = p.limits();
+            switch (field) {
+                case SOURCE_LEVEL -> src = new Project.EndSpec(v, src.pressure());
+                case SOURCE_PRESSURE -> src = new Project.EndSpec(src.level(), v);
+                case DELIVERY_LEVEL -> dst = new Project.EndSpec(v, dst.pressure());
+                case DELIVERY_PRESSURE -> dst = new Project.EndSpec(dst.level(), v);
+                case MAXIMUM_VELOCITY ->
+                    l = new Project.LimitsSpec(
+                            l.minimumVelocity(), v, l.maximumFrictionLossPer100m(), l.headBudget(), l.npshMargin());
+                case MAXIMUM_FRICTION_LOSS ->
+                    l = new Project.LimitsSpec(
+                            l.minimumVelocity(), l.maximumVelocity(), v, l.headBudget(), l.npshMargin());
+                case HEAD_BUDGET ->
+                    l = new Project.LimitsSpec(
+                            l.minimumVelocity(),
+                            l.maximumVelocity(),
+                            l.maximumFrictionLossPer100m(),
+                            v,
+                            l.npshMargin());
+            }
+            return new Project(
+                    p.title(),
+                    p.titleBlock(),
+                    p.fluid(),
+                    p.flow(),
+                    p.flowUncertainty(),
+                    p.friction(),
+                    p.segments(),
+                    new Project.EndsSpec(src, dst),
+                    p.pump(),
+                    l,
+                    p.sizing(),
+                    p.curve());
+        });
+    }
+
     // ---- segment edits ----
 
     /**
@@ -637,7 +741,15 @@ public final class ProjectEditor {
                 case "temperature" -> p.fluid().temperature();
                 case "flow" -> p.flow();
                 case "friction" -> p.friction();
-                default -> "the previous value";
+                default -> {
+                    String v = "";
+                    for (RunField f : RunField.values()) {
+                        if (f.key().equals(key)) {
+                            v = runField(f).isEmpty() ? "the default" : runField(f);
+                        }
+                    }
+                    yield v.isEmpty() ? "the previous value" : v;
+                }
             };
         }
         return value.isEmpty() ? "(empty)" : value;

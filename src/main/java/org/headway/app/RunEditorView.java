@@ -106,6 +106,29 @@ final class RunEditorView extends VBox {
                 () -> editor.project().friction(),
                 editor::setFriction);
 
+        GridPane endsGrid = form();
+        int r = 0;
+        for (ProjectEditor.RunField f : ProjectEditor.RunField.values()) {
+            textField(
+                    endsGrid,
+                    r++,
+                    runFieldLabel(f),
+                    f.key(),
+                    "run-" + f.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-'),
+                    () -> editor.runField(f),
+                    t -> editor.setRunField(f, t));
+        }
+        Label endsHint =
+                new Label("Levels are water surfaces above the pipe end next to them; pressures are gauge. Blank: an"
+                        + " open end at pipe level, or the usual limit.");
+        endsHint.setWrapText(true);
+        endsHint.getStyleClass().add("hint");
+        endsGrid.add(endsHint, 0, r, 3, 1);
+        javafx.scene.control.TitledPane ends = new javafx.scene.control.TitledPane("Ends and design limits", endsGrid);
+        ends.setId("ends-and-limits");
+        ends.setExpanded(false);
+        ends.setAnimated(false);
+
         Label segmentsHeading = heading("Segments, in flow order");
         buildTable();
         HBox buttons = new HBox(6);
@@ -130,7 +153,7 @@ final class RunEditorView extends VBox {
         segmentHeading.getStyleClass().add("subheading");
         buildSegmentForm();
 
-        getChildren().addAll(runHeading, run, segmentsHeading, table, buttons, segmentHeading, segmentForm);
+        getChildren().addAll(runHeading, run, ends, segmentsHeading, table, buttons, segmentHeading, segmentForm);
 
         editor.projectProperty().addListener((o, a, b) -> refresh());
         editor.unitSystemProperty().addListener((o, a, b) -> refresh());
@@ -310,6 +333,18 @@ final class RunEditorView extends VBox {
         hint.setWrapText(true);
         hint.getStyleClass().add("hint");
         segmentForm.add(hint, 0, row, 3, 1);
+    }
+
+    private static String runFieldLabel(ProjectEditor.RunField f) {
+        return switch (f) {
+            case SOURCE_LEVEL -> "Source level";
+            case SOURCE_PRESSURE -> "Source pressure";
+            case DELIVERY_LEVEL -> "Delivery level";
+            case DELIVERY_PRESSURE -> "Delivery pressure";
+            case MAXIMUM_VELOCITY -> "Max. velocity";
+            case MAXIMUM_FRICTION_LOSS -> "Max. h_f / 100 m";
+            case HEAD_BUDGET -> "Head budget";
+        };
     }
 
     private Project.SegmentSpec spec() {
@@ -543,7 +578,7 @@ final class RunEditorView extends VBox {
         GridPane grid = new GridPane();
         grid.setHgap(8);
         grid.setVgap(6);
-        ColumnConstraints labels = new ColumnConstraints(110);
+        ColumnConstraints labels = new ColumnConstraints(122);
         ColumnConstraints fields = new ColumnConstraints(180, 240, 320);
         fields.setHgrow(Priority.SOMETIMES);
         ColumnConstraints messages = new ColumnConstraints(0, 220, 260);

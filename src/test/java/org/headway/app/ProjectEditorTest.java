@@ -232,4 +232,18 @@ class ProjectEditorTest {
         assertEquals("4.026 in", editor.summaries().get(0).bore());
         assertNotEquals(rows, editor.summaries());
     }
+
+    @Test
+    void endsAndLimitsAreEditedAndCleared() {
+        assertTrue(editor.setRunField(ProjectEditor.RunField.DELIVERY_PRESSURE, "35"));
+        assertEquals("35 kPa", editor.project().ends().delivery().pressure());
+        assertEquals("2 m", editor.project().ends().source().level(), "the other end is untouched");
+        assertFalse(editor.setRunField(ProjectEditor.RunField.MAXIMUM_VELOCITY, "-1 m/s"));
+        String message = editor.messages().get("limits.maximumVelocity");
+        assertTrue(message.endsWith("still using 2.5 m/s"), message);
+        assertFalse(editor.setRunField(ProjectEditor.RunField.HEAD_BUDGET, "55 kPa"));
+        assertTrue(editor.setRunField(ProjectEditor.RunField.HEAD_BUDGET, ""));
+        assertEquals("", editor.project().limits().headBudget());
+        assertEquals("5 m", editor.runField(ProjectEditor.RunField.MAXIMUM_FRICTION_LOSS));
+    }
 }
