@@ -406,6 +406,119 @@ public final class ProjectEditor {
         });
     }
 
+    // ---- pump ----
+
+    /** The pump curve as one line: {@code 0 L/s: 58 m; 5 L/s: 56 m; …}; empty without a pump. */
+    public String pumpPointsText() {
+        return project.get()
+                .pump()
+                .map(pump -> String.join(
+                        "; ",
+                        pump.points().stream()
+                                .map(pt -> pt.flow() + ": " + pt.head())
+                                .toList()))
+                .orElse("");
+    }
+
+    /** The segment the pump feeds, counted from 1; empty without a pump. */
+    public String pumpPositionText() {
+        return project.get()
+                .pump()
+                .map(pump -> String.valueOf(pump.position() + 1))
+                .orElse("");
+    }
+
+    /**
+     * Sets the pump curve from text ({@code flow: head} pairs separated by semicolons); blank
+     * removes the pump. A run without a pump gets one feeding its first segment.
+     *
+     * @return whether the edit was accepted
+     */
+    public boolean setPumpPoints(String text) {
+        Project p = project.get();
+        String t = text == null ? "" : text.strip();
+        UnitSystem u = unitSystem.get();
+        return accept("pump.points", () -> {
+            if (t.isEmpty()) {
+                return withPump(p, Optional.empty());
+            }
+            List<Project.PumpPointSpec> points = new ArrayList<>();
+            String[] items = t.split(";");
+            for (int i = 0; i < items.length; i++) {
+                String item = items[i].strip();
+                String where = "pump point " + (i + 1);
+                int colon = item.indexOf(':');
+                if (colon < 0) {
+                    throw new InputException(
+                            where, "expected \"flow: head\", e.g. \"5 L/s: 56 m\", got \"" + item + "\"");
+                }
+                String flow = QuantityText.accept(
+                        item.substring(0, colon),
+                        QuantityKind.VOLUMETRIC_FLOW,
+                        u,
+                        where + " flow",
+                        QuantityText.Sign.NON_NEGATIVE);
+                String head = QuantityText.accept(
+                        item.substring(colon + 1), QuantityKind.HEAD, u, where + " head", QuantityText.Sign.POSITIVE);
+                points.add(new Project.PumpPointSpec(flow, head));
+            }
+            if (points.size() < 3) {
+                throw new InputException(
+                        "pump points", "a pump curve needs at least three points, got " + points.size());
+            }
+            Project.PumpSpec pump = p.pump()
+                    .map(old -> new Project.PumpSpec(old.name(), old.position(), points, old.npshRequired()))
+                    .orElse(new Project.PumpSpec("pump", 0, points, ""));
+            return withPump(p, Optional.of(pump));
+        });
+    }
+
+    /**
+     * Moves the pump to feed a segment, counted from 1.
+     *
+     * @return whether the edit was accepted
+     */
+    public boolean setPumpPosition(String text) {
+        Project p = project.get();
+        String t = text == null ? "" : text.strip();
+        return accept("pump.position", () -> {
+            if (p.pump().isEmpty()) {
+                throw new InputException("pump position", "give the pump curve first");
+            }
+            int n = p.segments().size();
+            int segment;
+            try {
+                segment = Integer.parseInt(t);
+            } catch (NumberFormatException e) {
+                throw new InputException(
+                        "pump position", "a segment number from 1 to " + n + " expected, got \"" + t + "\"");
+            }
+            if (segment < 1 || segment > n) {
+                throw new InputException(
+                        "pump position", "a segment number from 1 to " + n + " expected, got " + segment);
+            }
+            Project.PumpSpec old = p.pump().get();
+            return withPump(
+                    p, Optional.of(new Project.PumpSpec(old.name(), segment - 1, old.points(), old.npshRequired())));
+        });
+    }
+
+    private static Project withPump(Project p, Optional<Project.PumpSpec> pump) {
+        return new Project(
+                p.title(),
+                p.titleBlock(),
+                p.fluid(),
+                p.flow(),
+                p.flowUncertainty(),
+                p.friction(),
+                p.segments(),
+                p.ends(),
+                pump,
+                p.limits(),
+                p.sizing(),
+                p.curve());
+    }
+
     // ---- segment edits ----
 
     /**
@@ -704,8 +817,8 @@ public final class ProjectEditor {
         try {
             next = edit.next();
         } catch (InputException e) {
-            // The message sits beside its field, so the field's own name is left out; an item number stays.
-            String text = e.where().contains("item") ? plain(e) : e.problem();
+            // The message sits beside its field, so the field's own name is left out; an item or point number stays.
+            String text = e.where().contains("item") || e.where().contains("point") ? plain(e) : e.problem();
             messages.put(key, text + " — still using " + current(key));
             return false;
         }
@@ -741,6 +854,8 @@ public final class ProjectEditor {
                 case "temperature" -> p.fluid().temperature();
                 case "flow" -> p.flow();
                 case "friction" -> p.friction();
+                case "pump.points" -> pumpPointsText().isEmpty() ? "no pump" : pumpPointsText();
+                case "pump.position" -> pumpPositionText().isEmpty() ? "no pump" : "segment " + pumpPositionText();
                 default -> {
                     String v = "";
                     for (RunField f : RunField.values()) {

@@ -120,11 +120,14 @@ final class RunEditorView extends VBox {
         }
         Label endsHint =
                 new Label("Levels are water surfaces above the pipe end next to them; pressures are gauge. Blank: an"
-                        + " open end at pipe level, or the usual limit.");
+                        + " open end at pipe level, or the usual limit. Pump curve: flow: head pairs separated by"
+                        + " semicolons, at least three, e.g. \"0 L/s: 58 m; 10 L/s: 50 m; 18 L/s: 28 m\"; blank for"
+                        + " no pump.");
         endsHint.setWrapText(true);
         endsHint.getStyleClass().add("hint");
         endsGrid.add(endsHint, 0, r, 3, 1);
-        javafx.scene.control.TitledPane ends = new javafx.scene.control.TitledPane("Ends and design limits", endsGrid);
+        javafx.scene.control.TitledPane ends =
+                new javafx.scene.control.TitledPane("Ends, pump and design limits", endsGrid);
         ends.setId("ends-and-limits");
         ends.setExpanded(false);
         ends.setAnimated(false);

@@ -246,4 +246,26 @@ class ProjectEditorTest {
         assertEquals("", editor.project().limits().headBudget());
         assertEquals("5 m", editor.runField(ProjectEditor.RunField.MAXIMUM_FRICTION_LOSS));
     }
+
+    @Test
+    void thePumpCurveIsEditedAsTextAndCanBeRemoved() {
+        assertEquals("0 L/s: 58 m; 5 L/s: 56 m; 10 L/s: 50 m; 14 L/s: 41 m; 18 L/s: 28 m", editor.pumpPointsText());
+        assertEquals("2", editor.pumpPositionText());
+        assertTrue(editor.setPumpPoints("0 L/s: 60 m; 10 L/s: 52; 20 L/s: 30 m"));
+        var pump = editor.project().pump().orElseThrow();
+        assertEquals(
+                new org.headway.project.Project.PumpPointSpec("10 L/s", "52 m"),
+                pump.points().get(1));
+        assertEquals("End-suction pump (invented curve)", pump.name(), "the name stays");
+        assertFalse(editor.setPumpPoints("0 L/s: 60 m; 10 L/s 52 m; 20 L/s: 30 m"));
+        assertTrue(editor.messages().get("pump.points").startsWith("pump point 2: expected \"flow: head\""));
+        assertFalse(editor.setPumpPoints("0 L/s: 60 m; 10 L/s: 52 m"));
+        assertFalse(editor.setPumpPosition("5"));
+        assertTrue(editor.messages().get("pump.position").contains("from 1 to 4"));
+        assertTrue(editor.setPumpPosition("1"));
+        assertEquals(0, editor.project().pump().orElseThrow().position());
+        assertTrue(editor.setPumpPoints(""));
+        assertTrue(editor.project().pump().isEmpty());
+        assertFalse(editor.setPumpPosition("1"), "no pump to move");
+    }
 }
