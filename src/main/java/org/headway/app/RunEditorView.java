@@ -118,6 +118,22 @@ final class RunEditorView extends VBox {
                     () -> editor.runField(f),
                     t -> editor.setRunField(f, t));
         }
+        textField(
+                endsGrid,
+                r++,
+                "Pump curve",
+                "pump.points",
+                "pump-points",
+                editor::pumpPointsText,
+                editor::setPumpPoints);
+        textField(
+                endsGrid,
+                r++,
+                "Pump feeds segment",
+                "pump.position",
+                "pump-position",
+                editor::pumpPositionText,
+                editor::setPumpPosition);
         Label endsHint =
                 new Label("Levels are water surfaces above the pipe end next to them; pressures are gauge. Blank: an"
                         + " open end at pipe level, or the usual limit. Pump curve: flow: head pairs separated by"
