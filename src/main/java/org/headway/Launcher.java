@@ -21,9 +21,17 @@ public final class Launcher {
             return;
         }
         if (DesktopLauncher.displayAvailable()) {
-            DesktopLauncher.launch(args.length == 0 ? args : Arrays.copyOfRange(args, 1, args.length));
-            System.exit(0);
-            return;
+            try {
+                DesktopLauncher.launch(args.length == 0 ? args : Arrays.copyOfRange(args, 1, args.length));
+                System.exit(0);
+                return;
+            } catch (RuntimeException | LinkageError e) {
+                // A display without the libraries JavaFX needs (e.g. no GTK): fall back to the command line.
+                System.err.println("headway: the desktop window could not open (" + e + "); the command line offers:");
+                HeadwayCommand.run("--help");
+                System.exit(1);
+                return;
+            }
         }
         if (args.length > 0) {
             System.err.println("headway: no display found for the desktop window; the command line offers:");
