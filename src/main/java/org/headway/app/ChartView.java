@@ -56,6 +56,11 @@ final class ChartView extends BorderPane {
         readout.getStyleClass().add("readout");
         Region grow = new Region();
         HBox.setHgrow(grow, Priority.ALWAYS);
+        // The buttons keep their width; a long readout is the one to shorten.
+        for (Button b : new Button[] {reset, png, svg}) {
+            b.setMinWidth(Region.USE_PREF_SIZE);
+        }
+        readout.setMinWidth(0);
         HBox bar = new HBox(8, readout, grow, reset, png, svg);
         bar.setAlignment(Pos.CENTER_LEFT);
         bar.setPadding(new Insets(6, 10, 6, 10));
@@ -80,11 +85,30 @@ final class ChartView extends BorderPane {
         if (chart == null) {
             return;
         }
+        // A view the engineer zoomed or panned stays where it was when the results are recomputed,
+        // as long as the new chart's full extent is the same (same axes, same units).
+        Range keepDomain = null;
+        Range keepRange = null;
+        if (viewer.getChart() != null && viewer.getChart().getPlot() instanceof XYPlot old && domain != null) {
+            Range d = old.getDomainAxis().getRange();
+            Range r = old.getRangeAxis().getRange();
+            if (!d.equals(domain) || !r.equals(range)) {
+                keepDomain = d;
+                keepRange = r;
+            }
+        }
         if (chart.getPlot() instanceof XYPlot plot) {
             plot.setDomainPannable(true);
             plot.setRangePannable(true);
-            domain = plot.getDomainAxis().getRange();
-            range = plot.getRangeAxis().getRange();
+            Range newDomain = plot.getDomainAxis().getRange();
+            Range newRange = plot.getRangeAxis().getRange();
+            boolean sameExtent = newDomain.equals(domain) && newRange.equals(range);
+            domain = newDomain;
+            range = newRange;
+            if (keepDomain != null && sameExtent) {
+                plot.getDomainAxis().setRange(keepDomain);
+                plot.getRangeAxis().setRange(keepRange);
+            }
         }
         viewer.setChart(chart);
     }
