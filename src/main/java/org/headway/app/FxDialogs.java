@@ -1,0 +1,92 @@
+package org.headway.app;
+
+import java.io.File;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Optional;
+import javafx.scene.control.Alert;
+import javafx.scene.control.ButtonBar;
+import javafx.scene.control.ButtonType;
+import javafx.scene.control.Label;
+import javafx.stage.FileChooser;
+import javafx.stage.Window;
+
+/** {@link Dialogs} with the toolkit's file choosers and alerts. */
+final class FxDialogs implements Dialogs {
+
+    private final Window owner;
+
+    FxDialogs(Window owner) {
+        this.owner = owner;
+    }
+
+    @Override
+    public Optional<Path> chooseProjectToOpen(Path startFolder) {
+        FileChooser chooser = chooser("Open a project", startFolder);
+        chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter("Headway projects (*.json)", "*.json"));
+        File f = chooser.showOpenDialog(owner);
+        return Optional.ofNullable(f).map(File::toPath);
+    }
+
+    @Override
+    public Optional<Path> chooseProjectSaveTarget(Path startFolder, String suggestedName) {
+        FileChooser chooser = chooser("Save the project as", startFolder);
+        chooser.setInitialFileName(suggestedName);
+        chooser.getExtensionFilters().add(new FileChooser.ExtensionFilter("Headway projects (*.json)", "*.json"));
+        File f = chooser.showSaveDialog(owner);
+        return Optional.ofNullable(f).map(File::toPath);
+    }
+
+    @Override
+    public Optional<Path> chooseExportTarget(Path startFolder, String suggestedName, String description) {
+        FileChooser chooser = chooser("Export the " + description, startFolder);
+        chooser.setInitialFileName(suggestedName);
+        int dot = suggestedName.lastIndexOf('.');
+        if (dot > 0) {
+            String ext = suggestedName.substring(dot);
+            chooser.getExtensionFilters()
+                    .add(new FileChooser.ExtensionFilter(description + " (*" + ext + ")", "*" + ext));
+        }
+        File f = chooser.showSaveDialog(owner);
+        return Optional.ofNullable(f).map(File::toPath);
+    }
+
+    @Override
+    public UnsavedAnswer askUnsavedChanges(String projectName) {
+        ButtonType save = new ButtonType("Save", ButtonBar.ButtonData.YES);
+        ButtonType discard = new ButtonType("Don't save", ButtonBar.ButtonData.NO);
+        ButtonType cancel = new ButtonType("Keep editing", ButtonBar.ButtonData.CANCEL_CLOSE);
+        Alert alert = new Alert(Alert.AlertType.CONFIRMATION, "", save, discard, cancel);
+        alert.initOwner(owner);
+        alert.setTitle("Unsaved changes");
+        alert.setHeaderText("Save the changes to \"" + projectName + "\"?");
+        alert.setContentText("Changes not saved are lost.");
+        ButtonType answer = alert.showAndWait().orElse(cancel);
+        if (answer == save) {
+            return UnsavedAnswer.SAVE;
+        }
+        return answer == discard ? UnsavedAnswer.DISCARD : UnsavedAnswer.CANCEL;
+    }
+
+    @Override
+    public void showError(String heading, String message) {
+        Alert alert = new Alert(Alert.AlertType.ERROR);
+        alert.initOwner(owner);
+        alert.setTitle("Headway");
+        alert.setHeaderText(heading);
+        Label text = new Label(message);
+        text.setWrapText(true);
+        text.setMaxWidth(560);
+        alert.getDialogPane().setContent(text);
+        alert.showAndWait();
+    }
+
+    private static FileChooser chooser(String title, Path startFolder) {
+        FileChooser chooser = new FileChooser();
+        chooser.setTitle(title);
+        if (startFolder != null && Files.isDirectory(startFolder)) {
+            chooser.setInitialDirectory(startFolder.toFile());
+        }
+        return chooser;
+    }
+}

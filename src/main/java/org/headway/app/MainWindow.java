@@ -1,0 +1,322 @@
+package org.headway.app;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import javafx.beans.binding.Bindings;
+import javafx.collections.ListChangeListener;
+import javafx.concurrent.Task;
+import javafx.geometry.Insets;
+import javafx.geometry.Orientation;
+import javafx.geometry.Pos;
+import javafx.scene.Scene;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.Menu;
+import javafx.scene.control.MenuBar;
+import javafx.scene.control.MenuItem;
+import javafx.scene.control.ProgressBar;
+import javafx.scene.control.RadioMenuItem;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.SeparatorMenuItem;
+import javafx.scene.control.SplitPane;
+import javafx.scene.control.Tab;
+import javafx.scene.control.TabPane;
+import javafx.scene.control.ToggleGroup;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+import javafx.stage.Stage;
+import org.headway.caution.InputException;
+import org.headway.project.ProjectResolver;
+import org.headway.report.HeadLossSheet;
+import org.headway.units.UnitSystem;
+
+/** Assembles the window: menus and shortcuts, the editor, results and charts, cautions, status. */
+public final class MainWindow {
+
+    /** Tab titles, also used by the screenshot test. */
+    static final List<String> TABS = List.of("Results", "Grade lines", "System curve", "Friction chart");
+
+    private static final KeyCombination UNDO = KeyCombination.keyCombination("Shortcut+Z");
+    private static final KeyCombination REDO = KeyCombination.keyCombination("Shortcut+Y");
+    private static final KeyCombination REDO_ALT = KeyCombination.keyCombination("Shortcut+Shift+Z");
+
+    private final ProjectEditor editor;
+    private final ResultsModel results;
+    private final Dialogs dialogs;
+    private final BorderPane root = new BorderPane();
+    private final TabPane tabs = new TabPane();
+    private final RunEditorView editorView;
+    private final ChartView frictionView;
+    private final Label status = new Label();
+    private final ProgressBar progress = new ProgressBar();
+    private final Button cancel = new Button("Cancel export");
+    private Task<List<Path>> export;
+
+    public MainWindow(ProjectEditor editor, ResultsModel results, Dialogs dialogs) {
+        this.editor = editor;
+        this.results = results;
+        this.dialogs = dialogs;
+        editorView = new RunEditorView(editor);
+        ScrollPane editorScroll = new ScrollPane(editorView);
+        editorScroll.setFitToWidth(true);
+        editorScroll.setMinWidth(380);
+
+        ChartView grades = new ChartView(
+                "grade-chart", results.gradeChartProperty(), false, dialogs, editor::startFolder, "grade-lines");
+        ChartView system = new ChartView(
+                "system-chart", results.systemChartProperty(), false, dialogs, editor::startFolder, "system-curve");
+        frictionView = new ChartView(
+                "friction-chart",
+                results.frictionChartProperty(),
+                true,
+                dialogs,
+                editor::startFolder,
+                "friction-chart");
+        tabs.getTabs()
+                .addAll(
+                        tab(TABS.get(0), new ScrollPane(new ResultsView(results))),
+                        tab(TABS.get(1), grades),
+                        tab(TABS.get(2), system),
+                        tab(TABS.get(3), frictionView));
+        ((ScrollPane) tabs.getTabs().get(0).getContent()).setFitToWidth(true);
+        tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
+        tabs.setId("views");
+
+        SplitPane split = new SplitPane(editorScroll, tabs);
+        split.setOrientation(Orientation.HORIZONTAL);
+        split.setDividerPositions(0.44);
+
+        CautionsView cautions = new CautionsView(results, i -> {
+            editorView.select(i);
+            tabs.getSelectionModel().select(0);
+        });
+        root.setTop(menus());
+        root.setCenter(split);
+        root.setBottom(new VBox(cautions, statusBar()));
+        root.getStyleClass().add("headway");
+    }
+
+    /** The scene, styled. */
+    public Scene scene(double width, double height) {
+        Scene scene = new Scene(root, width, height);
+        scene.getStylesheets().add(MainWindow.class.getResource("headway.css").toExternalForm());
+        return scene;
+    }
+
+    /** Puts the window on a stage: title bound, close asks about unsaved changes. */
+    public void attach(Stage stage, double width, double height) {
+        stage.setScene(scene(width, height));
+        stage.titleProperty().bind(editor.windowTitleProperty());
+        stage.setOnShown(e -> editorView.focusTable());
+        stage.setMinWidth(1000);
+        stage.setMinHeight(640);
+        // Undo and redo act on the project even while a text field has the keyboard; a text field would
+        // otherwise take the keys for its own typing history and the menu accelerators would never fire.
+        stage.getScene().addEventFilter(javafx.scene.input.KeyEvent.KEY_PRESSED, e -> {
+            if (UNDO.match(e)) {
+                e.consume();
+                editor.undo();
+            } else if (REDO.match(e) || REDO_ALT.match(e)) {
+                e.consume();
+                editor.redo();
+            }
+        });
+        stage.setOnCloseRequest(e -> {
+            if (!editor.confirmDiscard()) {
+                e.consume();
+            }
+        });
+    }
+
+    TabPane tabs() {
+        return tabs;
+    }
+
+    ChartView frictionView() {
+        return frictionView;
+    }
+
+    private static Tab tab(String title, javafx.scene.Node content) {
+        Tab t = new Tab(title, content);
+        t.setId("tab-" + title.toLowerCase(java.util.Locale.ROOT).replace(' ', '-'));
+        return t;
+    }
+
+    private MenuBar menus() {
+        Menu file = new Menu("Project");
+        MenuItem newItem = item("New", "Shortcut+N", editor::newProject);
+        MenuItem open = item("Open…", "Shortcut+O", editor::open);
+        Menu recent = new Menu("Open recent");
+        Runnable fillRecent = () -> {
+            recent.getItems().clear();
+            for (Path p : editor.recentFiles().entries()) {
+                MenuItem m = new MenuItem(p.getFileName() + "   —   " + p.getParent());
+                m.setMnemonicParsing(false);
+                m.setOnAction(e -> editor.openRecent(p));
+                recent.getItems().add(m);
+            }
+            recent.setDisable(recent.getItems().isEmpty());
+        };
+        editor.recentFiles().entries().addListener((ListChangeListener<Path>) c -> fillRecent.run());
+        fillRecent.run();
+        MenuItem save = item("Save", "Shortcut+S", editor::save);
+        MenuItem saveAs = item("Save as…", "Shortcut+Shift+S", editor::saveAs);
+        MenuItem exportSheet = item("Export head-loss sheet…", "Shortcut+E", this::exportSheet);
+        MenuItem quit = item("Close window", "Shortcut+W", () -> {
+            if (editor.confirmDiscard() && root.getScene() != null) {
+                ((Stage) root.getScene().getWindow()).close();
+            }
+        });
+        file.getItems()
+                .addAll(
+                        newItem,
+                        open,
+                        recent,
+                        new SeparatorMenuItem(),
+                        save,
+                        saveAs,
+                        new SeparatorMenuItem(),
+                        exportSheet,
+                        new SeparatorMenuItem(),
+                        quit);
+
+        Menu edit = new Menu("Edit");
+        MenuItem undo = item("Undo", "Shortcut+Z", editor::undo);
+        MenuItem redo = item("Redo", "Shortcut+Y", editor::redo);
+        undo.disableProperty().bind(editor.canUndoProperty().not());
+        redo.disableProperty().bind(editor.canRedoProperty().not());
+        edit.getItems().addAll(undo, redo);
+
+        Menu view = new Menu("Units");
+        ToggleGroup units = new ToggleGroup();
+        RadioMenuItem si = new RadioMenuItem("SI (m, mm, L/s, kPa)");
+        RadioMenuItem us = new RadioMenuItem("US customary (ft, in, gpm, psi)");
+        si.setToggleGroup(units);
+        us.setToggleGroup(units);
+        si.setSelected(editor.unitSystemProperty().get() == UnitSystem.SI);
+        us.setSelected(!si.isSelected());
+        si.setOnAction(e -> editor.unitSystemProperty().set(UnitSystem.SI));
+        us.setOnAction(e -> editor.unitSystemProperty().set(UnitSystem.US_CUSTOMARY));
+        editor.unitSystemProperty().addListener((o, a, b) -> (b == UnitSystem.SI ? si : us).setSelected(true));
+        view.getItems().addAll(si, us);
+
+        MenuBar bar = new MenuBar(file, edit, view);
+        bar.setId("menus");
+        return bar;
+    }
+
+    private static MenuItem item(String text, String accelerator, Runnable action) {
+        MenuItem m = new MenuItem(text);
+        m.setAccelerator(KeyCombination.keyCombination(accelerator));
+        m.setOnAction(e -> action.run());
+        return m;
+    }
+
+    private static MenuItem item(String text, String accelerator, java.util.function.BooleanSupplier action) {
+        return item(text, accelerator, (Runnable) action::getAsBoolean);
+    }
+
+    private HBox statusBar() {
+        status.setId("status");
+        status.getStyleClass().add("status");
+        progress.setVisible(false);
+        progress.setPrefWidth(160);
+        cancel.setVisible(false);
+        cancel.setId("cancel-export");
+        cancel.setOnAction(e -> {
+            if (export != null) {
+                export.cancel(false);
+            }
+        });
+        Label units = new Label();
+        units.textProperty()
+                .bind(Bindings.createStringBinding(
+                        () -> editor.unitSystemProperty().get() == UnitSystem.SI ? "Units: SI" : "Units: US customary",
+                        editor.unitSystemProperty()));
+        Region grow = new Region();
+        HBox.setHgrow(grow, Priority.ALWAYS);
+        HBox bar = new HBox(10, status, grow, progress, cancel, units);
+        bar.setAlignment(Pos.CENTER_LEFT);
+        bar.setPadding(new Insets(4, 10, 4, 10));
+        bar.getStyleClass().add("status-bar");
+        editor.fileProperty().addListener((o, a, b) -> status.setText(b == null ? "" : b.toString()));
+        return bar;
+    }
+
+    /** Exports the head-loss sheet (PDF, workbook, CSV) in a background task with progress and cancel. */
+    void exportSheet() {
+        if (export != null && export.isRunning()) {
+            return;
+        }
+        var project = editor.project();
+        var catalog = editor.catalog();
+        var folder = editor.baseFolder();
+        var units = editor.unitSystemProperty().get();
+        Optional<Path> target = dialogs.chooseExportTarget(
+                editor.startFolder(),
+                ProjectEditor.slug(editor.displayName()) + "-sheet.pdf",
+                "head-loss sheet (PDF, with .xlsx and .csv beside it)");
+        if (target.isEmpty()) {
+            return;
+        }
+        Task<List<Path>> task = new Task<>() {
+            @Override
+            protected List<Path> call() {
+                updateMessage("Solving the run…");
+                HeadLossSheet sheet =
+                        HeadLossSheet.of(ProjectResolver.resolve(project, catalog, folder), HeadwayApp.version());
+                return SheetExport.write(
+                        sheet,
+                        target.get(),
+                        units,
+                        (done, total, what) -> {
+                            updateProgress(done, total);
+                            updateMessage("Export: " + what + "…");
+                        },
+                        this::isCancelled);
+            }
+        };
+        export = task;
+        progress.progressProperty().bind(task.progressProperty());
+        status.textProperty().bind(task.messageProperty());
+        progress.setVisible(true);
+        cancel.setVisible(true);
+        task.setOnSucceeded(e -> finishExport("Exported "
+                + String.join(
+                        ", ",
+                        task.getValue().stream()
+                                .map(p -> p.getFileName().toString())
+                                .toList())
+                + " to " + target.get().toAbsolutePath().getParent()));
+        task.setOnCancelled(e -> finishExport("Export cancelled; no files kept"));
+        task.setOnFailed(e -> {
+            Throwable t = task.getException();
+            finishExport("Export failed");
+            String message = t instanceof InputException ie
+                    ? (ie.where().isEmpty() ? ie.problem() : ie.where() + ": " + ie.problem())
+                    : String.valueOf(t.getMessage());
+            dialogs.showError("Could not export the head-loss sheet", message);
+        });
+        Thread thread = new Thread(task, "headway-export");
+        thread.setDaemon(true);
+        thread.start();
+    }
+
+    private void finishExport(String message) {
+        progress.progressProperty().unbind();
+        status.textProperty().unbind();
+        progress.setVisible(false);
+        cancel.setVisible(false);
+        status.setText(message);
+    }
+
+    /** The export task last started, for tests. */
+    Task<List<Path>> exportTask() {
+        return export;
+    }
+}

@@ -1,0 +1,1044 @@
+package org.headway.app;
+
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.Deque;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import javafx.beans.binding.Bindings;
+import javafx.beans.binding.BooleanBinding;
+import javafx.beans.binding.StringBinding;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyBooleanProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableMap;
+import org.headway.caution.InputException;
+import org.headway.fluid.Fluids;
+import org.headway.friction.FrictionMethods;
+import org.headway.pipe.Catalog;
+import org.headway.pipe.Material;
+import org.headway.pipe.PipeSize;
+import org.headway.project.Project;
+import org.headway.project.ProjectFile;
+import org.headway.units.Quantities;
+import org.headway.units.QuantityKind;
+import org.headway.units.UnitSystem;
+
+/**
+ * View-model of the pipe-run editor and the project actions. The project record is the one piece
+ * of state: every accepted edit replaces it (and can be undone); a rejected edit leaves it as it
+ * was and puts a message under the field's key ({@code flow}, {@code segments[1].length}) for the
+ * view to show beside the field.
+ */
+public final class ProjectEditor {
+
+    /** Undo steps kept; older ones are dropped. */
+    public static final int UNDO_LIMIT = 200;
+
+    private final Catalog catalog;
+    private final Dialogs dialogs;
+    private final RecentFiles recent;
+
+    private final ObjectProperty<Project> project = new SimpleObjectProperty<>();
+    private final ObjectProperty<Project> saved = new SimpleObjectProperty<>();
+    private final ObjectProperty<Path> file = new SimpleObjectProperty<>();
+    private final ObjectProperty<UnitSystem> unitSystem = new SimpleObjectProperty<>(UnitSystem.SI);
+    private final ObservableMap<String, String> messages = FXCollections.observableHashMap();
+    private final Deque<Project> undo = new ArrayDeque<>();
+    private final Deque<Project> redo = new ArrayDeque<>();
+    private final BooleanProperty canUndo = new SimpleBooleanProperty(false);
+    private final BooleanProperty canRedo = new SimpleBooleanProperty(false);
+    private final BooleanBinding dirty;
+    private final StringBinding windowTitle;
+
+    public ProjectEditor(Catalog catalog, Dialogs dialogs, RecentFiles recent) {
+        this.catalog = catalog;
+        this.dialogs = dialogs;
+        this.recent = recent;
+        Project blank = blankProject();
+        project.set(blank);
+        saved.set(blank);
+        dirty = Bindings.createBooleanBinding(() -> !project.get().equals(saved.get()), project, saved);
+        windowTitle = Bindings.createStringBinding(
+                () -> (dirty.get() ? "• " : "") + displayName() + " — Headway", project, saved, file);
+    }
+
+    /** A new project: water at 20 °C through one 10 m length of 2-inch steel pipe. */
+    public static Project blankProject() {
+        return new Project(
+                "New pipe run",
+                Project.TitleBlock.EMPTY,
+                new Project.FluidSpec("water", "20 degC", "", "", "", ""),
+                "3 L/s",
+                "",
+                "auto",
+                List.of(newSegment("Segment 1")),
+                Project.EndsSpec.OPEN,
+                Optional.empty(),
+                Project.LimitsSpec.NONE,
+                Optional.empty(),
+                Optional.empty());
+    }
+
+    private static Project.SegmentSpec newSegment(String name) {
+        return new Project.SegmentSpec(
+                name,
+                "10 m",
+                Optional.of(new Project.PipeSpec("steel-commercial-new", "2", "40")),
+                "",
+                "",
+                List.of(),
+                "",
+                "");
+    }
+
+    // ---- state for the view ----
+
+    public ReadOnlyObjectProperty<Project> projectProperty() {
+        return project;
+    }
+
+    public Project project() {
+        return project.get();
+    }
+
+    public ReadOnlyObjectProperty<Path> fileProperty() {
+        return file;
+    }
+
+    public ObjectProperty<UnitSystem> unitSystemProperty() {
+        return unitSystem;
+    }
+
+    /** Messages of rejected edits by field key; empty when every field holds what was typed. */
+    public ObservableMap<String, String> messages() {
+        return messages;
+    }
+
+    public BooleanBinding dirtyProperty() {
+        return dirty;
+    }
+
+    public StringBinding windowTitleProperty() {
+        return windowTitle;
+    }
+
+    public ReadOnlyBooleanProperty canUndoProperty() {
+        return canUndo;
+    }
+
+    public ReadOnlyBooleanProperty canRedoProperty() {
+        return canRedo;
+    }
+
+    public Catalog catalog() {
+        return catalog;
+    }
+
+    public RecentFiles recentFiles() {
+        return recent;
+    }
+
+    /** Folder relative paths in the project are resolved against. */
+    public Path baseFolder() {
+        Path f = file.get();
+        return f == null || f.toAbsolutePath().getParent() == null
+                ? Path.of("").toAbsolutePath()
+                : f.toAbsolutePath().getParent();
+    }
+
+    /** File name without extension, or the title for a project never saved. */
+    public String displayName() {
+        Path f = file.get();
+        if (f == null) {
+            String title = project.get().title();
+            return title == null || title.isBlank() ? "Untitled" : title;
+        }
+        String name = f.getFileName().toString();
+        return name.endsWith(".json") ? name.substring(0, name.length() - 5) : name;
+    }
+
+    /** A segment as the table shows it, quantities in the chosen units. */
+    public record SegmentSummary(
+            int number,
+            String name,
+            String length,
+            String material,
+            String size,
+            String bore,
+            String roughness,
+            String fittings,
+            String elevation) {}
+
+    /** The segments as the table shows them. */
+    public List<SegmentSummary> summaries() {
+        List<SegmentSummary> list = new ArrayList<>();
+        List<Project.SegmentSpec> segments = project.get().segments();
+        for (int i = 0; i < segments.size(); i++) {
+            Project.SegmentSpec s = segments.get(i);
+            String material = s.pipe()
+                    .map(x -> {
+                        try {
+                            return catalog.material(x.material()).name();
+                        } catch (InputException e) {
+                            return x.material() + " (unknown)";
+                        }
+                    })
+                    .orElse("explicit bore");
+            String size = s.pipe()
+                    .map(x -> x.size() + (x.schedule().isEmpty() ? "" : " / " + x.schedule()))
+                    .orElse("—");
+            double bore = boreOf(s);
+            double roughness = roughnessOf(s);
+            list.add(new SegmentSummary(
+                    i + 1,
+                    s.name(),
+                    shown(s.length(), QuantityKind.LENGTH),
+                    material,
+                    size,
+                    Double.isNaN(bore) ? "?" : text(bore, QuantityKind.DIAMETER),
+                    Double.isNaN(roughness) ? "?" : text(roughness, QuantityKind.ROUGHNESS),
+                    FittingsText.summary(s.fittings()),
+                    s.elevationChange().isEmpty() ? "0" : shown(s.elevationChange(), QuantityKind.LENGTH)));
+        }
+        return list;
+    }
+
+    /** Typed text re-expressed in the shown units, or the text itself when it does not parse. */
+    private String shown(String typed, QuantityKind kind) {
+        try {
+            return text(Quantities.parse(typed, kind), kind);
+        } catch (InputException e) {
+            return typed;
+        }
+    }
+
+    /** Roughness of a segment as it stands (m), NaN when it cannot be read. */
+    private double roughnessOf(Project.SegmentSpec s) {
+        try {
+            if (!s.roughness().isEmpty()) {
+                return Quantities.parse(s.roughness(), QuantityKind.ROUGHNESS);
+            }
+            if (s.pipe().isPresent()) {
+                return catalog.material(s.pipe().get().material()).roughness();
+            }
+        } catch (InputException e) {
+            return Double.NaN;
+        }
+        return Double.NaN;
+    }
+
+    // ---- run-level edits ----
+
+    public boolean setTitle(String text) {
+        Project p = project.get();
+        return accept("title", () -> with(p, text.strip(), p.fluid(), p.flow(), p.friction(), p.segments()));
+    }
+
+    /** @param text a fluid id from {@link Fluids#ids()} (or {@code seawater:35} and the like) */
+    public boolean setFluid(String text) {
+        Project p = project.get();
+        return accept("fluid", () -> {
+            String id = text == null ? "" : text.strip();
+            Project.FluidSpec f = p.fluid();
+            boolean ownFluid = !f.density().isEmpty() && !f.viscosity().isEmpty();
+            if (!ownFluid) {
+                try {
+                    Fluids.byId(id);
+                } catch (InputException e) {
+                    throw new InputException("fluid", e.problem());
+                }
+            } else if (id.isEmpty()) {
+                throw new InputException("fluid", "a name is required");
+            }
+            Project.FluidSpec next = new Project.FluidSpec(
+                    id, f.temperature(), f.pressure(), f.density(), f.viscosity(), f.vapourPressure());
+            return with(p, p.title(), next, p.flow(), p.friction(), p.segments());
+        });
+    }
+
+    public boolean setTemperature(String text) {
+        Project p = project.get();
+        return accept("temperature", () -> {
+            String t = QuantityText.accept(
+                    text, QuantityKind.TEMPERATURE, unitSystem.get(), "temperature", QuantityText.Sign.POSITIVE);
+            Project.FluidSpec f = p.fluid();
+            Project.FluidSpec next =
+                    new Project.FluidSpec(f.name(), t, f.pressure(), f.density(), f.viscosity(), f.vapourPressure());
+            return with(p, p.title(), next, p.flow(), p.friction(), p.segments());
+        });
+    }
+
+    public boolean setFlow(String text) {
+        Project p = project.get();
+        return accept("flow", () -> {
+            String q = QuantityText.accept(
+                    text, QuantityKind.VOLUMETRIC_FLOW, unitSystem.get(), "design flow", QuantityText.Sign.POSITIVE);
+            return with(p, p.title(), p.fluid(), q, p.friction(), p.segments());
+        });
+    }
+
+    /** @param id a method id from {@link FrictionMethods#ids()} */
+    public boolean setFriction(String id) {
+        Project p = project.get();
+        return accept("friction", () -> {
+            String method = id == null ? "" : id.strip();
+            if (!method.startsWith("fitted:")) {
+                try {
+                    method = FrictionMethods.byId(method).id();
+                } catch (InputException e) {
+                    throw new InputException("friction method", e.problem());
+                }
+            }
+            return with(p, p.title(), p.fluid(), p.flow(), method, p.segments());
+        });
+    }
+
+    // ---- ends and limits ----
+
+    /** The end conditions and design limits the editor offers, with their message keys. */
+    public enum RunField {
+        SOURCE_LEVEL("ends.source.level"),
+        SOURCE_PRESSURE("ends.source.pressure"),
+        DELIVERY_LEVEL("ends.delivery.level"),
+        DELIVERY_PRESSURE("ends.delivery.pressure"),
+        MAXIMUM_VELOCITY("limits.maximumVelocity"),
+        MAXIMUM_FRICTION_LOSS("limits.maximumFrictionLossPer100m"),
+        HEAD_BUDGET("limits.headBudget");
+
+        private final String key;
+
+        RunField(String key) {
+            this.key = key;
+        }
+
+        /** Message key, as the JSON path in the project file. */
+        public String key() {
+            return key;
+        }
+    }
+
+    /** The text of an end condition or limit as it stands (empty = not given). */
+    public String runField(RunField field) {
+        Project p = project.get();
+        return switch (field) {
+            case SOURCE_LEVEL -> p.ends().source().level();
+            case SOURCE_PRESSURE -> p.ends().source().pressure();
+            case DELIVERY_LEVEL -> p.ends().delivery().level();
+            case DELIVERY_PRESSURE -> p.ends().delivery().pressure();
+            case MAXIMUM_VELOCITY -> p.limits().maximumVelocity();
+            case MAXIMUM_FRICTION_LOSS -> p.limits().maximumFrictionLossPer100m();
+            case HEAD_BUDGET -> p.limits().headBudget();
+        };
+    }
+
+    /**
+     * Changes an end condition (surface level above the adjacent pipe end, gauge pressure) or a
+     * design limit. Blank clears it: an open end at the pipe level, or the usual limit.
+     *
+     * @return whether the edit was accepted
+     */
+    public boolean setRunField(RunField field, String text) {
+        Project p = project.get();
+        String t = text == null ? "" : text.strip();
+        UnitSystem u = unitSystem.get();
+        return accept(field.key(), () -> {
+            String v = switch (field) {
+                case SOURCE_LEVEL, DELIVERY_LEVEL ->
+                    t.isEmpty() ? "" : QuantityText.accept(t, QuantityKind.LENGTH, u, "level", QuantityText.Sign.ANY);
+                case SOURCE_PRESSURE, DELIVERY_PRESSURE ->
+                    t.isEmpty()
+                            ? ""
+                            : QuantityText.accept(t, QuantityKind.PRESSURE, u, "gauge pressure", QuantityText.Sign.ANY);
+                case MAXIMUM_VELOCITY ->
+                    t.isEmpty()
+                            ? ""
+                            : QuantityText.accept(
+                                    t, QuantityKind.VELOCITY, u, "maximum velocity", QuantityText.Sign.POSITIVE);
+                case MAXIMUM_FRICTION_LOSS, HEAD_BUDGET ->
+                    t.isEmpty()
+                            ? ""
+                            : QuantityText.accept(t, QuantityKind.HEAD, u, "limit", QuantityText.Sign.POSITIVE);
+            };
+            Project.EndSpec src = p.ends().source();
+            Project.EndSpec dst = p.ends().delivery();
+            Project.LimitsSpec l = p.limits();
+            switch (field) {
+                case SOURCE_LEVEL -> src = new Project.EndSpec(v, src.pressure());
+                case SOURCE_PRESSURE -> src = new Project.EndSpec(src.level(), v);
+                case DELIVERY_LEVEL -> dst = new Project.EndSpec(v, dst.pressure());
+                case DELIVERY_PRESSURE -> dst = new Project.EndSpec(dst.level(), v);
+                case MAXIMUM_VELOCITY ->
+                    l = new Project.LimitsSpec(
+                            l.minimumVelocity(), v, l.maximumFrictionLossPer100m(), l.headBudget(), l.npshMargin());
+                case MAXIMUM_FRICTION_LOSS ->
+                    l = new Project.LimitsSpec(
+                            l.minimumVelocity(), l.maximumVelocity(), v, l.headBudget(), l.npshMargin());
+                case HEAD_BUDGET ->
+                    l = new Project.LimitsSpec(
+                            l.minimumVelocity(),
+                            l.maximumVelocity(),
+                            l.maximumFrictionLossPer100m(),
+                            v,
+                            l.npshMargin());
+            }
+            return new Project(
+                    p.title(),
+                    p.titleBlock(),
+                    p.fluid(),
+                    p.flow(),
+                    p.flowUncertainty(),
+                    p.friction(),
+                    p.segments(),
+                    new Project.EndsSpec(src, dst),
+                    p.pump(),
+                    l,
+                    p.sizing(),
+                    p.curve());
+        });
+    }
+
+    // ---- pump ----
+
+    /** The pump curve as one line: {@code 0 L/s: 58 m; 5 L/s: 56 m; …}; empty without a pump. */
+    public String pumpPointsText() {
+        return project.get()
+                .pump()
+                .map(pump -> String.join(
+                        "; ",
+                        pump.points().stream()
+                                .map(pt -> pt.flow() + ": " + pt.head())
+                                .toList()))
+                .orElse("");
+    }
+
+    /** The segment the pump feeds, counted from 1; empty without a pump. */
+    public String pumpPositionText() {
+        return project.get()
+                .pump()
+                .map(pump -> String.valueOf(pump.position() + 1))
+                .orElse("");
+    }
+
+    /**
+     * Sets the pump curve from text ({@code flow: head} pairs separated by semicolons); blank
+     * removes the pump. A run without a pump gets one feeding its first segment.
+     *
+     * @return whether the edit was accepted
+     */
+    public boolean setPumpPoints(String text) {
+        Project p = project.get();
+        String t = text == null ? "" : text.strip();
+        UnitSystem u = unitSystem.get();
+        return accept("pump.points", () -> {
+            if (t.isEmpty()) {
+                return withPump(p, Optional.empty());
+            }
+            List<Project.PumpPointSpec> points = new ArrayList<>();
+            String[] items = t.split(";");
+            for (int i = 0; i < items.length; i++) {
+                String item = items[i].strip();
+                String where = "pump point " + (i + 1);
+                int colon = item.indexOf(':');
+                if (colon < 0) {
+                    throw new InputException(
+                            where, "expected \"flow: head\", e.g. \"5 L/s: 56 m\", got \"" + item + "\"");
+                }
+                String flow = QuantityText.accept(
+                        item.substring(0, colon),
+                        QuantityKind.VOLUMETRIC_FLOW,
+                        u,
+                        where + " flow",
+                        QuantityText.Sign.NON_NEGATIVE);
+                String head = QuantityText.accept(
+                        item.substring(colon + 1), QuantityKind.HEAD, u, where + " head", QuantityText.Sign.POSITIVE);
+                points.add(new Project.PumpPointSpec(flow, head));
+            }
+            if (points.size() < 3) {
+                throw new InputException(
+                        "pump points", "a pump curve needs at least three points, got " + points.size());
+            }
+            Project.PumpSpec pump = p.pump()
+                    .map(old -> new Project.PumpSpec(old.name(), old.position(), points, old.npshRequired()))
+                    .orElse(new Project.PumpSpec("pump", 0, points, ""));
+            return withPump(p, Optional.of(pump));
+        });
+    }
+
+    /**
+     * Moves the pump to feed a segment, counted from 1.
+     *
+     * @return whether the edit was accepted
+     */
+    public boolean setPumpPosition(String text) {
+        Project p = project.get();
+        String t = text == null ? "" : text.strip();
+        return accept("pump.position", () -> {
+            if (p.pump().isEmpty()) {
+                throw new InputException("pump position", "give the pump curve first");
+            }
+            int n = p.segments().size();
+            int segment;
+            try {
+                segment = Integer.parseInt(t);
+            } catch (NumberFormatException e) {
+                throw new InputException(
+                        "pump position", "a segment number from 1 to " + n + " expected, got \"" + t + "\"");
+            }
+            if (segment < 1 || segment > n) {
+                throw new InputException(
+                        "pump position", "a segment number from 1 to " + n + " expected, got " + segment);
+            }
+            Project.PumpSpec old = p.pump().get();
+            return withPump(
+                    p, Optional.of(new Project.PumpSpec(old.name(), segment - 1, old.points(), old.npshRequired())));
+        });
+    }
+
+    private static Project withPump(Project p, Optional<Project.PumpSpec> pump) {
+        return new Project(
+                p.title(),
+                p.titleBlock(),
+                p.fluid(),
+                p.flow(),
+                p.flowUncertainty(),
+                p.friction(),
+                p.segments(),
+                p.ends(),
+                pump,
+                p.limits(),
+                p.sizing(),
+                p.curve());
+    }
+
+    // ---- segment edits ----
+
+    /**
+     * Changes one field of one segment.
+     *
+     * @param index segment index in flow order
+     * @param field which field
+     * @param text as typed or chosen; for {@link SegmentField#MATERIAL} a material id, or empty
+     *     for an explicit bore and roughness
+     * @return whether the edit was accepted
+     */
+    public boolean setSegmentField(int index, SegmentField field, String text) {
+        Project p = project.get();
+        if (index < 0 || index >= p.segments().size()) {
+            throw new IndexOutOfBoundsException(
+                    "segment " + index + " of " + p.segments().size());
+        }
+        Project.SegmentSpec s = p.segments().get(index);
+        String typed = text == null ? "" : text;
+        return accept(field.key(index), () -> {
+            Project.SegmentSpec next = edited(s, field, typed);
+            List<Project.SegmentSpec> segments = new ArrayList<>(p.segments());
+            segments.set(index, next);
+            return with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments);
+        });
+    }
+
+    private Project.SegmentSpec edited(Project.SegmentSpec s, SegmentField field, String typed) {
+        UnitSystem u = unitSystem.get();
+        String t = typed.strip();
+        switch (field) {
+            case NAME -> {
+                if (t.isEmpty()) {
+                    throw new InputException("name", "a segment needs a name");
+                }
+                return segment(
+                        s,
+                        t,
+                        s.length(),
+                        s.pipe(),
+                        s.innerDiameter(),
+                        s.roughness(),
+                        s.fittings(),
+                        s.elevationChange());
+            }
+            case LENGTH -> {
+                String v = QuantityText.accept(t, QuantityKind.LENGTH, u, "length", QuantityText.Sign.NON_NEGATIVE);
+                return segment(
+                        s, s.name(), v, s.pipe(), s.innerDiameter(), s.roughness(), s.fittings(), s.elevationChange());
+            }
+            case ELEVATION -> {
+                String v = t.isEmpty()
+                        ? ""
+                        : QuantityText.accept(t, QuantityKind.LENGTH, u, "elevation change", QuantityText.Sign.ANY);
+                return segment(s, s.name(), s.length(), s.pipe(), s.innerDiameter(), s.roughness(), s.fittings(), v);
+            }
+            case BORE -> {
+                if (t.isEmpty() && s.pipe().isEmpty()) {
+                    throw new InputException("inner diameter", "required when no catalog pipe is chosen");
+                }
+                String v = t.isEmpty()
+                        ? ""
+                        : QuantityText.accept(
+                                t, QuantityKind.DIAMETER, u, "inner diameter", QuantityText.Sign.POSITIVE);
+                return segment(s, s.name(), s.length(), s.pipe(), v, s.roughness(), s.fittings(), s.elevationChange());
+            }
+            case ROUGHNESS -> {
+                if (t.isEmpty() && s.pipe().isEmpty()) {
+                    throw new InputException("roughness", "required when no catalog pipe is chosen");
+                }
+                String v = t.isEmpty()
+                        ? ""
+                        : QuantityText.accept(
+                                t, QuantityKind.ROUGHNESS, u, "roughness", QuantityText.Sign.NON_NEGATIVE);
+                return segment(
+                        s, s.name(), s.length(), s.pipe(), s.innerDiameter(), v, s.fittings(), s.elevationChange());
+            }
+            case FITTINGS -> {
+                List<Project.FittingSpec> fittings = FittingsText.parse(t, catalog);
+                return segment(
+                        s,
+                        s.name(),
+                        s.length(),
+                        s.pipe(),
+                        s.innerDiameter(),
+                        s.roughness(),
+                        fittings,
+                        s.elevationChange());
+            }
+            case MATERIAL -> {
+                return withMaterial(s, t);
+            }
+            case SIZE, SCHEDULE -> {
+                if (s.pipe().isEmpty()) {
+                    throw new InputException(
+                            field == SegmentField.SIZE ? "size" : "schedule", "choose a catalog material first");
+                }
+                Project.PipeSpec pipe = s.pipe().get();
+                Material material = catalog.material(pipe.material());
+                Project.PipeSpec next;
+                if (field == SegmentField.SIZE) {
+                    next = new Project.PipeSpec(pipe.material(), t, pipe.schedule());
+                    try {
+                        catalog.size(material, next.size(), next.schedule());
+                    } catch (InputException e) {
+                        throw new InputException("size", e.problem());
+                    }
+                } else {
+                    // A new schedule keeps the nominal size where the table has it, else the nearest bore.
+                    next = new Project.PipeSpec(pipe.material(), pipe.size(), t);
+                    try {
+                        catalog.size(material, next.size(), next.schedule());
+                    } catch (InputException e) {
+                        PipeSize nearest = nearest(material, t, boreOf(s));
+                        next = new Project.PipeSpec(pipe.material(), nearest.nominal(), nearest.schedule());
+                    }
+                }
+                return segment(
+                        s,
+                        s.name(),
+                        s.length(),
+                        Optional.of(next),
+                        s.innerDiameter(),
+                        s.roughness(),
+                        s.fittings(),
+                        s.elevationChange());
+            }
+            default -> throw new IllegalStateException("unhandled field " + field);
+        }
+    }
+
+    private Project.SegmentSpec withMaterial(Project.SegmentSpec s, String id) {
+        double bore = boreOf(s);
+        if (id.isEmpty()) {
+            if (s.pipe().isEmpty()) {
+                return s;
+            }
+            // Explicit bore and roughness start from the catalog pipe's values, written in the shown unit.
+            Material material = catalog.material(s.pipe().get().material());
+            String d = s.innerDiameter().isEmpty() ? text(bore, QuantityKind.DIAMETER) : s.innerDiameter();
+            String e = s.roughness().isEmpty() ? text(material.roughness(), QuantityKind.ROUGHNESS) : s.roughness();
+            return segment(s, s.name(), s.length(), Optional.empty(), d, e, s.fittings(), s.elevationChange());
+        }
+        Material material;
+        try {
+            material = catalog.material(id);
+        } catch (InputException e) {
+            throw new InputException("material", e.problem());
+        }
+        Project.PipeSpec next;
+        String schedule = s.pipe().map(Project.PipeSpec::schedule).orElse("");
+        String size = s.pipe().map(Project.PipeSpec::size).orElse("");
+        try {
+            catalog.size(material, size, schedule);
+            next = new Project.PipeSpec(id, size, schedule);
+        } catch (InputException e) {
+            PipeSize nearest = nearest(material, null, bore);
+            next = new Project.PipeSpec(id, nearest.nominal(), nearest.schedule());
+        }
+        // Leaving an explicit bore for a catalog pipe drops the explicit values; overrides on a catalog pipe stay.
+        String d = s.pipe().isEmpty() ? "" : s.innerDiameter();
+        String e = s.pipe().isEmpty() ? "" : s.roughness();
+        return segment(s, s.name(), s.length(), Optional.of(next), d, e, s.fittings(), s.elevationChange());
+    }
+
+    private String text(double si, QuantityKind kind) {
+        UnitSystem u = unitSystem.get();
+        return Quantities.formatNumber(Quantities.fromSi(si, kind, u)) + " " + Quantities.unitSymbol(kind, u);
+    }
+
+    /** Bore of a segment as it stands (m), NaN when it cannot be read. */
+    private double boreOf(Project.SegmentSpec s) {
+        try {
+            if (!s.innerDiameter().isEmpty()) {
+                return Quantities.parse(s.innerDiameter(), QuantityKind.DIAMETER);
+            }
+            if (s.pipe().isPresent()) {
+                Project.PipeSpec pipe = s.pipe().get();
+                return catalog.size(catalog.material(pipe.material()), pipe.size(), pipe.schedule())
+                        .innerDiameter();
+            }
+        } catch (InputException e) {
+            return Double.NaN;
+        }
+        return Double.NaN;
+    }
+
+    private PipeSize nearest(Material material, String schedule, double bore) {
+        List<PipeSize> sizes =
+                catalog.sizes(material.sizeTable(), schedule == null || schedule.isEmpty() ? null : schedule);
+        if (Double.isNaN(bore)) {
+            return sizes.get(0);
+        }
+        return sizes.stream()
+                .min(Comparator.comparingDouble(z -> Math.abs(Math.log(z.innerDiameter() / bore))))
+                .orElseThrow();
+    }
+
+    private static Project.SegmentSpec segment(
+            Project.SegmentSpec s,
+            String name,
+            String length,
+            Optional<Project.PipeSpec> pipe,
+            String bore,
+            String roughness,
+            List<Project.FittingSpec> fittings,
+            String elevation) {
+        return new Project.SegmentSpec(name, length, pipe, bore, roughness, fittings, s.lossCoefficient(), elevation);
+    }
+
+    /** Appends a segment like the last one (same pipe), named after its position. */
+    public void addSegment() {
+        Project p = project.get();
+        List<Project.SegmentSpec> segments = new ArrayList<>(p.segments());
+        String name = "Segment " + (segments.size() + 1);
+        Project.SegmentSpec next =
+                segments.isEmpty() ? newSegment(name) : copyPipe(segments.get(segments.size() - 1), name);
+        segments.add(next);
+        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments));
+    }
+
+    private static Project.SegmentSpec copyPipe(Project.SegmentSpec like, String name) {
+        return new Project.SegmentSpec(
+                name, "10 m", like.pipe(), like.innerDiameter(), like.roughness(), List.of(), "", "");
+    }
+
+    /** Removes a segment; the last one cannot go (a run needs at least one). */
+    public boolean removeSegment(int index) {
+        Project p = project.get();
+        if (p.segments().size() <= 1 || index < 0 || index >= p.segments().size()) {
+            return false;
+        }
+        List<Project.SegmentSpec> segments = new ArrayList<>(p.segments());
+        segments.remove(index);
+        clearSegmentMessages();
+        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments));
+        return true;
+    }
+
+    /**
+     * Moves a segment up (−1) or down (+1) in flow order.
+     *
+     * @return the segment's new index, or the old one when it cannot move
+     */
+    public int moveSegment(int index, int delta) {
+        Project p = project.get();
+        int target = index + delta;
+        if (index < 0
+                || index >= p.segments().size()
+                || target < 0
+                || target >= p.segments().size()) {
+            return index;
+        }
+        List<Project.SegmentSpec> segments = new ArrayList<>(p.segments());
+        Project.SegmentSpec s = segments.remove(index);
+        segments.add(target, s);
+        clearSegmentMessages();
+        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments));
+        return target;
+    }
+
+    private void clearSegmentMessages() {
+        messages.keySet().removeIf(k -> k.startsWith("segments["));
+    }
+
+    private static Project with(
+            Project p,
+            String title,
+            Project.FluidSpec fluid,
+            String flow,
+            String friction,
+            List<Project.SegmentSpec> segments) {
+        return new Project(
+                title,
+                p.titleBlock(),
+                fluid,
+                flow,
+                p.flowUncertainty(),
+                friction,
+                segments,
+                p.ends(),
+                p.pump(),
+                p.limits(),
+                p.sizing(),
+                p.curve());
+    }
+
+    /** A check that either gives the next project or throws with a message. */
+    @FunctionalInterface
+    private interface Edit {
+        Project next();
+    }
+
+    private boolean accept(String key, Edit edit) {
+        Project next;
+        try {
+            next = edit.next();
+        } catch (InputException e) {
+            // The message sits beside its field, so the field's own name is left out; an item or point number stays.
+            String text = e.where().contains("item") || e.where().contains("point") ? plain(e) : e.problem();
+            messages.put(key, text + " — still using " + current(key));
+            return false;
+        }
+        messages.remove(key);
+        replace(next);
+        return true;
+    }
+
+    /** The value a field keeps after a rejected edit, for the message. */
+    private String current(String key) {
+        Project p = project.get();
+        String value;
+        if (key.startsWith("segments[")) {
+            int index = Integer.parseInt(key.substring(9, key.indexOf(']')));
+            Project.SegmentSpec s = p.segments().get(index);
+            String field = key.substring(key.indexOf("].") + 2);
+            value = switch (field) {
+                case "name" -> s.name();
+                case "length" -> s.length();
+                case "innerDiameter" -> s.innerDiameter().isEmpty() ? "the catalog bore" : s.innerDiameter();
+                case "roughness" -> s.roughness().isEmpty() ? "the catalog roughness" : s.roughness();
+                case "fittings" -> FittingsText.format(s.fittings());
+                case "elevationChange" -> s.elevationChange().isEmpty() ? "0 m" : s.elevationChange();
+                default ->
+                    s.pipe()
+                            .map(x -> x.material() + " " + x.size() + " " + x.schedule())
+                            .orElse("explicit bore");
+            };
+        } else {
+            value = switch (key) {
+                case "title" -> p.title();
+                case "fluid" -> p.fluid().name();
+                case "temperature" -> p.fluid().temperature();
+                case "flow" -> p.flow();
+                case "friction" -> p.friction();
+                case "pump.points" -> pumpPointsText().isEmpty() ? "no pump" : pumpPointsText();
+                case "pump.position" -> pumpPositionText().isEmpty() ? "no pump" : "segment " + pumpPositionText();
+                default -> {
+                    String v = "";
+                    for (RunField f : RunField.values()) {
+                        if (f.key().equals(key)) {
+                            v = runField(f).isEmpty() ? "the default" : runField(f);
+                        }
+                    }
+                    yield v.isEmpty() ? "the previous value" : v;
+                }
+            };
+        }
+        return value.isEmpty() ? "(empty)" : value;
+    }
+
+    private static String plain(InputException e) {
+        return e.where().isEmpty() ? e.problem() : e.where() + ": " + e.problem();
+    }
+
+    private void replace(Project next) {
+        Project current = project.get();
+        if (current.equals(next)) {
+            return;
+        }
+        undo.push(current);
+        if (undo.size() > UNDO_LIMIT) {
+            undo.removeLast();
+        }
+        redo.clear();
+        project.set(next);
+        updateUndoState();
+    }
+
+    public boolean undo() {
+        if (undo.isEmpty()) {
+            return false;
+        }
+        redo.push(project.get());
+        project.set(undo.pop());
+        messages.clear();
+        updateUndoState();
+        return true;
+    }
+
+    public boolean redo() {
+        if (redo.isEmpty()) {
+            return false;
+        }
+        undo.push(project.get());
+        project.set(redo.pop());
+        messages.clear();
+        updateUndoState();
+        return true;
+    }
+
+    private void updateUndoState() {
+        canUndo.set(!undo.isEmpty());
+        canRedo.set(!redo.isEmpty());
+    }
+
+    // ---- project actions ----
+
+    /** Starts a new project, after asking about unsaved changes. */
+    public boolean newProject() {
+        if (!confirmDiscard()) {
+            return false;
+        }
+        load(blankProject(), null);
+        return true;
+    }
+
+    /** Asks for a project file and opens it. */
+    public boolean open() {
+        if (!confirmDiscard()) {
+            return false;
+        }
+        Optional<Path> chosen = dialogs.chooseProjectToOpen(startFolder());
+        return chosen.isPresent() && openFile(chosen.get());
+    }
+
+    /** Opens a recent project, after asking about unsaved changes. */
+    public boolean openRecent(Path path) {
+        return confirmDiscard() && openFile(path);
+    }
+
+    /**
+     * Opens a file without asking about unsaved changes (the caller has). A file that does not load
+     * leaves the current project as it was and reports the engine's message.
+     */
+    public boolean openFile(Path path) {
+        Project loaded;
+        try {
+            loaded = ProjectFile.load(path);
+        } catch (InputException e) {
+            dialogs.showError("Could not open " + path.getFileName(), plain(e));
+            return false;
+        } catch (UncheckedIOException e) {
+            dialogs.showError("Could not open " + path.getFileName(), e.getMessage());
+            return false;
+        }
+        load(loaded, path.toAbsolutePath());
+        recent.add(path);
+        return true;
+    }
+
+    private void load(Project p, Path path) {
+        undo.clear();
+        redo.clear();
+        messages.clear();
+        file.set(path);
+        saved.set(p);
+        project.set(p);
+        updateUndoState();
+    }
+
+    /** Saves to the current file, or asks where when there is none. */
+    public boolean save() {
+        if (file.get() == null) {
+            return saveAs();
+        }
+        return write(file.get());
+    }
+
+    /** Asks where and saves there. */
+    public boolean saveAs() {
+        String suggested = (file.get() == null ? slug(project.get().title()) : displayName()) + ".json";
+        Optional<Path> chosen = dialogs.chooseProjectSaveTarget(startFolder(), suggested);
+        if (chosen.isEmpty()) {
+            return false;
+        }
+        Path target = chosen.get();
+        if (!target.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".json")) {
+            target = target.resolveSibling(target.getFileName() + ".json");
+        }
+        return write(target);
+    }
+
+    private boolean write(Path target) {
+        Project p = project.get();
+        try {
+            ProjectFile.save(p, target);
+        } catch (InputException e) {
+            dialogs.showError("Could not save " + target.getFileName(), plain(e));
+            return false;
+        } catch (UncheckedIOException e) {
+            dialogs.showError("Could not save " + target.getFileName(), e.getMessage());
+            return false;
+        }
+        file.set(target.toAbsolutePath());
+        saved.set(p);
+        recent.add(target);
+        return true;
+    }
+
+    /**
+     * Asks what to do with unsaved changes, if there are any.
+     *
+     * @return true when the caller may go on (saved, discarded, or nothing to lose)
+     */
+    public boolean confirmDiscard() {
+        if (!dirty.get()) {
+            return true;
+        }
+        return switch (dialogs.askUnsavedChanges(displayName())) {
+            case SAVE -> save();
+            case DISCARD -> true;
+            case CANCEL -> false;
+        };
+    }
+
+    /** Folder to start file dialogs in: the current file's, else the most recent project's. */
+    public Path startFolder() {
+        if (file.get() != null) {
+            return baseFolder();
+        }
+        return recent.entries().isEmpty() ? null : recent.entries().get(0).getParent();
+    }
+
+    static String slug(String title) {
+        String s = title == null ? "" : title.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-");
+        s = s.replaceAll("^-+|-+$", "");
+        if (s.length() > 40) {
+            s = s.substring(0, 40).replaceAll("-+$", "");
+        }
+        return s.isEmpty() ? "pipe-run" : s;
+    }
+}

@@ -1,0 +1,251 @@
+package org.headway.app;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.headway.caution.Caution;
+import org.headway.caution.Severity;
+import org.headway.report.HeadLossSheet;
+import org.headway.system.OperatingPoint;
+import org.headway.system.RunResult;
+import org.headway.system.RunTotals;
+import org.headway.system.SegmentResult;
+import org.headway.system.UncertaintyBand;
+import org.headway.units.Quantities;
+import org.headway.units.QuantityKind;
+import org.headway.units.UnitSystem;
+import org.jfree.chart.JFreeChart;
+
+/**
+ * View-model of the results: the per-segment table, the totals, the cautions and the three charts,
+ * recomputed through a {@link Recalculator} whenever the project or the unit system changes.
+ */
+public final class ResultsModel {
+
+    /** One row of the segment table, every value formatted with its unit. */
+    public record SegmentRow(
+            int number,
+            String name,
+            String velocity,
+            String reynolds,
+            String regime,
+            String frictionFactor,
+            String frictionLoss,
+            String lossCoefficient,
+            String minorLoss,
+            String totalLoss) {}
+
+    /** One line of the totals. */
+    public record TotalRow(String label, String value) {}
+
+    /**
+     * A caution as the panel shows it.
+     *
+     * @param segmentIndex index of the segment it concerns, or −1 when it concerns the whole run
+     * @param severity how much it matters
+     * @param message plain words, naming the segment
+     * @param basis where the rule comes from
+     */
+    public record CautionItem(int segmentIndex, Severity severity, String message, String basis) {
+
+        /** Severity in words for the panel. */
+        public String severityWords() {
+            return switch (severity) {
+                case NOTE -> "Note";
+                case WARNING -> "Check";
+                case SERIOUS -> "Serious";
+            };
+        }
+    }
+
+    private final ProjectEditor editor;
+    private final Recalculator recalculator;
+    private final String version;
+
+    private final ObservableList<SegmentRow> rows = FXCollections.observableArrayList();
+    private final ObservableList<TotalRow> totals = FXCollections.observableArrayList();
+    private final ObservableList<CautionItem> cautions = FXCollections.observableArrayList();
+    private final StringProperty problem = new SimpleStringProperty("");
+    private final BooleanProperty computing = new SimpleBooleanProperty(false);
+    private final ObjectProperty<Recalculation.Outcome> outcome = new SimpleObjectProperty<>();
+    private final ObjectProperty<JFreeChart> gradeChart = new SimpleObjectProperty<>();
+    private final ObjectProperty<JFreeChart> systemChart = new SimpleObjectProperty<>();
+    private final ObjectProperty<JFreeChart> frictionChart = new SimpleObjectProperty<>();
+
+    public ResultsModel(ProjectEditor editor, Recalculator recalculator, String version) {
+        this.editor = editor;
+        this.recalculator = recalculator;
+        this.version = version;
+        editor.projectProperty().addListener((obs, old, now) -> recalculate());
+        editor.unitSystemProperty().addListener((obs, old, now) -> recalculate());
+        recalculate();
+    }
+
+    /** Asks for a recalculation of the current project. */
+    public void recalculate() {
+        var project = editor.project();
+        var units = editor.unitSystemProperty().get();
+        var catalog = editor.catalog();
+        var folder = editor.baseFolder();
+        computing.set(true);
+        recalculator.request(() -> Recalculation.compute(project, units, catalog, folder, version), this::show);
+    }
+
+    /** Shows an outcome (on the view's thread). */
+    void show(Recalculation.Outcome o) {
+        computing.set(recalculator.busy());
+        outcome.set(o);
+        if (!o.ok()) {
+            problem.set("Results cannot be computed until this is fixed: " + o.problem());
+            // The last good results stay visible but are marked stale by the problem line.
+            return;
+        }
+        problem.set("");
+        HeadLossSheet sheet = o.sheet();
+        UnitSystem u = o.units();
+        RunResult result = sheet.result();
+        List<SegmentRow> newRows = new ArrayList<>();
+        for (int i = 0; i < result.segments().size(); i++) {
+            SegmentResult s = result.segments().get(i);
+            newRows.add(new SegmentRow(
+                    i + 1,
+                    s.name(),
+                    Quantities.format(s.velocity(), QuantityKind.VELOCITY, u),
+                    String.format(Locale.ROOT, "%,.0f", s.reynolds()),
+                    s.regime().name().toLowerCase(Locale.ROOT),
+                    String.format(Locale.ROOT, "%.4f", s.frictionFactor()),
+                    Quantities.format(s.majorHeadLoss(), QuantityKind.HEAD, u),
+                    String.format(Locale.ROOT, "%.2f", s.totalLossCoefficient()),
+                    Quantities.format(s.minorHeadLoss(), QuantityKind.HEAD, u),
+                    Quantities.format(s.headLoss(), QuantityKind.HEAD, u)));
+        }
+        rows.setAll(newRows);
+        totals.setAll(totalRows(sheet, u));
+        cautions.setAll(cautionItems(sheet));
+        gradeChart.set(o.grades());
+        systemChart.set(o.system());
+        frictionChart.set(o.friction());
+    }
+
+    static List<TotalRow> totalRows(HeadLossSheet sheet, UnitSystem u) {
+        RunResult r = sheet.result();
+        RunTotals t = r.totals();
+        List<TotalRow> list = new ArrayList<>();
+        list.add(new TotalRow("Design flow", Quantities.format(r.flow(), QuantityKind.VOLUMETRIC_FLOW, u)));
+        list.add(new TotalRow("Friction loss", Quantities.format(t.frictionHeadLoss(), QuantityKind.HEAD, u)));
+        list.add(new TotalRow("Fittings loss", Quantities.format(t.minorHeadLoss(), QuantityKind.HEAD, u)));
+        list.add(new TotalRow("Total head loss", Quantities.format(t.headLoss(), QuantityKind.HEAD, u)));
+        list.add(new TotalRow("Static head", Quantities.format(t.staticHead(), QuantityKind.HEAD, u)));
+        list.add(new TotalRow("Head required", Quantities.format(t.totalHead(), QuantityKind.HEAD, u)));
+        list.add(new TotalRow("Pressure drop", Quantities.format(t.pressureDrop(), QuantityKind.PRESSURE, u)));
+        r.npshAvailable()
+                .ifPresent(n -> list.add(new TotalRow("NPSH available", Quantities.format(n, QuantityKind.HEAD, u))));
+        UncertaintyBand band = sheet.band();
+        if (band != null) {
+            list.add(new TotalRow(
+                    "Head required, band",
+                    Quantities.format(band.totalHead().low(), QuantityKind.HEAD, u) + " to "
+                            + Quantities.format(band.totalHead().high(), QuantityKind.HEAD, u)));
+        }
+        OperatingPoint op = sheet.operatingPoint();
+        if (op != null) {
+            list.add(new TotalRow(
+                    "Pump operating point",
+                    op.found()
+                            ? Quantities.format(op.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
+                                    + Quantities.format(op.head(), QuantityKind.HEAD, u)
+                            : op.message()));
+        }
+        return list;
+    }
+
+    static List<CautionItem> cautionItems(HeadLossSheet sheet) {
+        List<CautionItem> items = new ArrayList<>();
+        List<SegmentResult> segments = sheet.result().segments();
+        for (Caution c : sheet.cautions()) {
+            int index = -1;
+            for (int i = 0; i < segments.size(); i++) {
+                if (segments.get(i).cautions().contains(c)) {
+                    index = i;
+                    break;
+                }
+            }
+            items.add(new CautionItem(index, c.severity(), c.message(), c.basis()));
+        }
+        // The standing caution goes last and stays reachable even when nothing else is raised.
+        items.sort((a, b) -> Boolean.compare(isGeneral(a), isGeneral(b)));
+        return items;
+    }
+
+    private static boolean isGeneral(CautionItem item) {
+        return item.message().equals(Caution.GENERAL_REVIEW.message());
+    }
+
+    /** The cautions besides the standing one. */
+    public long specificCautionCount() {
+        return cautions.stream().filter(c -> !isGeneral(c)).count();
+    }
+
+    /** Severities present, for the panel's heading. */
+    public Set<Severity> severities() {
+        Set<Severity> set = java.util.EnumSet.noneOf(Severity.class);
+        cautions.stream().filter(c -> !isGeneral(c)).forEach(c -> set.add(c.severity()));
+        return set;
+    }
+
+    public ObservableList<SegmentRow> rows() {
+        return rows;
+    }
+
+    public ObservableList<TotalRow> totals() {
+        return totals;
+    }
+
+    public ObservableList<CautionItem> cautions() {
+        return cautions;
+    }
+
+    public ReadOnlyStringProperty problemProperty() {
+        return problem;
+    }
+
+    public BooleanProperty computingProperty() {
+        return computing;
+    }
+
+    public ReadOnlyObjectProperty<Recalculation.Outcome> outcomeProperty() {
+        return outcome;
+    }
+
+    public ReadOnlyObjectProperty<JFreeChart> gradeChartProperty() {
+        return gradeChart;
+    }
+
+    public ReadOnlyObjectProperty<JFreeChart> systemChartProperty() {
+        return systemChart;
+    }
+
+    public ReadOnlyObjectProperty<JFreeChart> frictionChartProperty() {
+        return frictionChart;
+    }
+
+    /** The value of a total by label, or empty. */
+    public String total(String label) {
+        return totals.stream()
+                .filter(t -> t.label().equals(label))
+                .map(TotalRow::value)
+                .findFirst()
+                .orElse("");
+    }
+}

@@ -1,0 +1,65 @@
+package org.headway.app;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import javafx.embed.swing.SwingFXUtils;
+import javafx.scene.image.WritableImage;
+import javafx.stage.Stage;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** Writes a PNG of each main view to target/screenshots/ for people to look at. */
+@ExtendWith(ApplicationExtension.class)
+class ScreenshotTest {
+
+    static final Path FOLDER = Path.of("target", "screenshots");
+
+    static {
+        WindowFixture.prepareScreen();
+    }
+
+    private WindowFixture fx;
+    private Stage stage;
+
+    @Start
+    void start(Stage stage) throws Exception {
+        this.stage = stage;
+        fx = new WindowFixture(stage);
+    }
+
+    @Test
+    void eachMainViewIsWritten(FxRobot robot) throws Exception {
+        fx.awaitResults();
+        Files.createDirectories(FOLDER);
+        String[] names = {"results", "grade-lines", "system-curve", "friction-chart"};
+        for (int i = 0; i < MainWindow.TABS.size(); i++) {
+            int tab = i;
+            robot.interact(() -> fx.window.tabs().getSelectionModel().select(tab));
+            WaitForAsyncUtils.waitForFxEvents();
+            Path file = FOLDER.resolve(names[i] + ".png");
+            WritableImage[] image = new WritableImage[1];
+            robot.interact(() -> image[0] = stage.getScene().snapshot(null));
+            ImageIO.write(SwingFXUtils.fromFXImage(image[0], null), "png", file.toFile());
+            assertTrue(Files.size(file) > 10_000, file + " holds a drawn window");
+        }
+        // A trickle through the run: transitional flow raises cautions, so the panel opens.
+        robot.interact(() -> {
+            fx.window.tabs().getSelectionModel().select(0);
+            fx.editor.setFlow("0.12 L/s");
+        });
+        Thread.sleep(FxRecalculator.DEBOUNCE_MS * 2L);
+        fx.awaitResults();
+        assertTrue(fx.results.specificCautionCount() > 0, "a trickle flow raises cautions");
+        Path file = FOLDER.resolve("cautions.png");
+        WritableImage[] image = new WritableImage[1];
+        robot.interact(() -> image[0] = stage.getScene().snapshot(null));
+        ImageIO.write(SwingFXUtils.fromFXImage(image[0], null), "png", file.toFile());
+    }
+}
