@@ -28,6 +28,21 @@ public final class AtomicFiles {
     private AtomicFiles() {}
 
     /**
+     * A temporary file is created readable by its owner only; give the result the permissions the
+     * replaced file had, or the usual rw-r--r-- for a new file, so a project saved to a shared
+     * folder stays readable by colleagues.
+     */
+    private static void keepPermissions(Path temp, Path target) throws IOException {
+        if (!Files.getFileStore(temp).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
+            return;
+        }
+        java.util.Set<java.nio.file.attribute.PosixFilePermission> permissions = Files.exists(target)
+                ? Files.getPosixFilePermissions(target)
+                : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
+        Files.setPosixFilePermissions(temp, permissions);
+    }
+
+    /**
      * @param target file to create or replace
      * @param overwrite whether an existing target may be replaced
      * @param writer produces the content
@@ -48,6 +63,7 @@ public final class AtomicFiles {
             try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE)) {
                 channel.force(true);
             }
+            keepPermissions(temp, absolute);
             try {
                 Files.move(temp, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {

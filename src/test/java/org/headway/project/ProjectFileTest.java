@@ -204,4 +204,19 @@ class ProjectFileTest {
         assertEquals(1e-3, r.run().fluid().dynamicViscosity(), 1e-18);
         assertEquals("given in the project file", r.run().fluid().densitySource());
     }
+
+    @Test
+    void savedFilesAreReadableByOthersLikeAnyNewFileAndKeepTheirPermissions(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("shared.json");
+        ProjectFile.save(ProjectFile.parse(VALID), file);
+        // Common practice, no source: a new document gets rw-r--r-- (umask 022), not the temporary file's rw-------.
+        assertEquals(
+                "rw-r--r--",
+                java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(file)));
+        Files.setPosixFilePermissions(file, java.nio.file.attribute.PosixFilePermissions.fromString("rw-rw----"));
+        ProjectFile.save(ProjectFile.parse(VALID), file);
+        assertEquals(
+                "rw-rw----",
+                java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(file)));
+    }
 }
