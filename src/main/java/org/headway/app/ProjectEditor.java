@@ -686,7 +686,15 @@ public final class ProjectEditor {
 
     private String text(double si, QuantityKind kind) {
         UnitSystem u = unitSystem.get();
-        return Quantities.formatNumber(Quantities.fromSi(si, kind, u)) + " " + Quantities.unitSymbol(kind, u);
+        return compact(Quantities.formatNumber(Quantities.fromSi(si, kind, u))) + " " + Quantities.unitSymbol(kind, u);
+    }
+
+    /**
+     * An input echoed back without padding zeros ("420 m", not "420.0 m"): the engineer typed it,
+     * so the zeros would claim a precision they never gave.
+     */
+    static String compact(String number) {
+        return number.replaceAll("(\\.\\d*?)0+(?=$|e)", "$1").replaceAll("\\.(?=$|e)", "");
     }
 
     /** Bore of a segment as it stands (m), NaN when it cannot be read. */
