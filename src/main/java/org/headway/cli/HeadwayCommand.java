@@ -19,6 +19,7 @@ import picocli.CommandLine.Command;
             DemoCommand.class,
             SolveCommand.class,
             SheetCommand.class,
+            FrictionCommand.class,
             FluidCommand.class,
             CatalogCommand.class
         })

@@ -117,9 +117,11 @@ final class FrictionChecks {
         if (value == 0) {
             return "0";
         }
-        return new BigDecimal(value)
-                .round(new MathContext(6))
-                .stripTrailingZeros()
-                .toString();
+        BigDecimal rounded = new BigDecimal(value).round(new MathContext(6)).stripTrailingZeros();
+        double magnitude = Math.abs(value);
+        if (magnitude >= 1e-4 && magnitude < 1e7) {
+            return rounded.toPlainString();
+        }
+        return rounded.toString().replace("E+", "e").replace("E", "e");
     }
 }

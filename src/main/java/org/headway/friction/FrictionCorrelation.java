@@ -35,9 +35,10 @@ public interface FrictionCorrelation {
     FrictionResult evaluate(double reynolds, double relativeRoughness);
 
     /**
-     * The friction factor alone, for loops that evaluate many points (system curves). The same
-     * value as {@code evaluate(reynolds, relativeRoughness).frictionFactor()}; implementations
-     * override it to skip building the result and its cautions.
+     * The friction factor alone, for loops that evaluate many points (system curves). The value of
+     * {@code evaluate(reynolds, relativeRoughness).frictionFactor()} to within the method's stated
+     * accuracy (an iterative method may take a different, equally accurate route to it);
+     * implementations override it to skip building the result and its cautions.
      *
      * @param reynolds Reynolds number (ratio), finite and positive
      * @param relativeRoughness ε/D (ratio), 0 ≤ ε/D &lt; 1
