@@ -21,7 +21,9 @@ import picocli.CommandLine.Command;
             SheetCommand.class,
             FrictionCommand.class,
             FluidCommand.class,
-            CatalogCommand.class
+            CatalogCommand.class,
+            FitCommand.class,
+            GroupsCommand.class
         })
 public final class HeadwayCommand implements Runnable {
 

@@ -1,0 +1,202 @@
+package org.headway.cli;
+
+import java.util.EnumMap;
+import java.util.Map;
+import org.headway.caution.InputException;
+import org.headway.correlation.Dimension;
+
+/**
+ * Reads a unit written as text (e.g. {@code kg/m^3}, {@code Pa*s}, {@code m/s}, {@code N·m},
+ * {@code m³/h}) into the exponents of the SI base dimensions, for dimensional analysis. Only the
+ * dimension matters, so prefixes are accepted and ignored.
+ *
+ * <p>Symbols: m, g, s, K, mol, A, cd (base); N, Pa, J, W, Hz, L (litre), bar, min, h, rad, rpm;
+ * {@code 1} or {@code -} for dimensionless. Prefixes Y Z E P T G M k h da d c m µ u n p f a z y.
+ * Operators {@code *} {@code ·} {@code /} (left to right: {@code kg/m/s} is kg·m⁻¹·s⁻¹), {@code ^}
+ * with an integer exponent (also {@code ^(-1)}, and the superscripts ⁻¹²³⁴), and parentheses.
+ */
+final class DimensionParser {
+
+    private static final Map<String, int[]> SYMBOLS = Map.ofEntries(
+            // exponents of M, L, T, Θ, I, N, J
+            Map.entry("m", new int[] {0, 1, 0, 0, 0, 0, 0}),
+            Map.entry("g", new int[] {1, 0, 0, 0, 0, 0, 0}),
+            Map.entry("s", new int[] {0, 0, 1, 0, 0, 0, 0}),
+            Map.entry("K", new int[] {0, 0, 0, 1, 0, 0, 0}),
+            Map.entry("A", new int[] {0, 0, 0, 0, 1, 0, 0}),
+            Map.entry("mol", new int[] {0, 0, 0, 0, 0, 1, 0}),
+            Map.entry("cd", new int[] {0, 0, 0, 0, 0, 0, 1}),
+            Map.entry("N", new int[] {1, 1, -2, 0, 0, 0, 0}),
+            Map.entry("Pa", new int[] {1, -1, -2, 0, 0, 0, 0}),
+            Map.entry("bar", new int[] {1, -1, -2, 0, 0, 0, 0}),
+            Map.entry("J", new int[] {1, 2, -2, 0, 0, 0, 0}),
+            Map.entry("W", new int[] {1, 2, -3, 0, 0, 0, 0}),
+            Map.entry("Hz", new int[] {0, 0, -1, 0, 0, 0, 0}),
+            Map.entry("rpm", new int[] {0, 0, -1, 0, 0, 0, 0}),
+            Map.entry("L", new int[] {0, 3, 0, 0, 0, 0, 0}),
+            Map.entry("min", new int[] {0, 0, 1, 0, 0, 0, 0}),
+            Map.entry("h", new int[] {0, 0, 1, 0, 0, 0, 0}),
+            Map.entry("rad", new int[] {0, 0, 0, 0, 0, 0, 0}));
+
+    private static final String[] PREFIXES = {
+        "da", "Y", "Z", "E", "P", "T", "G", "M", "k", "h", "d", "c", "m", "µ", "μ", "u", "n", "p", "f", "a", "z", "y"
+    };
+
+    private final String text;
+    private final String where;
+    private int pos;
+
+    private DimensionParser(String text, String where) {
+        this.text = text;
+        this.where = where;
+    }
+
+    /**
+     * @param unit the unit text
+     * @param where what to name in an error message, e.g. {@code --var rho}
+     * @return exponent of each base dimension (zero exponents left out)
+     * @throws InputException naming the character position and the unknown symbol or bad syntax
+     */
+    static Map<Dimension, Integer> parse(String unit, String where) {
+        String t = unit.trim();
+        Map<Dimension, Integer> out = new EnumMap<>(Dimension.class);
+        if (t.isEmpty() || t.equals("1") || t.equals("-")) {
+            return out;
+        }
+        DimensionParser p = new DimensionParser(t, where);
+        int[] e = p.product();
+        if (p.pos < t.length()) {
+            throw p.error("unexpected '" + t.charAt(p.pos) + "'");
+        }
+        Dimension[] dims = Dimension.values();
+        for (int i = 0; i < dims.length; i++) {
+            if (e[i] != 0) {
+                out.put(dims[i], e[i]);
+            }
+        }
+        return out;
+    }
+
+    private int[] product() {
+        int[] result = power();
+        while (pos < text.length()) {
+            char c = text.charAt(pos);
+            if (c == '*' || c == '·' || c == '.' || c == ' ') {
+                pos++;
+                skipSpaces();
+                add(result, power(), 1);
+            } else if (c == '/') {
+                pos++;
+                skipSpaces();
+                add(result, power(), -1);
+            } else {
+                break;
+            }
+        }
+        return result;
+    }
+
+    private void skipSpaces() {
+        while (pos < text.length() && text.charAt(pos) == ' ') {
+            pos++;
+        }
+    }
+
+    private int[] power() {
+        int[] base = factor();
+        int exponent = 1;
+        if (pos < text.length() && text.charAt(pos) == '^') {
+            pos++;
+            boolean paren = pos < text.length() && text.charAt(pos) == '(';
+            if (paren) {
+                pos++;
+            }
+            int start = pos;
+            if (pos < text.length() && (text.charAt(pos) == '-' || text.charAt(pos) == '+')) {
+                pos++;
+            }
+            while (pos < text.length() && Character.isDigit(text.charAt(pos))) {
+                pos++;
+            }
+            String digits = text.substring(start, pos);
+            if (digits.isEmpty() || digits.equals("-") || digits.equals("+")) {
+                throw error("expected an integer exponent after '^'");
+            }
+            exponent = Integer.parseInt(digits);
+            if (paren) {
+                if (pos >= text.length() || text.charAt(pos) != ')') {
+                    throw error("expected ')' after the exponent");
+                }
+                pos++;
+            }
+        } else if (pos < text.length() && "⁻¹²³⁴⁵⁶".indexOf(text.charAt(pos)) >= 0) {
+            int sign = 1;
+            if (text.charAt(pos) == '⁻') {
+                sign = -1;
+                pos++;
+            }
+            int index = pos < text.length() ? "⁰¹²³⁴⁵⁶".indexOf(text.charAt(pos)) : -1;
+            if (index < 0) {
+                throw error("expected a superscript digit");
+            }
+            pos++;
+            exponent = sign * index;
+        }
+        int[] out = new int[base.length];
+        add(out, base, exponent);
+        return out;
+    }
+
+    private int[] factor() {
+        if (pos >= text.length()) {
+            throw error("the unit ends where a symbol is expected");
+        }
+        char c = text.charAt(pos);
+        if (c == '(') {
+            pos++;
+            int[] inner = product();
+            if (pos >= text.length() || text.charAt(pos) != ')') {
+                throw error("expected ')'");
+            }
+            pos++;
+            return inner;
+        }
+        if (c == '1') {
+            pos++;
+            return new int[7];
+        }
+        int start = pos;
+        while (pos < text.length() && (Character.isLetter(text.charAt(pos)) || text.charAt(pos) == 'µ')) {
+            pos++;
+        }
+        String symbol = text.substring(start, pos);
+        if (symbol.isEmpty()) {
+            throw error("unexpected '" + c + "'");
+        }
+        int[] e = SYMBOLS.get(symbol);
+        if (e != null) {
+            return e.clone();
+        }
+        for (String prefix : PREFIXES) {
+            if (symbol.startsWith(prefix) && SYMBOLS.containsKey(symbol.substring(prefix.length()))) {
+                return SYMBOLS.get(symbol.substring(prefix.length())).clone();
+            }
+        }
+        pos = start;
+        InputException located = error("unknown unit symbol '" + symbol + "'");
+        throw new InputException(
+                where,
+                located.problem() + "; known symbols: m, g, s, K, A, mol, cd, N, Pa, bar, J, W, Hz, rpm, L, min, h,"
+                        + " rad, with SI prefixes");
+    }
+
+    private static void add(int[] into, int[] e, int times) {
+        for (int i = 0; i < into.length; i++) {
+            into[i] += times * e[i];
+        }
+    }
+
+    private InputException error(String problem) {
+        return new InputException(where, problem + " at character " + (pos + 1) + " of unit '" + text + "'");
+    }
+}

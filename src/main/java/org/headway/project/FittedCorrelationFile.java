@@ -1,0 +1,286 @@
+package org.headway.project;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Set;
+import org.headway.caution.InputException;
+import org.headway.correlation.FitStatistics;
+import org.headway.correlation.FittedCorrelation;
+import org.headway.correlation.FittedParameter;
+import org.headway.correlation.VariableRange;
+
+/**
+ * Saves and loads a {@link FittedCorrelation} as a small JSON file:
+ *
+ * <pre>
+ * { "format": "headway-fitted-correlation", "version": 1,
+ *   "response": "f", "form": "power: …", "expression": "a*Re^b",
+ *   "variables": [ { "name": "Re", "min": 4000.0, "max": 100000.0 } ],
+ *   "parameters": [ { "name": "a", "value": …, "standard_error": …, "ci95_low": …, "ci95_high": … } ],
+ *   "statistics": { "residual_sum_of_squares": …, "residual_standard_deviation": …, "r_squared": …,
+ *                   "adjusted_r_squared": …, "degrees_of_freedom": …, "points": … },
+ *   "citation": "fitted by the user to their data" }
+ * </pre>
+ *
+ * Numbers are written in shortest round-trip form, so a saved fit reloads to identical doubles.
+ */
+public final class FittedCorrelationFile {
+
+    /** Value of the {@code format} key. */
+    public static final String FORMAT = "headway-fitted-correlation";
+    /** Current file version. */
+    public static final int VERSION = 1;
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private FittedCorrelationFile() {}
+
+    /** The JSON tree of a fitted correlation. */
+    public static ObjectNode toJson(FittedCorrelation fit) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("format", FORMAT);
+        root.put("version", VERSION);
+        root.put("response", fit.responseName());
+        root.put("form", fit.formDescription());
+        root.put("expression", fit.expressionText());
+        ArrayNode vars = root.putArray("variables");
+        for (VariableRange r : fit.variableRanges()) {
+            ObjectNode v = vars.addObject();
+            v.put("name", r.name());
+            v.put("min", r.min());
+            v.put("max", r.max());
+        }
+        ArrayNode params = root.putArray("parameters");
+        for (FittedParameter p : fit.parameters()) {
+            ObjectNode n = params.addObject();
+            n.put("name", p.name());
+            n.put("value", p.value());
+            n.put("standard_error", p.standardError());
+            n.put("ci95_low", p.ci95Low());
+            n.put("ci95_high", p.ci95High());
+        }
+        FitStatistics s = fit.statistics();
+        ObjectNode stats = root.putObject("statistics");
+        stats.put("residual_sum_of_squares", s.residualSumOfSquares());
+        stats.put("residual_standard_deviation", s.residualStandardDeviation());
+        stats.put("r_squared", s.rSquared());
+        stats.put("adjusted_r_squared", s.adjustedRSquared());
+        stats.put("degrees_of_freedom", s.degreesOfFreedom());
+        stats.put("points", s.pointCount());
+        root.put("citation", fit.citation());
+        return root;
+    }
+
+    /**
+     * Writes the file atomically: a temporary file in the same folder, then a move over the target.
+     *
+     * @param file target path
+     * @param fit the correlation
+     * @throws IOException if the folder cannot be written
+     */
+    public static void save(Path file, FittedCorrelation fit) throws IOException {
+        Path absolute = file.toAbsolutePath();
+        Path folder = absolute.getParent();
+        Path temp = Files.createTempFile(folder, "." + absolute.getFileName(), ".tmp");
+        try {
+            Files.writeString(temp, MAPPER.writeValueAsString(toJson(fit)) + "\n", StandardCharsets.UTF_8);
+            try {
+                Files.move(temp, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(temp, absolute, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+
+    /**
+     * Reads a fitted-correlation file.
+     *
+     * @param file the file
+     * @return the correlation
+     * @throws InputException naming the file and JSON path of a missing, unknown or ill-typed key,
+     *     or the file itself if it is missing or not JSON
+     */
+    public static FittedCorrelation load(Path file) {
+        String text;
+        try {
+            text = Files.readString(file, StandardCharsets.UTF_8);
+        } catch (NoSuchFileException e) {
+            throw new InputException(file.toString(), "file not found");
+        } catch (IOException e) {
+            throw new InputException(file.toString(), "cannot read: " + e.getMessage());
+        }
+        JsonNode root;
+        try {
+            root = MAPPER.readTree(text);
+        } catch (JsonProcessingException e) {
+            throw new InputException(
+                    file + " line " + e.getLocation().getLineNr() + ", column "
+                            + e.getLocation().getColumnNr(),
+                    "not valid JSON: " + e.getOriginalMessage());
+        }
+        try {
+            return fromJson(root);
+        } catch (InputException e) {
+            throw e.at(file + ": ");
+        }
+    }
+
+    /** Reads the JSON tree; errors name the JSON path ($.parameters[1].value). */
+    public static FittedCorrelation fromJson(JsonNode root) {
+        object(root, "$");
+        keys(
+                root,
+                "$",
+                Set.of(
+                        "format",
+                        "version",
+                        "response",
+                        "form",
+                        "expression",
+                        "variables",
+                        "parameters",
+                        "statistics",
+                        "citation"));
+        String format = text(root, "$", "format");
+        if (!format.equals(FORMAT)) {
+            throw new InputException("$.format", "expected \"" + FORMAT + "\", got \"" + format + "\"");
+        }
+        int version = integer(root, "$", "version");
+        if (version != VERSION) {
+            throw new InputException("$.version", "this Headway reads version " + VERSION + ", got " + version);
+        }
+        List<String> names = new ArrayList<>();
+        List<VariableRange> ranges = new ArrayList<>();
+        JsonNode vars = array(root, "$", "variables");
+        for (int i = 0; i < vars.size(); i++) {
+            String path = "$.variables[" + i + "]";
+            JsonNode v = vars.get(i);
+            object(v, path);
+            keys(v, path, Set.of("name", "min", "max"));
+            String name = text(v, path, "name");
+            names.add(name);
+            ranges.add(new VariableRange(name, number(v, path, "min"), number(v, path, "max")));
+        }
+        List<FittedParameter> parameters = new ArrayList<>();
+        JsonNode params = array(root, "$", "parameters");
+        for (int i = 0; i < params.size(); i++) {
+            String path = "$.parameters[" + i + "]";
+            JsonNode p = params.get(i);
+            object(p, path);
+            keys(p, path, Set.of("name", "value", "standard_error", "ci95_low", "ci95_high"));
+            parameters.add(new FittedParameter(
+                    text(p, path, "name"),
+                    number(p, path, "value"),
+                    number(p, path, "standard_error"),
+                    number(p, path, "ci95_low"),
+                    number(p, path, "ci95_high")));
+        }
+        JsonNode s = root.get("statistics");
+        if (s == null) {
+            throw new InputException("$.statistics", "missing");
+        }
+        object(s, "$.statistics");
+        keys(
+                s,
+                "$.statistics",
+                Set.of(
+                        "residual_sum_of_squares",
+                        "residual_standard_deviation",
+                        "r_squared",
+                        "adjusted_r_squared",
+                        "degrees_of_freedom",
+                        "points"));
+        FitStatistics stats = new FitStatistics(
+                number(s, "$.statistics", "residual_sum_of_squares"),
+                number(s, "$.statistics", "residual_standard_deviation"),
+                number(s, "$.statistics", "r_squared"),
+                number(s, "$.statistics", "adjusted_r_squared"),
+                integer(s, "$.statistics", "degrees_of_freedom"),
+                integer(s, "$.statistics", "points"));
+        text(root, "$", "citation");
+        try {
+            return new FittedCorrelation(
+                    text(root, "$", "response"),
+                    text(root, "$", "form"),
+                    text(root, "$", "expression"),
+                    names,
+                    parameters,
+                    ranges,
+                    stats);
+        } catch (InputException e) {
+            throw e.at("$");
+        }
+    }
+
+    private static void object(JsonNode node, String path) {
+        if (!node.isObject()) {
+            throw new InputException(path, "expected a JSON object, got " + node.getNodeType());
+        }
+    }
+
+    private static void keys(JsonNode node, String path, Set<String> allowed) {
+        for (Iterator<String> it = node.fieldNames(); it.hasNext(); ) {
+            String key = it.next();
+            if (!allowed.contains(key)) {
+                throw new InputException(
+                        path + "." + key, "unknown key; allowed keys are " + new java.util.TreeSet<>(allowed));
+            }
+        }
+    }
+
+    private static JsonNode required(JsonNode node, String path, String key) {
+        JsonNode v = node.get(key);
+        if (v == null || v.isNull()) {
+            throw new InputException(path + "." + key, "missing");
+        }
+        return v;
+    }
+
+    private static String text(JsonNode node, String path, String key) {
+        JsonNode v = required(node, path, key);
+        if (!v.isTextual()) {
+            throw new InputException(path + "." + key, "expected text, got " + v);
+        }
+        return v.asText();
+    }
+
+    private static double number(JsonNode node, String path, String key) {
+        JsonNode v = required(node, path, key);
+        if (!v.isNumber()) {
+            throw new InputException(path + "." + key, "expected a number, got " + v);
+        }
+        return v.doubleValue();
+    }
+
+    private static int integer(JsonNode node, String path, String key) {
+        JsonNode v = required(node, path, key);
+        if (!v.canConvertToInt() || !v.isIntegralNumber()) {
+            throw new InputException(path + "." + key, "expected a whole number, got " + v);
+        }
+        return v.intValue();
+    }
+
+    private static JsonNode array(JsonNode node, String path, String key) {
+        JsonNode v = required(node, path, key);
+        if (!v.isArray()) {
+            throw new InputException(path + "." + key, "expected a list, got " + v);
+        }
+        return v;
+    }
+}

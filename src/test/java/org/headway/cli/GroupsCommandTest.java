@@ -1,0 +1,123 @@
+package org.headway.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.util.Map;
+import org.headway.caution.InputException;
+import org.headway.correlation.Dimension;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/** {@code headway groups} and the unit → dimension reader. */
+class GroupsCommandTest {
+
+    @Test
+    void pipeFlowGroupsAsJson() throws Exception {
+        // Pipe pressure drop: 4 groups from 7 variables (White, Fluid Mechanics, ch. 5–6, from memory).
+        CliRun run = CliRun.of(
+                "groups",
+                "--var",
+                "dp=Pa",
+                "--var",
+                "rho=kg/m^3",
+                "--var",
+                "V=m/s",
+                "--var",
+                "D=m",
+                "--var",
+                "mu=Pa*s",
+                "--var",
+                "eps=mm",
+                "--var",
+                "L=m",
+                "--format",
+                "json");
+        assertEquals(0, run.exitCode(), run.err());
+        JsonNode json = new ObjectMapper().readTree(run.out());
+        assertEquals(3, json.get("rank").intValue());
+        assertEquals(4, json.get("groups").size());
+        JsonNode re = json.get("groups").get(1);
+        assertEquals("Reynolds number", re.get("name").asText());
+        assertEquals(1, re.get("exponents").get("rho").intValue());
+        assertEquals(-1, re.get("exponents").get("mu").intValue());
+    }
+
+    @Test
+    void dependentRepeatingVariablesAreBadInputWithExplanation() {
+        CliRun run = CliRun.of(
+                "groups",
+                "--var",
+                "dp=Pa",
+                "--var",
+                "rho=kg/m^3",
+                "--var",
+                "V=m/s",
+                "--var",
+                "D=m",
+                "--var",
+                "L=m",
+                "--repeating",
+                "rho,D,L");
+        assertEquals(2, run.exitCode());
+        assertTrue(run.err().contains("not independent"), run.err());
+    }
+
+    @Test
+    void unknownUnitIsBadInput() {
+        CliRun run = CliRun.of("groups", "--var", "dp=psi", "--var", "rho=kg/m^3");
+        assertEquals(2, run.exitCode());
+        assertTrue(run.err().contains("--var dp: unknown unit symbol 'psi' at character 1"), run.err());
+    }
+
+    @ParameterizedTest
+    @CsvSource(
+            delimiter = ';',
+            value = {
+                // unit; M; L; T — SI Brochure, 9th ed. (2019), table 4 derived units (from memory)
+                "kg/m^3; 1; -3; 0",
+                "Pa*s; 1; -1; -1",
+                "m/s; 0; 1; -1",
+                "N·m; 1; 2; -2",
+                "kW; 1; 2; -3",
+                "m³/h; 0; 3; -1",
+                "L/min; 0; 3; -1",
+                "m^2/s; 0; 2; -1",
+                "kg/(m*s); 1; -1; -1",
+                "m s^-2; 0; 1; -2",
+                "mm^(-1); 0; -1; 0",
+                "kPa; 1; -1; -2",
+                "Hz; 0; 0; -1",
+                "J/kg; 0; 2; -2",
+                "µm; 0; 1; 0",
+                "1; 0; 0; 0",
+                "-; 0; 0; 0"
+            })
+    void unitsBecomeDimensionExponents(String unit, int mass, int length, int time) {
+        Map<Dimension, Integer> e = DimensionParser.parse(unit, "test");
+        assertEquals(mass, e.getOrDefault(Dimension.MASS, 0), unit);
+        assertEquals(length, e.getOrDefault(Dimension.LENGTH, 0), unit);
+        assertEquals(time, e.getOrDefault(Dimension.TIME, 0), unit);
+    }
+
+    @Test
+    void temperatureAndAmountAreBaseDimensions() {
+        assertEquals(
+                Map.of(Dimension.MASS, 1, Dimension.LENGTH, 2, Dimension.TIME, -2, Dimension.TEMPERATURE, -1),
+                DimensionParser.parse("J/K", "x"));
+        assertEquals(Map.of(Dimension.AMOUNT, 1, Dimension.LENGTH, -3), DimensionParser.parse("mol/L", "x"));
+    }
+
+    @Test
+    void syntaxErrorsNameThePosition() {
+        InputException e = assertThrows(InputException.class, () -> DimensionParser.parse("kg/(m*s", "--var mu"));
+        assertEquals("--var mu", e.where());
+        assertTrue(e.problem().contains("expected ')' at character 8"), e.getMessage());
+        InputException exp = assertThrows(InputException.class, () -> DimensionParser.parse("m^x", "--var a"));
+        assertTrue(exp.problem().contains("integer exponent"), exp.getMessage());
+    }
+}

@@ -1,0 +1,108 @@
+package org.headway.correlation;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.headway.caution.InputException;
+import org.headway.friction.FlowRegime;
+import org.headway.friction.FrictionResult;
+import org.junit.jupiter.api.Test;
+
+/** Fitted correlations as values, as a friction method and as a loss coefficient. */
+class FittedCorrelationTest {
+
+    /** Blasius (1913), smooth pipes: f = 0.3164 Re^−0.25 for 4000 ≤ Re ≤ 10⁵ (from memory). */
+    private static FittedCorrelation blasiusFit() {
+        int n = 25;
+        double[] re = new double[n];
+        double[] f = new double[n];
+        for (int i = 0; i < n; i++) {
+            re[i] = 4000 * Math.pow(25.0, i / (n - 1.0));
+            f[i] = 0.3164 * Math.pow(re[i], -0.25);
+        }
+        FitResult fit =
+                new LeastSquaresFitter().fit(Observations.of("f", f, List.of("Re"), re), new FitForm.Power(false));
+        return fit.toCorrelation();
+    }
+
+    @Test
+    void evaluatesTheFittedFormAndKeepsTheFitRange() {
+        FittedCorrelation c = blasiusFit();
+        assertEquals(0.3164 * Math.pow(2e4, -0.25), c.evaluate(2e4), 1e-12);
+        assertEquals(4000, c.variableRanges().get(0).min(), 1e-9);
+        assertEquals(1e5, c.variableRanges().get(0).max(), 1e-6);
+        assertEquals("fitted by the user to their data", c.citation());
+        assertTrue(c.rangeCautions(5e4).isEmpty());
+        assertEquals(
+                "fitted-correlation-extrapolated", c.rangeCautions(2e5).get(0).code());
+        assertTrue(
+                c.rangeCautions(2e5).get(0).message().contains("Re = 200000"),
+                c.rangeCautions(2e5).toString());
+    }
+
+    @Test
+    void actsAsAFrictionCorrelationWithExtrapolationCaution() {
+        FittedFrictionCorrelation friction = new FittedFrictionCorrelation("rig-fit", blasiusFit());
+        FrictionResult inside = friction.evaluate(3e4, 0.0);
+        assertEquals(0.3164 * Math.pow(3e4, -0.25), inside.frictionFactor(), 1e-12);
+        assertEquals(FlowRegime.TURBULENT, inside.regime());
+        assertTrue(inside.cautions().isEmpty());
+        FrictionResult outside = friction.evaluate(1e6, 0.0);
+        assertEquals(1, outside.cautions().size());
+        assertTrue(friction.validity().contains(5e4, 0.0));
+        FrictionResult rough = friction.evaluate(3e4, 1e-3);
+        assertTrue(rough.cautions().stream().anyMatch(c -> c.code().equals("fitted-correlation-ignores-roughness")));
+    }
+
+    @Test
+    void unusableFrictionFactorIsRejectedWithExplanation() {
+        // A straight line through falling f crosses zero when extrapolated far enough.
+        double[] re = {4000, 8000, 16000, 32000};
+        double[] f = {0.040, 0.034, 0.028, 0.023};
+        FittedCorrelation line = new LeastSquaresFitter()
+                .fit(Observations.of("f", f, List.of("Re"), re), new FitForm.Linear())
+                .toCorrelation();
+        FittedFrictionCorrelation friction = new FittedFrictionCorrelation("line", line);
+        InputException e = assertThrows(InputException.class, () -> friction.evaluate(1e6, 0.0));
+        assertTrue(e.getMessage().contains("unusable friction factor"), e.getMessage());
+        assertTrue(e.getMessage().contains("Re = 1.00000e+06"), e.getMessage());
+        assertThrows(InputException.class, () -> friction.evaluate(-5, 0.0));
+    }
+
+    @Test
+    void frictionWrapperNeedsReynoldsInputs() {
+        FittedCorrelation threeInputs = new FittedCorrelation(
+                "f",
+                "test",
+                "a*x + y + z",
+                List.of("x", "y", "z"),
+                List.of(new FittedParameter("a", 1, 0, 1, 1)),
+                List.of(new VariableRange("x", 0, 1), new VariableRange("y", 0, 1), new VariableRange("z", 0, 1)),
+                new FitStatistics(0, 0, 1, 1, 1, 2));
+        InputException e = assertThrows(InputException.class, () -> new FittedFrictionCorrelation("x", threeInputs));
+        assertTrue(e.getMessage().contains("Reynolds number"), e.getMessage());
+    }
+
+    @Test
+    void lossCoefficientAgainstReynolds() {
+        // K = K∞ + K₁/Re, the shape of the first term of the 2-K method (Hooper 1981, from memory).
+        double[] re = {1e3, 3e3, 1e4, 3e4, 1e5};
+        double[] k = new double[re.length];
+        double[] inverse = new double[re.length];
+        for (int i = 0; i < re.length; i++) {
+            k[i] = 0.4 + 800 / re[i];
+            inverse[i] = 1 / re[i];
+        }
+        FitResult fit = new LeastSquaresFitter()
+                .fit(
+                        Observations.of("K", k, List.of("Re"), re),
+                        new FitForm.UserExpression("kinf + k1/Re", java.util.Map.of("kinf", 1.0, "k1", 1.0)));
+        FittedLossCoefficient loss = new FittedLossCoefficient("strainer", fit.toCorrelation());
+        var estimate = loss.evaluate(2e4);
+        assertEquals(0.4 + 800 / 2e4, estimate.lossCoefficient(), 1e-10);
+        assertTrue(estimate.cautions().isEmpty());
+        assertEquals(1, loss.evaluate(10).cautions().size());
+    }
+}
