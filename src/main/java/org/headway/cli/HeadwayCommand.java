@@ -23,7 +23,8 @@ import picocli.CommandLine.Command;
             FluidCommand.class,
             CatalogCommand.class,
             FitCommand.class,
-            GroupsCommand.class
+            GroupsCommand.class,
+            RigCommand.class
         })
 public final class HeadwayCommand implements Runnable {
 
