@@ -51,8 +51,10 @@ public final class EffectiveRoughnessFit {
     /** Fewest turbulent points for a fit. */
     public static final int MIN_POINTS = 3;
 
-    private static final int GRID_STEPS = 60;
-    private static final int BISECTION_STEPS = 60;
+    private static final int GRID_STEPS = 30;
+    /** Halvings of a θ bracket at most ~28 wide: 45 leave it below 1e-12, far under any interval. */
+    private static final int BISECTION_STEPS = 45;
+
     private static final double LN_COEFFICIENT = 2.0 / Math.log(10.0);
     private static final String BASIS = "profile-likelihood interval with the F(1, ν) quantile; Bates and Watts"
             + " (1988), Nonlinear Regression Analysis and Its Applications, ch. 6 (from memory)";

@@ -27,17 +27,19 @@ public record RigPoint(
         Objects.requireNonNull(temperature, "temperature");
         Objects.requireNonNull(fluid, "fluid");
         carried = List.copyOf(carried);
-        String where = "point at line " + line;
         if (!(flow > 0) || flow == Double.POSITIVE_INFINITY) {
-            throw new InputException(where + ", flow", "must be finite and greater than zero, got " + flow);
+            throw new InputException(
+                    "point at line " + line + ", flow", "must be finite and greater than zero, got " + flow);
         }
         if (!(pressureDrop > 0) || pressureDrop == Double.POSITIVE_INFINITY) {
             throw new InputException(
-                    where + ", pressure drop", "must be finite and greater than zero, got " + pressureDrop);
+                    "point at line " + line + ", pressure drop",
+                    "must be finite and greater than zero, got " + pressureDrop);
         }
         if (temperature.isPresent() && !(temperature.getAsDouble() > 0 && Double.isFinite(temperature.getAsDouble()))) {
             throw new InputException(
-                    where + ", temperature", "must be finite and above 0 K, got " + temperature.getAsDouble());
+                    "point at line " + line + ", temperature",
+                    "must be finite and above 0 K, got " + temperature.getAsDouble());
         }
     }
 }

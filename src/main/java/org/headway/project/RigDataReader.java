@@ -255,8 +255,7 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
             }
             temperature = OptionalDouble.of(t);
             if (fluid.model() != null) {
-                properties =
-                        cachedProperties(t, file + " line " + line + ", column " + headerNames.get(temperatureColumn));
+                properties = cachedProperties(t, line);
             }
         } else if (fluid.fixedTemperature() != null) {
             temperature = OptionalDouble.of(fluid.fixedTemperature());
@@ -300,14 +299,14 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
                 "'" + record.get(column) + "' " + problem);
     }
 
-    private RigFluidProperties cachedProperties(double temperature, String where) {
+    private RigFluidProperties cachedProperties(double temperature, long line) {
         Long key = Double.doubleToLongBits(temperature);
         RigFluidProperties p = cache.get(key);
         if (p == null) {
             if (cache.size() >= PROPERTY_CACHE_SIZE) {
                 cache.clear();
             }
-            p = properties(temperature, where);
+            p = properties(temperature, file + " line " + line + ", column " + headerNames.get(temperatureColumn));
             cache.put(key, p);
         }
         return p;
