@@ -40,11 +40,13 @@ import picocli.CommandLine.Spec;
         mixinStandardHelpOptions = true,
         description = {
             "Check rig friction data against a friction correlation.",
-            "Reads a rig file (JSON: bore, tap spacing, fluid, roughness estimate, instrument uncertainties,",
-            "data CSV with units in its header) and reports per point Re, the measured friction factor by",
-            "Darcy–Weisbach, its deviation from the correlation and its expanded uncertainty (k = 2, first-order",
-            "propagation as in ISO/IEC Guide 98-3 and ASME PTC 19.1), a summary, and the effective roughness",
-            "fitted to the turbulent points with its 95 % interval."
+            "Reads a rig file (JSON: bore, tap spacing, fluid, roughness estimate,",
+            "instrument uncertainties, and a data CSV with units in its header).",
+            "Per point: Re, the friction factor measured by Darcy–Weisbach, its",
+            "deviation from the correlation and its expanded uncertainty (k = 2,",
+            "first-order propagation as in ISO/IEC Guide 98-3 and ASME PTC 19.1).",
+            "Then a summary and the effective roughness fitted to the turbulent",
+            "points with its 95 %% interval."
         })
 public final class RigCommand implements Callable<Integer> {
 

@@ -4,7 +4,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
+import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.distribution.TDistribution;
+import org.apache.commons.math3.exception.NoBracketingException;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
 import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
@@ -30,12 +33,12 @@ import org.headway.friction.FlowRegimes;
  * exact, by implicit differentiation of F(x, a) = x + 2 log₁₀(a + b x) = 0 with x = 1/√f,
  * a = (ε/D)/3.7, b = 2.51/Re: ∂ ln f/∂θ = (2a/x)·c/(u + c b), c = 2/ln 10, u = a + b x. The
  * estimate is found by the Commons Math Levenberg–Marquardt optimizer, started from the best of a
- * grid over 10⁻⁸ ≤ ε/D ≤ {@value #MAX_RELATIVE_ROUGHNESS}.
+ * grid of 21 points over 10⁻⁸ ≤ ε/D ≤ {@value #MAX_RELATIVE_ROUGHNESS}.
  *
  * <p>Confidence interval: the profile (likelihood-ratio) interval {ε : RSS(ε) ≤ RSS_min·(1 +
  * F(0.95; 1, ν)/ν)}, ν = n − 1, the exact-F form for one parameter (D. M. Bates and D. G. Watts,
  * Nonlinear Regression Analysis and Its Applications, Wiley 1988, ch. 6 — from memory). It is found
- * by bisection in θ; it stays honest where the linearised interval is not, near a smooth pipe where
+ * by Brent's method in θ; it stays honest where the linearised interval is not, near a smooth pipe where
  * RSS flattens out as ε → 0. If RSS at ε = 0 is under the threshold the lower end is 0: the data are
  * consistent with a smooth pipe, ε is reported as undetermined with the upper end as a bound. An
  * interval spanning {@value #UNDETERMINED_DECADES} decades or more is also reported as undetermined.
@@ -51,9 +54,13 @@ public final class EffectiveRoughnessFit {
     /** Fewest turbulent points for a fit. */
     public static final int MIN_POINTS = 3;
 
-    private static final int GRID_STEPS = 30;
+    private static final int GRID_STEPS = 20;
     /** Halvings of a θ bracket at most ~28 wide: 45 leave it below 1e-12, far under any interval. */
     private static final int BISECTION_STEPS = 45;
+    /** Absolute accuracy of an interval end in θ = ln(ε/D) (ratio): a relative 1e-9 in ε. */
+    static final double BOUNDARY_ACCURACY = 1e-9;
+
+    private static final int BOUNDARY_EVALUATIONS = 100;
 
     private static final double LN_COEFFICIENT = 2.0 / Math.log(10.0);
     private static final String BASIS = "profile-likelihood interval with the F(1, ν) quantile; Bates and Watts"
@@ -237,21 +244,31 @@ public final class EffectiveRoughnessFit {
         }
 
         /**
-         * Where RSS(θ) crosses the threshold between an inside end and an outside end, by
-         * bisection. {@code lowSide}: the outside end is {@code from}.
+         * Where RSS(θ) crosses the threshold between an inside end (RSS ≤ threshold) and an outside
+         * end, by Brent's method (Commons Math) to {@value #BOUNDARY_ACCURACY} in θ; plain bisection
+         * if rounding leaves the ends on one side.
          */
         private double boundary(double from, double to, double threshold, boolean lowSide) {
             double inside = lowSide ? to : from;
             double outside = lowSide ? from : to;
-            for (int k = 0; k < BISECTION_STEPS; k++) {
-                double mid = 0.5 * (inside + outside);
-                if (rssAtTheta(mid) <= threshold) {
-                    inside = mid;
-                } else {
-                    outside = mid;
+            try {
+                return new BrentSolver(BOUNDARY_ACCURACY)
+                        .solve(
+                                BOUNDARY_EVALUATIONS,
+                                t -> rssAtTheta(t) - threshold,
+                                Math.min(inside, outside),
+                                Math.max(inside, outside));
+            } catch (NoBracketingException | TooManyEvaluationsException e) {
+                for (int k = 0; k < BISECTION_STEPS; k++) {
+                    double mid = 0.5 * (inside + outside);
+                    if (rssAtTheta(mid) <= threshold) {
+                        inside = mid;
+                    } else {
+                        outside = mid;
+                    }
                 }
+                return inside;
             }
-            return inside;
         }
 
         private Pair<RealVector, RealMatrix> valueAndJacobian(RealVector point) {
