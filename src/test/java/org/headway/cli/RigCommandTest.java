@@ -118,6 +118,17 @@ class RigCommandTest {
     }
 
     @Test
+    void usCustomaryUnitsInTheTable() {
+        CliRun run = CliRun.of("rig", rig.toString(), "--units", "us");
+        assertEquals(0, run.exitCode(), run.err());
+        assertTrue(run.out().contains("Q [gpm]"), run.out());
+        assertTrue(run.out().contains("Δp [psi]"), run.out());
+        assertTrue(run.out().contains("T [°F]"), run.out());
+        // 20.9 mm = 0.8228 in (1 in = 25.4 mm exactly).
+        assertTrue(run.out().contains("bore 0.8228 in"), run.out());
+    }
+
+    @Test
     void unknownFormatIsRefused() {
         CliRun run = CliRun.of("rig", rig.toString(), "--format", "xml");
         assertEquals(2, run.exitCode());

@@ -70,4 +70,44 @@ class EffectiveRoughnessFitTest {
         assertEquals(EffectiveRoughness.Status.NOT_ENOUGH_DATA, r.status());
         assertTrue(r.roughness().isEmpty());
     }
+
+    @Test
+    void moreTurbulentPointsThanTheCapAreSampledWithANote() {
+        // 150,000 noisy points produced lazily, more than MAX_FIT_POINTS: the fit uses a uniform
+        // sample, says so, and its interval still covers the roughness the data were made with.
+        double trueRoughness = 0.05e-3;
+        int count = RigAnalysis.MAX_FIT_POINTS + 50_000;
+        java.util.Random random = new java.util.Random(5);
+        java.util.Iterator<RigPoint> points = new java.util.Iterator<>() {
+            private int i;
+
+            @Override
+            public boolean hasNext() {
+                return i < count;
+            }
+
+            @Override
+            public RigPoint next() {
+                double re = 1e4 * Math.pow(100.0, random.nextDouble());
+                double velocity = re * 1e-3 / (998.0 * D);
+                double f = RigTestData.colebrook(re, trueRoughness / D) * Math.exp(0.05 * random.nextGaussian());
+                double dp = RigTestData.pressureDrop(f, D, 2.0, 998.0, velocity);
+                return new RigPoint(
+                        ++i,
+                        velocity * Math.PI * D * D / 4,
+                        dp,
+                        java.util.OptionalDouble.empty(),
+                        RigFluidProperties.constant(998.0, 1e-3),
+                        List.of());
+            }
+        };
+        RigReport report = RigAnalysis.of(RigTestData.rig(D, 2.0, 0.0, RigUncertainty.NONE))
+                .analyse(points, 0, r -> {});
+        EffectiveRoughness r = report.roughness();
+        assertEquals(RigAnalysis.MAX_FIT_POINTS, r.pointsUsed());
+        assertEquals(count, report.summary().turbulentCount());
+        assertTrue(r.ci95Low() <= trueRoughness && trueRoughness <= r.ci95High(), r.toString());
+        assertTrue(report.cautions().stream().anyMatch(c -> c.code().equals("roughness-fit-sampled")));
+        assertTrue(report.points().isEmpty());
+    }
 }
