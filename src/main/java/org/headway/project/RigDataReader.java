@@ -9,7 +9,6 @@ import java.util.HashMap;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.NoSuchElementException;
 import java.util.OptionalDouble;
@@ -312,25 +311,37 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
         return p;
     }
 
-    /** Properties at a temperature with central-difference slopes (error O(h²), h = 0.05 K). */
+    /**
+     * Properties at a temperature with central-difference slopes (error O(h²), h = 0.05 K); a
+     * one-sided difference where one neighbour lies outside the fluid model (e.g. within 0.05 K of
+     * freezing).
+     */
     private RigFluidProperties properties(double temperature, String where) {
         FluidState state;
-        FluidState above;
-        FluidState below;
         try {
             state = fluid.model().state(temperature, fluid.pressure());
-            above = fluid.model().state(temperature + SLOPE_STEP, fluid.pressure());
-            below = fluid.model().state(temperature - SLOPE_STEP, fluid.pressure());
         } catch (InputException e) {
             throw e.at(where + ": ");
         }
+        FluidState above = neighbour(temperature + SLOPE_STEP);
+        FluidState below = neighbour(temperature - SLOPE_STEP);
+        FluidState high = above == null ? state : above;
+        FluidState low = below == null ? state : below;
+        double step = (above == null ? 0 : SLOPE_STEP) + (below == null ? 0 : SLOPE_STEP);
+        double densitySlope = step == 0 ? 0.0 : (high.density() - low.density()) / step;
+        double viscositySlope = step == 0 ? 0.0 : (high.dynamicViscosity() - low.dynamicViscosity()) / step;
         for (Caution c : state.cautions()) {
-            cautions.putIfAbsent(
-                    c.code(), c.about(where.toLowerCase(Locale.ROOT).contains("line") ? "first at " + where : where));
+            cautions.putIfAbsent(c.code(), c.about("first at " + where));
         }
-        double densitySlope = (above.density() - below.density()) / (2 * SLOPE_STEP);
-        double viscositySlope = (above.dynamicViscosity() - below.dynamicViscosity()) / (2 * SLOPE_STEP);
         return new RigFluidProperties(state.density(), state.dynamicViscosity(), densitySlope, viscositySlope);
+    }
+
+    private FluidState neighbour(double temperature) {
+        try {
+            return fluid.model().state(temperature, fluid.pressure());
+        } catch (InputException e) {
+            return null;
+        }
     }
 
     @Override

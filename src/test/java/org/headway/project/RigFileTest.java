@@ -196,4 +196,34 @@ class RigFileTest {
                         + " break is missing)",
                 e.getMessage());
     }
+
+    @Test
+    void fluidCautionsReachTheReportWithTheirFirstLine() throws IOException {
+        // Water within 1 K of freezing carries the fluid model's near-freezing caution (Water).
+        Path rig = write("{ \"name\": \"water\" }", "flow [L/s],dp [kPa],T [degC]\n0.5,3.0,0.5\n0.6,4.0,0.02\n");
+        RigReport report = RigFile.load(rig).analyse(10, r -> {});
+        List<String> messages = report.cautions().stream()
+                .filter(c -> c.code().equals("near-freezing"))
+                .map(org.headway.caution.Caution::message)
+                .toList();
+        assertEquals(1, messages.size(), report.cautions().toString());
+        // 0.02 °C is within the 0.05 K slope step of freezing: a one-sided difference lets the point through
+        // (colder water is more viscous, IAPWS; sign only).
+        assertTrue(report.points().get(1).dynamicViscosity()
+                > report.points().get(0).dynamicViscosity());
+        assertTrue(
+                messages.get(0).startsWith("first at " + dir.resolve("points.csv") + " line 2, column T: water at "),
+                messages.get(0));
+    }
+
+    @Test
+    void aFluidModelWithoutTemperatureIsRefused() throws IOException {
+        Path rig = write("{ \"name\": \"water\" }", "flow [L/s],dp [kPa]\n0.5,3.0\n");
+        InputException e =
+                assertThrows(InputException.class, () -> RigFile.load(rig).openData());
+        assertEquals(
+                dir.resolve("points.csv") + " line 1: the fluid water needs a temperature: add a column 'T [degC]' or"
+                        + " give fluid.temperature in the rig file",
+                e.getMessage());
+    }
 }
