@@ -8,6 +8,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.headway.correlation.RigReport;
 import org.headway.friction.FrictionMethods;
 import org.headway.friction.FrictionResult;
 import org.headway.pipe.Catalog;
@@ -15,6 +16,7 @@ import org.headway.project.Project;
 import org.headway.project.ProjectFile;
 import org.headway.project.ProjectResolver;
 import org.headway.project.ResolvedProject;
+import org.headway.project.RigFile;
 import org.headway.report.CsvSheetWriter;
 import org.headway.report.HeadLossSheet;
 import org.headway.report.PdfSheetWriter;
@@ -35,13 +37,17 @@ import picocli.CommandLine.Spec;
         description = {
             "Run the whole job on the bundled, invented demo project.",
             "Solves an invented orchard booster line, prints the results and writes its head-loss sheet",
-            "(PDF, workbook, CSV) into reports/, replacing the demo's own earlier files.",
+            "(PDF, workbook, CSV) into reports/, replacing the demo's own earlier files, and checks an",
+            "invented rig data set against the friction curves.",
             "The demo data are invented; do not use them for design."
         })
 public final class DemoCommand implements Callable<Integer> {
 
     /** Classpath location of the demo project. */
     static final String DEMO_PROJECT = "/fluids-data/examples/demo-orchard-booster.json";
+
+    /** Classpath location of the demo rig; its data file sits beside it. */
+    static final String DEMO_RIG = "/fluids-data/examples/demo-rig.json";
 
     @Spec
     picocli.CommandLine.Model.CommandSpec spec;
@@ -103,6 +109,11 @@ public final class DemoCommand implements Callable<Integer> {
         out.println("   wrote " + xlsx);
         out.println("   wrote " + csv);
         out.println("   input hash " + sheet.inputHash());
+        out.println();
+        out.println("4. Rig data: " + DEMO_RIG.substring(1) + " (invented measurements)");
+        RigFile rig = RigFile.loadResource(DEMO_RIG);
+        RigReport rigReport = rig.analyse(0, point -> {});
+        RigCommand.printText(out, rigReport, rig.dataName(), UnitSystem.SI, 0, false);
         out.flush();
         return HeadwayCommand.EXIT_OK;
     }

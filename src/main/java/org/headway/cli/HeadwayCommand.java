@@ -22,6 +22,7 @@ import picocli.CommandLine.Command;
             FrictionCommand.class,
             FluidCommand.class,
             CatalogCommand.class,
+            RigCommand.class,
             FitCommand.class,
             GroupsCommand.class
         })
