@@ -258,9 +258,10 @@ public final class FrictionChart {
             for (var e : labels.entrySet()) {
                 double[] at = where.get(e.getKey());
                 os.add(at[0], at[1]);
-                XYTextAnnotation a = new XYTextAnnotation("  " + String.join(", ", e.getValue()), at[0], at[1]);
+                // Above the marker, so a neighbouring segment's marker never covers the label.
+                XYTextAnnotation a = new XYTextAnnotation(String.join(", ", e.getValue()), at[0], at[1] * 1.045);
                 a.setFont(ChartStyle.FONT.deriveFont(Font.BOLD, 9f));
-                a.setTextAnchor(TextAnchor.CENTER_LEFT);
+                a.setTextAnchor(TextAnchor.BOTTOM_CENTER);
                 a.setPaint(new Color(0x8A2F1B));
                 plot.addAnnotation(a);
             }
