@@ -106,7 +106,7 @@ public class SystemCurveBenchmark {
     public double frictionSolvesOnly() {
         double sum = 0;
         for (int i = 0; i < reynolds.length; i++) {
-            sum += method.evaluate(reynolds[i], relativeRoughness[i]).frictionFactor();
+            sum += method.frictionFactor(reynolds[i], relativeRoughness[i]);
         }
         return sum;
     }
