@@ -251,6 +251,9 @@ public final class FitCommand implements Callable<Integer> {
 
     /** A numeric CSV table with names taken from the header (text before a bracketed unit). */
     static final class Table {
+        /** Widest table read: each column reserves its own array up front. */
+        static final int MAX_COLUMNS = 1_000;
+
         private final Path file;
         private final List<String> names;
         private final List<double[]> columns;
@@ -271,12 +274,21 @@ public final class FitCommand implements Callable<Integer> {
             List<String> names = new ArrayList<>();
             List<double[]> values = new ArrayList<>();
             int rows = 0;
-            try (Reader reader = Files.newBufferedReader(file, StandardCharsets.UTF_8);
+            try (Reader reader = new LineLengthLimit(
+                            Files.newBufferedReader(file, StandardCharsets.UTF_8),
+                            file.toString(),
+                            LineLengthLimit.MAX_LINE_LENGTH);
                     CSVParser parser = csv.parse(reader)) {
                 boolean header = true;
                 for (CSVRecord record : parser) {
                     long line = parser.getCurrentLineNumber();
                     if (header) {
+                        if (record.size() > MAX_COLUMNS) {
+                            throw new InputException(
+                                    file + " line " + line,
+                                    "the header names " + record.size() + " columns; at most " + MAX_COLUMNS
+                                            + " are read");
+                        }
                         for (String h : record) {
                             int bracket = h.indexOf('[');
                             String name = (bracket >= 0 ? h.substring(0, bracket) : h).trim();
@@ -316,6 +328,8 @@ public final class FitCommand implements Callable<Integer> {
             } catch (java.io.UncheckedIOException e) {
                 throw new InputException(
                         file.toString(), "cannot read as CSV: " + e.getCause().getMessage());
+            } catch (IOException e) {
+                throw new InputException(file.toString(), "cannot read: " + e.getMessage());
             }
             if (names.isEmpty()) {
                 throw new InputException(file.toString(), "is empty; expected a header row and data rows");

@@ -68,7 +68,11 @@ public final class SheetCommand implements Callable<Integer> {
                 ProjectFile.load(project), catalog, project.toAbsolutePath().getParent());
         HeadLossSheet sheet = HeadLossSheet.of(resolved, HeadwayCommand.version());
         Path pdf = out != null ? out : Path.of("reports", stem(project) + ".pdf");
-        if (!pdf.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".pdf")) {
+        if (pdf.getFileName() == null
+                || !pdf.getFileName()
+                        .toString()
+                        .toLowerCase(java.util.Locale.ROOT)
+                        .endsWith(".pdf")) {
             throw new InputException("--out", "the sheet is a PDF; give a name ending in .pdf, got " + pdf);
         }
         PrintWriter o = spec.commandLine().getOut();
@@ -107,7 +111,9 @@ public final class SheetCommand implements Callable<Integer> {
     }
 
     static String stem(Path project) {
-        String name = project.getFileName().toString();
+        String name = project.getFileName() == null
+                ? "project"
+                : project.getFileName().toString();
         int dot = name.lastIndexOf('.');
         return SafeText.fileStem(dot > 0 ? name.substring(0, dot) : name);
     }

@@ -33,6 +33,9 @@ public final class UserFluidTable {
     /** The SI header layout. */
     public static final String SI_HEADER = "temperature [K], density [kg/m3], viscosity [Pa*s]";
 
+    /** Largest table file read (bytes): far above any real table, far below memory trouble. */
+    public static final long MAX_FILE_SIZE = 4L * 1024 * 1024;
+
     private static final String[] COLUMNS = {"temperature", "density", "viscosity"};
 
     private UserFluidTable() {}
@@ -46,10 +49,21 @@ public final class UserFluidTable {
      *     it cannot be read
      */
     public static TabulatedFluid load(Path csv) {
-        String fileName = csv.getFileName().toString();
+        // A root such as "/" has no file name.
+        String fileName =
+                csv.getFileName() == null ? csv.toString() : csv.getFileName().toString();
         String text;
         try {
+            if (Files.size(csv) > MAX_FILE_SIZE) {
+                throw new InputException(
+                        csv.toString(),
+                        "file is larger than " + MAX_FILE_SIZE / (1024 * 1024)
+                                + " MB; a fluid table has one short line per temperature");
+            }
             text = Files.readString(csv, StandardCharsets.UTF_8);
+            if (text.startsWith("\uFEFF")) {
+                text = text.substring(1);
+            }
         } catch (IOException e) {
             throw new InputException(csv.toString(), "cannot read the fluid table: " + e.getMessage(), e);
         }
@@ -127,7 +141,17 @@ public final class UserFluidTable {
                 throw new InputException(
                         at + "temperature", "temperatures must increase row by row, got " + cells[0].strip());
             }
-            rows.add(new TabulatedFluid.Row(kelvin, density, celsius ? viscosity * 1e-3 : viscosity));
+            double viscosityPaS = celsius ? viscosity * 1e-3 : viscosity;
+            double kinematic = viscosityPaS / density;
+            // Checked here, in SI, so that a value that underflows or overflows on conversion is
+            // reported with its file and line rather than later without them.
+            if (!(viscosityPaS > 0) || !(kinematic > 0) || !Double.isFinite(kinematic)) {
+                throw new InputException(
+                        at + "viscosity",
+                        "viscosity " + cells[2].strip() + " with density " + cells[1].strip()
+                                + " is outside what a double can hold in SI units (Pa·s, m²/s)");
+            }
+            rows.add(new TabulatedFluid.Row(kelvin, density, viscosityPaS));
         }
         if (!headerSeen) {
             throw new InputException(fileName, "no header line; expected \"" + CELSIUS_HEADER + "\"");

@@ -101,6 +101,15 @@ final class CatalogFile {
     }
 
     private static List<String> fields(String label, int lineNumber, String line) {
+        if (line.indexOf('"') < 0 && line.indexOf('\r') < 0) {
+            // Without quotes or carriage returns the CSV reader would split on commas and trim;
+            // doing so directly keeps loading a catalog cheap.
+            List<String> cells = new ArrayList<>();
+            for (String cell : line.split(",", -1)) {
+                cells.add(cell.trim());
+            }
+            return cells;
+        }
         try (CSVParser parser = CSVParser.parse(line, FORMAT)) {
             List<CSVRecord> records = parser.getRecords();
             if (records.size() != 1) {
@@ -205,6 +214,22 @@ final class CatalogFile {
         if (value <= 0) {
             throw error(
                     row, column, "must be greater than zero, got " + row.cells().get(column));
+        }
+        return value;
+    }
+
+    /**
+     * A required number from zero up to a bound.
+     *
+     * @param max largest value accepted
+     */
+    double nonNegativeAtMost(Row row, String column, double max) {
+        double value = nonNegative(row, column);
+        if (value > max) {
+            throw error(
+                    row,
+                    column,
+                    "must not exceed " + max + ", got " + row.cells().get(column));
         }
         return value;
     }

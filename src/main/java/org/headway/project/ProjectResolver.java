@@ -253,7 +253,9 @@ public final class ProjectResolver {
     }
 
     private static String stem(Path file) {
-        String n = file.getFileName().toString();
+        String n = file.getFileName() == null
+                ? file.toString()
+                : file.getFileName().toString();
         int dot = n.lastIndexOf('.');
         return dot > 0 ? n.substring(0, dot) : n;
     }
