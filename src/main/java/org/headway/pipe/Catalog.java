@@ -62,6 +62,8 @@ public final class Catalog {
     public static final List<String> METHODS = List.of("fixed", "2-k", "3-k");
 
     private static final double METRES_PER_MILLIMETRE = 1.0e-3;
+    /** Largest catalog file read (bytes): far above any real table, far below memory trouble. */
+    public static final long MAX_FILE_SIZE = 8L * 1024 * 1024;
     /**
      * Largest loss coefficient or 2-K/3-K constant a fittings file may give. Published K1 values
      * reach a few thousand; the bound only stops a typo (or 1e308) from overflowing K to infinity.
@@ -177,6 +179,12 @@ public final class Catalog {
         for (Path file : ordered) {
             String text;
             try {
+                if (Files.size(file) > MAX_FILE_SIZE) {
+                    throw new InputException(
+                            file.toString(),
+                            "file is larger than " + MAX_FILE_SIZE / (1024 * 1024)
+                                    + " MB; a catalog file holds one short line per material, size or fitting");
+                }
                 text = Files.readString(file, StandardCharsets.UTF_8);
             } catch (IOException e) {
                 throw new InputException(file.toString(), "cannot read the file: " + e.getMessage(), e);
