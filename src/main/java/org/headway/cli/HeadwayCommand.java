@@ -82,20 +82,18 @@ public final class HeadwayCommand implements Runnable {
     }
 
     /**
-     * Bad input is reported on exactly one line, so scripts can read it: line breaks and other
-     * control characters a user's value carried into the message are shown escaped.
+     * Bad input is reported on exactly one line, so scripts can read it: line breaks become "; "
+     * and other control characters a user's value carried into the message are shown escaped.
      */
     static String oneLine(String message) {
         if (message == null) {
             return "";
         }
-        StringBuilder b = new StringBuilder(message.length());
-        message.codePoints().forEach(c -> {
-            if (c == '\n') {
-                b.append("\\n");
-            } else if (c == '\r') {
-                b.append("\\r");
-            } else if (Character.isISOControl(c) || c == 0x2028 || c == 0x2029 || c == 0x85) {
+        // A list of problems (one per indented line) reads as one line joined by semicolons.
+        String joined = message.replaceAll(":\\R\\s*", ": ").replaceAll("\\R\\s*", "; ");
+        StringBuilder b = new StringBuilder(joined.length());
+        joined.codePoints().forEach(c -> {
+            if (Character.isISOControl(c)) {
                 b.append(String.format("\\u%04x", c));
             } else {
                 b.appendCodePoint(c);

@@ -64,8 +64,15 @@ public final class SheetCommand implements Callable<Integer> {
     public Integer call() {
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
-        ResolvedProject resolved = ProjectResolver.resolve(
-                ProjectFile.load(project), catalog, project.toAbsolutePath().getParent());
+        org.headway.project.Project loaded = ProjectFile.load(project);
+        ResolvedProject resolved;
+        try {
+            resolved = ProjectResolver.resolve(
+                    loaded, catalog, project.toAbsolutePath().getParent());
+        } catch (InputException e) {
+            // Name the project file in front of the JSON path of a problem found while resolving.
+            throw new InputException(fileName(project), e.getMessage(), e);
+        }
         HeadLossSheet sheet = HeadLossSheet.of(resolved, HeadwayCommand.version());
         Path pdf = out != null ? out : Path.of("reports", stem(project) + ".pdf");
         if (pdf.getFileName() == null
@@ -108,6 +115,11 @@ public final class SheetCommand implements Callable<Integer> {
             list.add(sibling(pdf, ".csv"));
         }
         return list;
+    }
+
+    /** The file name of a path, or the whole path for a root such as "/". */
+    static String fileName(Path file) {
+        return file.getFileName() == null ? file.toString() : file.getFileName().toString();
     }
 
     static String stem(Path project) {
