@@ -48,10 +48,13 @@ class FrictionBatchFuzzTest {
         String previous = "previous good result\n";
         CommandLine cl = HeadwayCommand.commandLine();
         int[] exits = new int[3];
+        boolean outputIsPrevious = false;
         for (int i = 0; i < INPUTS; i++) {
             String text = generate(random);
             Files.writeString(input, text, StandardCharsets.UTF_8);
-            Files.writeString(output, previous, StandardCharsets.UTF_8);
+            if (!outputIsPrevious) {
+                Files.writeString(output, previous, StandardCharsets.UTF_8);
+            }
             StringWriter out = new StringWriter();
             StringWriter err = new StringWriter();
             cl.setOut(new PrintWriter(out));
@@ -70,7 +73,9 @@ class FrictionBatchFuzzTest {
                 assertEquals(1, e.lines().count(), m);
                 assertTrue(e.startsWith("headway: --input " + input), m);
                 assertEquals(previous, Files.readString(output), m + "\nthe previous output was touched");
+                outputIsPrevious = true;
             } else {
+                outputIsPrevious = false;
                 checkOutput(text, Files.readString(output, StandardCharsets.UTF_8), code, e, m);
             }
         }
