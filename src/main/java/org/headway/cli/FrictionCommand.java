@@ -64,6 +64,13 @@ public final class FrictionCommand implements Callable<Integer> {
 
     private static final int LISTED_FAILED_ROWS = 20;
 
+    /**
+     * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
+     * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
+     */
+    private static final java.util.regex.Pattern DECIMAL =
+            java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -340,6 +347,9 @@ public final class FrictionCommand implements Callable<Integer> {
     }
 
     private static double number(String text, String where) {
+        if (!DECIMAL.matcher(text.strip()).matches()) {
+            throw new InputException(where, "not a number: '" + text + "'");
+        }
         try {
             return Double.parseDouble(text);
         } catch (NumberFormatException e) {

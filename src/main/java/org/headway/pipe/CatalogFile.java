@@ -31,6 +31,13 @@ final class CatalogFile {
             .setIgnoreSurroundingSpaces(true)
             .get();
 
+    /**
+     * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
+     * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
+     */
+    private static final java.util.regex.Pattern DECIMAL =
+            java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
+
     private final String label;
     private final String source;
     private final List<Row> rows;
@@ -198,6 +205,9 @@ final class CatalogFile {
         String value = text(row, column);
         double parsed;
         try {
+            if (!DECIMAL.matcher(value).matches()) {
+                throw new NumberFormatException(value);
+            }
             parsed = Double.parseDouble(value);
         } catch (NumberFormatException e) {
             throw error(row, column, "not a number: '" + value + "'");

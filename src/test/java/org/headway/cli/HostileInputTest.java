@@ -128,6 +128,16 @@ class HostileInputTest {
     }
 
     @Test
+    void hexadecimalNumbersInABatchAreRowErrors(@TempDir Path dir) throws IOException {
+        Path input = dir.resolve("points.csv");
+        Files.writeString(input, "re,relative_roughness\n0x1p17,0\n1e5,1d\n");
+        CliRun run = CliRun.of("friction", "--input", input.toString());
+        assertEquals(1, run.exitCode(), run.err());
+        assertTrue(run.out().contains("row 1, column re: not a number: '0x1p17'"), run.out());
+        assertTrue(run.out().contains("row 2, column relative_roughness: not a number: '1d'"), run.out());
+    }
+
+    @Test
     void aTenMegabyteLineInFitDataIsRefused(@TempDir Path dir) throws IOException {
         Path data = dir.resolve("rig.csv");
         writeLongLine(data, "Re,f\n");

@@ -37,6 +37,14 @@ class UserFluidTableLimitsTest {
     }
 
     @Test
+    void aSuffixedNumberIsNotANumber(@TempDir Path dir) throws IOException {
+        Path file = dir.resolve("brine.csv");
+        Files.writeString(file, UserFluidTable.CELSIUS_HEADER + "\n0, 1030, 2.0\n10, 1028f, 1.5\n");
+        InputException e = assertThrows(InputException.class, () -> UserFluidTable.load(file));
+        assertEquals("brine.csv line 3, column density: not a number: \"1028f\"", e.getMessage());
+    }
+
+    @Test
     void aByteOrderMarkIsSkipped(@TempDir Path dir) throws IOException {
         Path file = dir.resolve("brine.csv");
         Files.writeString(file, "\uFEFF" + UserFluidTable.CELSIUS_HEADER + "\r\n0, 1030, 2.0\r\n10, 1028, 1.5\r\n");

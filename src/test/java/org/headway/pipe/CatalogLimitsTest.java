@@ -27,6 +27,21 @@ class CatalogLimitsTest {
     }
 
     @Test
+    void hexadecimalAndSuffixedNumbersAreNotNumbers(@TempDir Path dir) throws IOException {
+        // Java's parser reads "0x1p3" as 8 and "2f" as 2; a catalog value must be written as a decimal.
+        for (String value : new String[] {"0x1p3", "2f", "1d"}) {
+            Files.writeString(
+                    dir.resolve(Catalog.FITTINGS_FILE),
+                    "# source: test\nid,description,method,k,k1,k_inf,k_d,source\nvalve,Valve,fixed," + value
+                            + ",,,,test\n");
+            InputException e = assertThrows(InputException.class, () -> Catalog.withUserFolder(dir));
+            assertEquals(
+                    dir.resolve(Catalog.FITTINGS_FILE) + " line 3, column k: not a number: '" + value + "'",
+                    e.getMessage());
+        }
+    }
+
+    @Test
     void aCoefficientThatWouldOverflowKIsRefused(@TempDir Path dir) throws IOException {
         Files.writeString(
                 dir.resolve(Catalog.FITTINGS_FILE),
