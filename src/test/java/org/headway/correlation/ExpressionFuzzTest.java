@@ -147,9 +147,28 @@ class ExpressionFuzzTest {
         return refused;
     }
 
+    /** A random well-formed expression, so that evaluation and derivatives get exercised too. */
+    private static String wellFormed(Random random, int depth) {
+        if (depth == 0 || random.nextInt(4) == 0) {
+            String[] leaves = {"a", "b", "c", "Re", "eps", "pi", "2", "0", "1e-300", "1e300", "0.5", "-1"};
+            return leaves[random.nextInt(leaves.length)];
+        }
+        String[] functions = {"exp", "log", "ln", "log10", "sqrt", "sin", "cos", "tan", "atan", "abs"};
+        String[] operators = {"+", "-", "*", "/", "^", "**"};
+        return switch (random.nextInt(4)) {
+            case 0 -> functions[random.nextInt(functions.length)] + "(" + wellFormed(random, depth - 1) + ")";
+            case 1 -> "-" + wellFormed(random, depth - 1);
+            case 2 -> "(" + wellFormed(random, depth - 1) + ")";
+            default ->
+                wellFormed(random, depth - 1)
+                        + operators[random.nextInt(operators.length)]
+                        + wellFormed(random, depth - 1);
+        };
+    }
+
     private static String generate(Random random) {
         String valid = VALID[random.nextInt(VALID.length)];
-        return switch (random.nextInt(14)) {
+        return switch (random.nextInt(16)) {
             case 0 -> Fuzz.randomText(random, "abcRepsx0123456789.+-*/^() elogxpqrtinsu", 40);
             case 1 -> Fuzz.randomBytesAsText(random, 40);
             case 2, 3, 4 -> {
@@ -166,6 +185,7 @@ class ExpressionFuzzTest {
             case 8 -> "a" + "^a".repeat(random.nextInt(50_000));
             case 9 -> "exp(".repeat(random.nextInt(5_000)) + "a" + ")".repeat(random.nextInt(5_000));
             case 10 -> "\uFEFF" + valid + "\r\n";
+            case 11, 12 -> wellFormed(random, 4);
             default -> Fuzz.mutate(random, valid, 1 + random.nextInt(3));
         };
     }

@@ -69,16 +69,13 @@ class UserFluidTableFuzzTest {
     private static void checkStates(TabulatedFluid fluid, int i) {
         double low = fluid.minTemperature();
         double high = fluid.maxTemperature();
+        // Inside its own table a loaded fluid must give a state: no error is acceptable here.
         for (double t : new double[] {low, 0.5 * (low + high), high}) {
-            try {
-                FluidState s = fluid.state(t, 101_325.0);
-                String m = "case " + i + " (seed " + SEED + "): state at " + t + " K is " + s;
-                assertTrue(Double.isFinite(s.density()) && s.density() > 0, m);
-                assertTrue(Double.isFinite(s.dynamicViscosity()) && s.dynamicViscosity() > 0, m);
-                assertTrue(Double.isFinite(s.kinematicViscosity()) && s.kinematicViscosity() > 0, m);
-            } catch (InputException e) {
-                Fuzz.assertLocated(e, "", SEED, i);
-            }
+            FluidState s = fluid.state(t, 101_325.0);
+            String m = "case " + i + " (seed " + SEED + "): state at " + t + " K is " + s;
+            assertTrue(Double.isFinite(s.density()) && s.density() > 0, m);
+            assertTrue(Double.isFinite(s.dynamicViscosity()) && s.dynamicViscosity() > 0, m);
+            assertTrue(Double.isFinite(s.kinematicViscosity()) && s.kinematicViscosity() > 0, m);
         }
     }
 

@@ -45,6 +45,15 @@ class UserFluidTableLimitsTest {
     }
 
     @Test
+    void theLastTablePointGivesItsOwnDensityEvenBesideAHugelyDifferentOne(@TempDir Path dir) throws IOException {
+        // ρ₀ + f(ρ₁ − ρ₀) with ρ₀ = 1035, ρ₁ = 1e-300 and f = 1 cancels to 0; the table value must come back.
+        Path file = dir.resolve("odd.csv");
+        Files.writeString(file, UserFluidTable.CELSIUS_HEADER + "\n0, 1035, 2.0\n10, 1e-300, 1.5\n");
+        TabulatedFluid fluid = UserFluidTable.load(file);
+        assertEquals(1e-300, fluid.state(fluid.maxTemperature(), 101_325).density());
+    }
+
+    @Test
     void aByteOrderMarkIsSkipped(@TempDir Path dir) throws IOException {
         Path file = dir.resolve("brine.csv");
         Files.writeString(file, "\uFEFF" + UserFluidTable.CELSIUS_HEADER + "\r\n0, 1030, 2.0\r\n10, 1028, 1.5\r\n");
