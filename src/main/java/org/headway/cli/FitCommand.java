@@ -251,6 +251,16 @@ public final class FitCommand implements Callable<Integer> {
 
     /** A numeric CSV table with names taken from the header (text before a bracketed unit). */
     static final class Table {
+        /**
+         * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
+         * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
+         */
+        private static final java.util.regex.Pattern DECIMAL =
+                java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
+
+        /** Widest table read: each column reserves its own array up front. */
+        static final int MAX_COLUMNS = 1_000;
+
         private final Path file;
         private final List<String> names;
         private final List<double[]> columns;
@@ -271,12 +281,21 @@ public final class FitCommand implements Callable<Integer> {
             List<String> names = new ArrayList<>();
             List<double[]> values = new ArrayList<>();
             int rows = 0;
-            try (Reader reader = Files.newBufferedReader(file, StandardCharsets.UTF_8);
+            try (Reader reader = new LineLengthLimit(
+                            Files.newBufferedReader(file, StandardCharsets.UTF_8),
+                            file.toString(),
+                            LineLengthLimit.MAX_LINE_LENGTH);
                     CSVParser parser = csv.parse(reader)) {
                 boolean header = true;
                 for (CSVRecord record : parser) {
                     long line = parser.getCurrentLineNumber();
                     if (header) {
+                        if (record.size() > MAX_COLUMNS) {
+                            throw new InputException(
+                                    file + " line " + line,
+                                    "the header names " + record.size() + " columns; at most " + MAX_COLUMNS
+                                            + " are read");
+                        }
                         for (String h : record) {
                             int bracket = h.indexOf('[');
                             String name = (bracket >= 0 ? h.substring(0, bracket) : h).trim();
@@ -302,6 +321,9 @@ public final class FitCommand implements Callable<Integer> {
                     for (int c = 0; c < record.size(); c++) {
                         String cell = record.get(c);
                         try {
+                            if (!DECIMAL.matcher(cell).matches()) {
+                                throw new NumberFormatException(cell);
+                            }
                             values.get(c)[rows] = Double.parseDouble(cell);
                         } catch (NumberFormatException e) {
                             throw new InputException(
@@ -316,6 +338,8 @@ public final class FitCommand implements Callable<Integer> {
             } catch (java.io.UncheckedIOException e) {
                 throw new InputException(
                         file.toString(), "cannot read as CSV: " + e.getCause().getMessage());
+            } catch (IOException e) {
+                throw new InputException(file.toString(), "cannot read: " + e.getMessage());
             }
             if (names.isEmpty()) {
                 throw new InputException(file.toString(), "is empty; expected a header row and data rows");

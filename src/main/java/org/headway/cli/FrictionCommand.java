@@ -64,6 +64,13 @@ public final class FrictionCommand implements Callable<Integer> {
 
     private static final int LISTED_FAILED_ROWS = 20;
 
+    /**
+     * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
+     * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
+     */
+    private static final java.util.regex.Pattern DECIMAL =
+            java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -207,9 +214,14 @@ public final class FrictionCommand implements Callable<Integer> {
             throw new InputException("--input", "cannot read file '" + input + "'");
         }
         Path temporary = null;
+        // Only the first rows are listed, so memory stays flat however many rows fail.
         List<Long> failed = new ArrayList<>();
+        long failedCount = 0;
         long rows = 0;
-        try (Reader reader = Files.newBufferedReader(input, StandardCharsets.UTF_8);
+        try (Reader reader = new LineLengthLimit(
+                        Files.newBufferedReader(input, StandardCharsets.UTF_8),
+                        "--input " + input,
+                        LineLengthLimit.MAX_LINE_LENGTH);
                 CSVParser parser = CSVFormat.DEFAULT
                         .builder()
                         .setHeader()
@@ -249,7 +261,10 @@ public final class FrictionCommand implements Callable<Integer> {
                         row.add(cautionCodes(result));
                         row.add("");
                     } catch (InputException | ConvergenceException e) {
-                        failed.add(rows);
+                        failedCount++;
+                        if (failed.size() < LISTED_FAILED_ROWS) {
+                            failed.add(rows);
+                        }
                         row.add("");
                         row.add("");
                         row.add(correlation.id());
@@ -274,21 +289,26 @@ public final class FrictionCommand implements Callable<Integer> {
             // commons-csv reports a malformed file (e.g. an unterminated quote) this way
             throw new InputException(
                     "--input " + input, "cannot parse the CSV: " + e.getCause().getMessage(), e);
+        } catch (org.apache.commons.csv.CSVException e) {
+            // a malformed header record (e.g. a quote left open across lines) fails while opening
+            throw new InputException("--input " + input, "cannot parse the CSV: " + e.getMessage(), e);
+        } catch (IllegalArgumentException e) {
+            // commons-csv refuses a header row with an empty or repeated column name this way
+            throw new InputException("--input " + input, "the header row is not usable: " + e.getMessage(), e);
         } finally {
             if (temporary != null) {
                 Files.deleteIfExists(temporary);
             }
         }
-        if (failed.isEmpty()) {
+        if (failedCount == 0) {
             return HeadwayCommand.EXIT_OK;
         }
         PrintWriter err = spec.commandLine().getErr();
-        String listed =
-                failed.stream().limit(LISTED_FAILED_ROWS).map(String::valueOf).collect(Collectors.joining(", "));
-        if (failed.size() > LISTED_FAILED_ROWS) {
-            listed += " and " + (failed.size() - LISTED_FAILED_ROWS) + " more";
+        String listed = failed.stream().map(String::valueOf).collect(Collectors.joining(", "));
+        if (failedCount > LISTED_FAILED_ROWS) {
+            listed += " and " + (failedCount - LISTED_FAILED_ROWS) + " more";
         }
-        err.println("headway: " + failed.size() + " of " + rows + " rows failed (data rows " + listed
+        err.println("headway: " + failedCount + " of " + rows + " rows failed (data rows " + listed
                 + "; row 1 is the first after the header); see their error column");
         err.flush();
         return HeadwayCommand.EXIT_FAILED;
@@ -327,6 +347,9 @@ public final class FrictionCommand implements Callable<Integer> {
     }
 
     private static double number(String text, String where) {
+        if (!DECIMAL.matcher(text.strip()).matches()) {
+            throw new InputException(where, "not a number: '" + text + "'");
+        }
         try {
             return Double.parseDouble(text);
         } catch (NumberFormatException e) {

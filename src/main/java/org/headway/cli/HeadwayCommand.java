@@ -59,12 +59,12 @@ public final class HeadwayCommand implements Runnable {
     private static int handleExecutionException(Exception ex, CommandLine cl, CommandLine.ParseResult parseResult) {
         PrintWriter err = cl.getErr();
         if (ex instanceof InputException) {
-            err.println("headway: " + ex.getMessage());
+            err.println("headway: " + oneLine(ex.getMessage()));
             err.flush();
             return EXIT_BAD_INPUT;
         }
         if (ex instanceof java.io.UncheckedIOException || ex instanceof java.io.IOException) {
-            err.println("headway: " + ex.getMessage());
+            err.println("headway: " + oneLine(ex.getMessage()));
             err.flush();
             return EXIT_BAD_INPUT;
         }
@@ -76,10 +76,31 @@ public final class HeadwayCommand implements Runnable {
 
     private static int handleParameterException(CommandLine.ParameterException ex, String[] args) {
         PrintWriter err = ex.getCommandLine().getErr();
-        err.println("headway: " + ex.getMessage());
-        err.println("Try '" + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
+        err.println("headway: " + oneLine(ex.getMessage()) + " (try '"
+                + ex.getCommandLine().getCommandSpec().qualifiedName() + " --help')");
         err.flush();
         return EXIT_BAD_INPUT;
+    }
+
+    /**
+     * Bad input is reported on exactly one line, so scripts can read it: line breaks become "; "
+     * and other control characters a user's value carried into the message are shown escaped.
+     */
+    static String oneLine(String message) {
+        if (message == null) {
+            return "";
+        }
+        // A list of problems (one per indented line) reads as one line joined by semicolons.
+        String joined = message.replaceAll(":\\R\\s*", ": ").replaceAll("\\R\\s*", "; ");
+        StringBuilder b = new StringBuilder(joined.length());
+        joined.codePoints().forEach(c -> {
+            if (Character.isISOControl(c)) {
+                b.append(String.format("\\u%04x", c));
+            } else {
+                b.appendCodePoint(c);
+            }
+        });
+        return b.toString();
     }
 
     /** Version from the jar manifest, or "development" when run from classes. */

@@ -64,11 +64,22 @@ public final class SheetCommand implements Callable<Integer> {
     public Integer call() {
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
-        ResolvedProject resolved = ProjectResolver.resolve(
-                ProjectFile.load(project), catalog, project.toAbsolutePath().getParent());
+        org.headway.project.Project loaded = ProjectFile.load(project);
+        ResolvedProject resolved;
+        try {
+            resolved = ProjectResolver.resolve(
+                    loaded, catalog, project.toAbsolutePath().getParent());
+        } catch (InputException e) {
+            // Name the project file in front of the JSON path of a problem found while resolving.
+            throw new InputException(fileName(project), e.getMessage(), e);
+        }
         HeadLossSheet sheet = HeadLossSheet.of(resolved, HeadwayCommand.version());
         Path pdf = out != null ? out : Path.of("reports", stem(project) + ".pdf");
-        if (!pdf.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".pdf")) {
+        if (pdf.getFileName() == null
+                || !pdf.getFileName()
+                        .toString()
+                        .toLowerCase(java.util.Locale.ROOT)
+                        .endsWith(".pdf")) {
             throw new InputException("--out", "the sheet is a PDF; give a name ending in .pdf, got " + pdf);
         }
         PrintWriter o = spec.commandLine().getOut();
@@ -106,8 +117,15 @@ public final class SheetCommand implements Callable<Integer> {
         return list;
     }
 
+    /** The file name of a path, or the whole path for a root such as "/". */
+    static String fileName(Path file) {
+        return file.getFileName() == null ? file.toString() : file.getFileName().toString();
+    }
+
     static String stem(Path project) {
-        String name = project.getFileName().toString();
+        String name = project.getFileName() == null
+                ? "project"
+                : project.getFileName().toString();
         int dot = name.lastIndexOf('.');
         return SafeText.fileStem(dot > 0 ? name.substring(0, dot) : name);
     }

@@ -90,12 +90,21 @@ public final class SolveCommand implements Callable<Integer> {
             description = "Folder of catalog files to add to the bundled ones.")
     Path catalogFolder;
 
+    /** Resolves the project, naming the project file in front of the JSON path of any problem. */
+    private ResolvedProject resolve(org.headway.project.Project loaded, Catalog catalog) {
+        try {
+            return ProjectResolver.resolve(
+                    loaded, catalog, project.toAbsolutePath().getParent());
+        } catch (org.headway.caution.InputException e) {
+            throw new org.headway.caution.InputException(SheetCommand.fileName(project), e.getMessage(), e);
+        }
+    }
+
     @Override
     public Integer call() {
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
-        ResolvedProject resolved = ProjectResolver.resolve(
-                ProjectFile.load(project), catalog, project.toAbsolutePath().getParent());
+        ResolvedProject resolved = resolve(ProjectFile.load(project), catalog);
         PipeRun run = resolved.run();
         PrintWriter out = spec.commandLine().getOut();
 

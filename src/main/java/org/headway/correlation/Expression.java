@@ -28,6 +28,15 @@ public final class Expression {
     /** Most parameters one expression may carry (derivative bookkeeping uses a 64-bit mask). */
     public static final int MAX_PARAMETERS = 64;
 
+    /**
+     * Longest expression text accepted (characters). Compilation recurses over the expression tree,
+     * so the length bounds the stack a pasted wall of text could need; real models are a line long.
+     */
+    public static final int MAX_LENGTH = 2_000;
+
+    /** Deepest nesting of brackets, signs, powers and function calls accepted. */
+    public static final int MAX_NESTING = 100;
+
     private static final List<String> FUNCTIONS =
             List.of("exp", "log", "ln", "log10", "sqrt", "sin", "cos", "tan", "atan", "abs");
 
@@ -56,6 +65,10 @@ public final class Expression {
     public static Expression parse(String text, List<String> variables, List<String> parameters) {
         if (text == null || text.isBlank()) {
             throw new InputException("expression", "is empty; write a model such as a*x^b");
+        }
+        if (text.length() > MAX_LENGTH) {
+            throw new InputException(
+                    "expression", "is " + text.length() + " characters long; at most " + MAX_LENGTH + " are accepted");
         }
         if (parameters.size() > MAX_PARAMETERS) {
             throw new InputException(
@@ -593,6 +606,7 @@ public final class Expression {
         private final List<String> parameters;
         private final List<Token> tokens;
         private int next;
+        private int depth;
 
         Parser(String text, List<String> variables, List<String> parameters) {
             this.text = text;
@@ -629,15 +643,30 @@ public final class Expression {
         }
 
         private Node unary() {
-            if (isSymbol("-")) {
-                take();
-                return make(Op.NEGATE, unary(), null);
+            Token t = peek();
+            enter(t);
+            try {
+                if (isSymbol("-")) {
+                    take();
+                    return make(Op.NEGATE, unary(), null);
+                }
+                if (isSymbol("+")) {
+                    take();
+                    return unary();
+                }
+                return power();
+            } finally {
+                depth--;
             }
-            if (isSymbol("+")) {
-                take();
-                return unary();
+        }
+
+        /** Bounds the recursion: each sign, power, bracket and call nests one level deeper. */
+        private void enter(Token t) {
+            if (++depth > MAX_NESTING) {
+                throw new InputException(
+                        "expression column " + (t.position + 1),
+                        "nested more than " + MAX_NESTING + " levels deep (brackets, signs, powers, calls)");
             }
-            return power();
         }
 
         private Node power() {

@@ -119,6 +119,17 @@ public final class Seawater implements Fluid {
         }
         double density = Sharqawy2010.density(celsius, salinity);
         double viscosity = Sharqawy2010.viscosity(celsius, salinity);
+        // Far beyond 180 °C the polynomials turn negative or overflow: an error, never a NaN.
+        if (!(density > 0)
+                || !(viscosity > 0)
+                || !Double.isFinite(density)
+                || !Double.isFinite(viscosity)
+                || !Double.isFinite(vapourPressure)) {
+            throw new InputException(
+                    "temperature",
+                    "seawater at " + Numbers.kelvin(temperature) + " is so far outside the correlations' 0-180 °C"
+                            + " range that they give no usable property");
+        }
         return new FluidState(
                 id(),
                 temperature,

@@ -125,7 +125,9 @@ public final class TabulatedFluid implements Fluid {
         }
         int segment = segmentOf(temperature);
         double fraction = (temperature - temperatures[segment]) / (temperatures[segment + 1] - temperatures[segment]);
-        double density = densities[segment] + fraction * (densities[segment + 1] - densities[segment]);
+        // Weighted form: at a table point it returns the tabulated value exactly, and between two
+        // positive values it stays positive, where ρ₀ + f(ρ₁ − ρ₀) can cancel to zero.
+        double density = (1.0 - fraction) * densities[segment] + fraction * densities[segment + 1];
         double viscosity =
                 Math.exp(logViscosities[segment] + fraction * (logViscosities[segment + 1] - logViscosities[segment]));
         if (!(density > 0)) {

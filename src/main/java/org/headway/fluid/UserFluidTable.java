@@ -33,6 +33,16 @@ public final class UserFluidTable {
     /** The SI header layout. */
     public static final String SI_HEADER = "temperature [K], density [kg/m3], viscosity [Pa*s]";
 
+    /** Largest table file read (bytes): far above any real table, far below memory trouble. */
+    public static final long MAX_FILE_SIZE = 4L * 1024 * 1024;
+
+    /**
+     * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
+     * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
+     */
+    private static final java.util.regex.Pattern DECIMAL =
+            java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
+
     private static final String[] COLUMNS = {"temperature", "density", "viscosity"};
 
     private UserFluidTable() {}
@@ -46,10 +56,21 @@ public final class UserFluidTable {
      *     it cannot be read
      */
     public static TabulatedFluid load(Path csv) {
-        String fileName = csv.getFileName().toString();
+        // A root such as "/" has no file name.
+        String fileName =
+                csv.getFileName() == null ? csv.toString() : csv.getFileName().toString();
         String text;
         try {
+            if (Files.size(csv) > MAX_FILE_SIZE) {
+                throw new InputException(
+                        csv.toString(),
+                        "file is larger than " + MAX_FILE_SIZE / (1024 * 1024)
+                                + " MB; a fluid table has one short line per temperature");
+            }
             text = Files.readString(csv, StandardCharsets.UTF_8);
+            if (text.startsWith("\uFEFF")) {
+                text = text.substring(1);
+            }
         } catch (IOException e) {
             throw new InputException(csv.toString(), "cannot read the fluid table: " + e.getMessage(), e);
         }
@@ -127,7 +148,17 @@ public final class UserFluidTable {
                 throw new InputException(
                         at + "temperature", "temperatures must increase row by row, got " + cells[0].strip());
             }
-            rows.add(new TabulatedFluid.Row(kelvin, density, celsius ? viscosity * 1e-3 : viscosity));
+            double viscosityPaS = celsius ? viscosity * 1e-3 : viscosity;
+            double kinematic = viscosityPaS / density;
+            // Checked here, in SI, so that a value that underflows or overflows on conversion is
+            // reported with its file and line rather than later without them.
+            if (!(viscosityPaS > 0) || !(kinematic > 0) || !Double.isFinite(kinematic)) {
+                throw new InputException(
+                        at + "viscosity",
+                        "viscosity " + cells[2].strip() + " with density " + cells[1].strip()
+                                + " is outside what a double can hold in SI units (Pa·s, m²/s)");
+            }
+            rows.add(new TabulatedFluid.Row(kelvin, density, viscosityPaS));
         }
         if (!headerSeen) {
             throw new InputException(fileName, "no header line; expected \"" + CELSIUS_HEADER + "\"");
@@ -167,6 +198,9 @@ public final class UserFluidTable {
         String where = fileName + " line " + line + ", column " + COLUMNS[column];
         double value;
         try {
+            if (!DECIMAL.matcher(cell).matches()) {
+                throw new NumberFormatException(cell);
+            }
             value = Double.parseDouble(cell);
         } catch (NumberFormatException e) {
             throw new InputException(where, "not a number: \"" + cell + "\"");

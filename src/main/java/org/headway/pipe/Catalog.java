@@ -62,6 +62,15 @@ public final class Catalog {
     public static final List<String> METHODS = List.of("fixed", "2-k", "3-k");
 
     private static final double METRES_PER_MILLIMETRE = 1.0e-3;
+    /** Largest catalog file read (bytes): far above any real table, far below memory trouble. */
+    public static final long MAX_FILE_SIZE = 8L * 1024 * 1024;
+    /**
+     * Largest loss coefficient or 2-K/3-K constant a fittings file may give. Published K1 values
+     * reach a few thousand; the bound only stops a typo (or 1e308) from overflowing K to infinity.
+     * Common practice, no source.
+     */
+    static final double MAX_COEFFICIENT = 1.0e6;
+
     private static final int MAX_SUGGESTIONS = 6;
 
     private final Map<String, Material> materials;
@@ -170,6 +179,12 @@ public final class Catalog {
         for (Path file : ordered) {
             String text;
             try {
+                if (Files.size(file) > MAX_FILE_SIZE) {
+                    throw new InputException(
+                            file.toString(),
+                            "file is larger than " + MAX_FILE_SIZE / (1024 * 1024)
+                                    + " MB; a catalog file holds one short line per material, size or fitting");
+                }
                 text = Files.readString(file, StandardCharsets.UTF_8);
             } catch (IOException e) {
                 throw new InputException(file.toString(), "cannot read the file: " + e.getMessage(), e);
@@ -495,21 +510,26 @@ public final class Catalog {
                 switch (method) {
                     case "fixed":
                         requireUnused(file, row, method, "k1", "k_inf", "k_d");
-                        fitting = new FixedK(id, description, file.nonNegative(row, "k"), source);
+                        fitting =
+                                new FixedK(id, description, file.nonNegativeAtMost(row, "k", MAX_COEFFICIENT), source);
                         break;
                     case "2-k":
                         requireUnused(file, row, method, "k", "k_d");
                         fitting = new TwoK(
-                                id, description, file.nonNegative(row, "k1"), file.nonNegative(row, "k_inf"), source);
+                                id,
+                                description,
+                                file.nonNegativeAtMost(row, "k1", MAX_COEFFICIENT),
+                                file.nonNegativeAtMost(row, "k_inf", MAX_COEFFICIENT),
+                                source);
                         break;
                     case "3-k":
                         requireUnused(file, row, method, "k");
                         fitting = new ThreeK(
                                 id,
                                 description,
-                                file.nonNegative(row, "k1"),
-                                file.nonNegative(row, "k_inf"),
-                                file.nonNegative(row, "k_d"),
+                                file.nonNegativeAtMost(row, "k1", MAX_COEFFICIENT),
+                                file.nonNegativeAtMost(row, "k_inf", MAX_COEFFICIENT),
+                                file.nonNegativeAtMost(row, "k_d", MAX_COEFFICIENT),
                                 source);
                         break;
                     default:

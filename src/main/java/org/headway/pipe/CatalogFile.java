@@ -31,6 +31,13 @@ final class CatalogFile {
             .setIgnoreSurroundingSpaces(true)
             .get();
 
+    /**
+     * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
+     * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
+     */
+    private static final java.util.regex.Pattern DECIMAL =
+            java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
+
     private final String label;
     private final String source;
     private final List<Row> rows;
@@ -101,6 +108,15 @@ final class CatalogFile {
     }
 
     private static List<String> fields(String label, int lineNumber, String line) {
+        if (line.indexOf('"') < 0 && line.indexOf('\r') < 0) {
+            // Without quotes or carriage returns the CSV reader would split on commas and trim;
+            // doing so directly keeps loading a catalog cheap.
+            List<String> cells = new ArrayList<>();
+            for (String cell : line.split(",", -1)) {
+                cells.add(cell.trim());
+            }
+            return cells;
+        }
         try (CSVParser parser = CSVParser.parse(line, FORMAT)) {
             List<CSVRecord> records = parser.getRecords();
             if (records.size() != 1) {
@@ -189,6 +205,9 @@ final class CatalogFile {
         String value = text(row, column);
         double parsed;
         try {
+            if (!DECIMAL.matcher(value).matches()) {
+                throw new NumberFormatException(value);
+            }
             parsed = Double.parseDouble(value);
         } catch (NumberFormatException e) {
             throw error(row, column, "not a number: '" + value + "'");
@@ -205,6 +224,22 @@ final class CatalogFile {
         if (value <= 0) {
             throw error(
                     row, column, "must be greater than zero, got " + row.cells().get(column));
+        }
+        return value;
+    }
+
+    /**
+     * A required number from zero up to a bound.
+     *
+     * @param max largest value accepted
+     */
+    double nonNegativeAtMost(Row row, String column, double max) {
+        double value = nonNegative(row, column);
+        if (value > max) {
+            throw error(
+                    row,
+                    column,
+                    "must not exceed " + max + ", got " + row.cells().get(column));
         }
         return value;
     }

@@ -3,7 +3,6 @@ package org.headway.project;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
@@ -45,7 +44,8 @@ public final class FittedCorrelationFile {
     /** Current file version. */
     public static final int VERSION = 1;
 
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    /** Same limits on hostile input as project files (size, nesting, string length, duplicates). */
+    private static final ObjectMapper MAPPER = ProjectFile.mapper();
 
     private FittedCorrelationFile() {}
 
@@ -119,25 +119,49 @@ public final class FittedCorrelationFile {
     public static FittedCorrelation load(Path file) {
         String text;
         try {
+            if (Files.size(file) > ProjectFile.MAX_DOCUMENT_LENGTH) {
+                throw new InputException(
+                        file.toString(),
+                        "file is larger than " + ProjectFile.MAX_DOCUMENT_LENGTH / (1024 * 1024)
+                                + " MB; a fitted-correlation file is a few kilobytes");
+            }
             text = Files.readString(file, StandardCharsets.UTF_8);
         } catch (NoSuchFileException e) {
             throw new InputException(file.toString(), "file not found");
         } catch (IOException e) {
             throw new InputException(file.toString(), "cannot read: " + e.getMessage());
         }
+        return parse(text, file.toString());
+    }
+
+    /**
+     * Reads fitted-correlation JSON text.
+     *
+     * @param text the file's content (a leading byte-order mark is skipped)
+     * @param label the file as errors should name it
+     */
+    static FittedCorrelation parse(String text, String label) {
+        if (text.startsWith("\uFEFF")) {
+            text = text.substring(1);
+        }
         JsonNode root;
         try {
             root = MAPPER.readTree(text);
         } catch (JsonProcessingException e) {
-            throw new InputException(
-                    file + " line " + e.getLocation().getLineNr() + ", column "
-                            + e.getLocation().getColumnNr(),
-                    "not valid JSON: " + e.getOriginalMessage());
+            // A limit exceeded (nesting, string length) may come without a location.
+            String where = e.getLocation() == null
+                    ? label
+                    : label + " line " + e.getLocation().getLineNr() + ", column "
+                            + e.getLocation().getColumnNr();
+            throw new InputException(where, "not valid JSON: " + e.getOriginalMessage());
+        }
+        if (root == null || root.isMissingNode()) {
+            throw new InputException(label, "is empty; expected a fitted-correlation JSON object");
         }
         try {
             return fromJson(root);
         } catch (InputException e) {
-            throw e.at(file + ": ");
+            throw e.at(label + ": ");
         }
     }
 
@@ -265,7 +289,11 @@ public final class FittedCorrelationFile {
         if (!v.isNumber()) {
             throw new InputException(path + "." + key, "expected a number, got " + v);
         }
-        return v.doubleValue();
+        double value = v.doubleValue();
+        if (!Double.isFinite(value)) {
+            throw new InputException(path + "." + key, "must be a finite number, got " + v.asText());
+        }
+        return value;
     }
 
     private static int integer(JsonNode node, String path, String key) {

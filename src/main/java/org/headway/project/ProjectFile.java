@@ -68,7 +68,10 @@ public final class ProjectFile {
      * @throws InputException naming the file and JSON path of the first structural problem
      */
     public static Project load(Path file) {
-        String name = file.getFileName().toString();
+        // A root such as "/" has no file name.
+        String name = file.getFileName() == null
+                ? file.toString()
+                : file.getFileName().toString();
         byte[] bytes;
         try {
             if (Files.size(file) > MAX_DOCUMENT_LENGTH) {

@@ -238,9 +238,21 @@ public final class ProjectResolver {
     private FrictionCorrelation friction(String id) {
         if (id.startsWith(FITTED_PREFIX)) {
             Path file = fittedFile(id);
-            return new org.headway.correlation.FittedFrictionCorrelation(stem(file), FittedCorrelationFile.load(file));
+            return new org.headway.correlation.FittedFrictionCorrelation(stem(file), loadFitted(file));
         }
         return FrictionMethods.byId(id);
+    }
+
+    /**
+     * Loads a fitted-correlation file; its errors become the problem text, so that the file, line
+     * and column stay in the message after the project path is put in front.
+     */
+    private static org.headway.correlation.FittedCorrelation loadFitted(Path file) {
+        try {
+            return FittedCorrelationFile.load(file);
+        } catch (InputException e) {
+            throw new InputException("", e.getMessage(), e);
+        }
     }
 
     private Path fittedFile(String id) {
@@ -253,7 +265,9 @@ public final class ProjectResolver {
     }
 
     private static String stem(Path file) {
-        String n = file.getFileName().toString();
+        String n = file.getFileName() == null
+                ? file.toString()
+                : file.getFileName().toString();
         int dot = n.lastIndexOf('.');
         return dot > 0 ? n.substring(0, dot) : n;
     }
@@ -337,8 +351,7 @@ public final class ProjectResolver {
                 } else if (fs.kind().startsWith(FITTED_PREFIX)) {
                     Path file = fittedFile(fs.kind());
                     fitting = new org.headway.system.FittedComponentLoss(
-                            new org.headway.correlation.FittedLossCoefficient(
-                                    stem(file), FittedCorrelationFile.load(file)),
+                            new org.headway.correlation.FittedLossCoefficient(stem(file), loadFitted(file)),
                             "fitted by the engineer, " + file.getFileName());
                 } else {
                     fitting = catalog.fitting(fs.kind());

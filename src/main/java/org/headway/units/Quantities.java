@@ -69,11 +69,20 @@ public final class Quantities {
     /** Significant digits used by {@link #format}. */
     public static final int SIGNIFICANT_DIGITS = 4;
 
+    /**
+     * Longest unit text accepted (characters). Real units are short ({@code mPa·s}, {@code m^3/h});
+     * the unit library parses nested products recursively, so a pasted wall of brackets would
+     * otherwise overflow the stack.
+     */
+    public static final int MAX_UNIT_LENGTH = 40;
+
     private static final Pattern NUMBER_THEN_UNIT =
             Pattern.compile("^([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*)$");
     private static final Pattern NON_FINITE = Pattern.compile("(?i)^[+-]?(nan|inf|infinity|∞)\\b.*");
     /** A letter followed by a bare 2 or 3 that is not part of a longer number: m3 → m³. */
     private static final Pattern PLAIN_POWER = Pattern.compile("(?<=[A-Za-z])([23])(?![0-9.])");
+    /** A power of two or more digits: no unit needs one, and the unit library recurses on it. */
+    private static final Pattern LARGE_POWER = Pattern.compile("\\^\\s*[+-]?\\d{2,}");
 
     private static final Unit<?> FOOT = USCustomary.FOOT;
     private static final Unit<?> INCH = USCustomary.INCH;
@@ -208,18 +217,18 @@ public final class Quantities {
         }
         String trimmed = text.strip();
         if (NON_FINITE.matcher(trimmed).matches()) {
-            throw new InputException(where, "a finite number is required, got \"" + trimmed + "\"");
+            throw new InputException(where, "a finite number is required, got \"" + abbreviate(trimmed) + "\"");
         }
         Matcher matcher = NUMBER_THEN_UNIT.matcher(trimmed);
         if (!matcher.matches()) {
             throw new InputException(
                     where,
                     kind.dimensionName() + " expected as a number and unit (e.g. " + example(kind) + "), got \""
-                            + trimmed + "\"");
+                            + abbreviate(trimmed) + "\"");
         }
         double number = Double.parseDouble(matcher.group(1));
         if (!Double.isFinite(number)) {
-            throw new InputException(where, "number out of range in \"" + trimmed + "\"");
+            throw new InputException(where, "number out of range in \"" + abbreviate(trimmed) + "\"");
         }
         String unitText = matcher.group(2).strip();
         if (unitText.isEmpty()) {
@@ -229,16 +238,24 @@ public final class Quantities {
         Unit<?> si = SI_UNITS.get(kind);
         if (!unit.isCompatible(si)) {
             throw new InputException(
-                    where, kind.dimensionName() + " expected, got \"" + trimmed + "\" (" + dimensionNameOf(unit) + ")");
+                    where,
+                    kind.dimensionName() + " expected, got \"" + abbreviate(trimmed) + "\" (" + dimensionNameOf(unit)
+                            + ")");
         }
         double value = convert(unit, si, number);
         if (!Double.isFinite(value)) {
-            throw new InputException(where, "value out of range in \"" + trimmed + "\"");
+            throw new InputException(where, "value out of range in \"" + abbreviate(trimmed) + "\"");
         }
         return value;
     }
 
     private static Unit<?> parseUnit(String unitText, String whole, QuantityKind kind, String where) {
+        if (unitText.length() > MAX_UNIT_LENGTH) {
+            throw new InputException(
+                    where,
+                    "unit text is " + unitText.length() + " characters long, more than the " + MAX_UNIT_LENGTH
+                            + " a unit may have, in \"" + abbreviate(whole) + "\"");
+        }
         if (unitText.equals("F")) {
             throw new InputException(
                     where, "unit \"F\" in \"" + whole + "\" is ambiguous (farad or Fahrenheit?): write °F or degF");
@@ -246,6 +263,12 @@ public final class Quantities {
         if (unitText.equals("C")) {
             throw new InputException(
                     where, "unit \"C\" in \"" + whole + "\" is ambiguous (coulomb or Celsius?): write °C or degC");
+        }
+        if (LARGE_POWER.matcher(unitText).find()) {
+            throw new InputException(
+                    where,
+                    "unit \"" + unitText + "\" in \"" + abbreviate(whole) + "\" has a power of more than one digit;"
+                            + " units use powers such as ^2 or ^3");
         }
         String normalised = PLAIN_POWER
                 .matcher(unitText.replace(" ", ""))
@@ -255,10 +278,14 @@ public final class Quantities {
         } catch (MeasurementException | IllegalArgumentException | IndexOutOfBoundsException e) {
             throw new InputException(
                     where,
-                    kind.dimensionName() + " expected, got \"" + whole + "\": unknown unit \"" + unitText + "\" (e.g. "
-                            + example(kind) + ")",
+                    kind.dimensionName() + " expected, got \"" + abbreviate(whole) + "\": unknown unit \"" + unitText
+                            + "\" (e.g. " + example(kind) + ")",
                     e);
         }
+    }
+
+    private static String abbreviate(String text) {
+        return text.length() <= 60 ? text : text.substring(0, 60) + "…";
     }
 
     private static double convert(Unit<?> from, Unit<?> to, double value) {
