@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The catalogue of bad input in {@code docs-bad-input.md}: each row there is one test here, with
+ * The catalogue of bad input in the README ("A catalogue of bad input"): each row there is one test here, with
  * the exact line Headway prints and its exit code. Paths in messages are shown relative to the
  * temporary folder the files live in.
  */
