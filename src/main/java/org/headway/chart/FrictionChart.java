@@ -255,13 +255,23 @@ public final class FrictionChart {
                     where.putIfAbsent(key, new double[] {p.reynolds(), p.frictionFactor()});
                 }
             }
+            // Each label sits right of its marker, or left of it when another marker lies just to the right
+            // (distances in decades of Re and f, about a label's width and height at print scale).
             for (var e : labels.entrySet()) {
                 double[] at = where.get(e.getKey());
                 os.add(at[0], at[1]);
-                // Above the marker, so a neighbouring segment's marker never covers the label.
-                XYTextAnnotation a = new XYTextAnnotation(String.join(", ", e.getValue()), at[0], at[1] * 1.045);
+                boolean rightTaken = false;
+                for (double[] other : where.values()) {
+                    double dx = Math.log10(other[0]) - Math.log10(at[0]);
+                    double dy = Math.abs(Math.log10(other[1]) - Math.log10(at[1]));
+                    if (other != at && dx > 0 && dx < 0.25 && dy < 0.04) {
+                        rightTaken = true;
+                    }
+                }
+                double x = at[0] * (rightTaken ? 1 / 1.22 : 1.22);
+                XYTextAnnotation a = new XYTextAnnotation(String.join(", ", e.getValue()), x, at[1]);
                 a.setFont(ChartStyle.FONT.deriveFont(Font.BOLD, 9f));
-                a.setTextAnchor(TextAnchor.BOTTOM_CENTER);
+                a.setTextAnchor(rightTaken ? TextAnchor.CENTER_RIGHT : TextAnchor.CENTER_LEFT);
                 a.setPaint(new Color(0x8A2F1B));
                 plot.addAnnotation(a);
             }
