@@ -82,6 +82,8 @@ public final class ResultsModel {
     private final ObjectProperty<JFreeChart> gradeChart = new SimpleObjectProperty<>();
     private final ObjectProperty<JFreeChart> systemChart = new SimpleObjectProperty<>();
     private final ObjectProperty<JFreeChart> frictionChart = new SimpleObjectProperty<>();
+    private final ObjectProperty<FrictionOverlay> overlay = new SimpleObjectProperty<>(FrictionOverlay.NONE);
+    private final StringProperty projectFriction = new SimpleStringProperty();
 
     public ResultsModel(ProjectEditor editor, Recalculator recalculator, String version) {
         this.editor = editor;
@@ -89,6 +91,9 @@ public final class ResultsModel {
         this.version = version;
         editor.projectProperty().addListener((obs, old, now) -> recalculate());
         editor.unitSystemProperty().addListener((obs, old, now) -> recalculate());
+        overlay.addListener((obs, old, now) -> recalculate());
+        projectFriction.set(editor.project().friction());
+        editor.projectProperty().addListener((obs, old, now) -> projectFriction.set(now.friction()));
         recalculate();
     }
 
@@ -98,8 +103,9 @@ public final class ResultsModel {
         var units = editor.unitSystemProperty().get();
         var catalog = editor.catalog();
         var folder = editor.baseFolder();
+        var extra = overlay.get() == null ? FrictionOverlay.NONE : overlay.get();
         computing.set(true);
-        recalculator.request(() -> Recalculation.compute(project, units, catalog, folder, version), this::show);
+        recalculator.request(() -> Recalculation.compute(project, units, catalog, folder, version, extra), this::show);
     }
 
     /** Shows an outcome (on the view's thread). */
@@ -234,6 +240,16 @@ public final class ResultsModel {
 
     public ReadOnlyObjectProperty<JFreeChart> systemChartProperty() {
         return systemChart;
+    }
+
+    /** The project's friction method; changes only when the method does, not on every edit. */
+    public ReadOnlyStringProperty projectFrictionProperty() {
+        return projectFriction;
+    }
+
+    /** The engineer's points and fits to draw on the friction chart; setting it redraws. */
+    public ObjectProperty<FrictionOverlay> frictionOverlayProperty() {
+        return overlay;
     }
 
     public ReadOnlyObjectProperty<JFreeChart> frictionChartProperty() {

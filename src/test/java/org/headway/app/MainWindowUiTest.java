@@ -116,7 +116,10 @@ class MainWindowUiTest {
     @Test
     void aLengthCanBeTypedIntoTheSegmentTable(FxRobot robot) throws Exception {
         fx.awaitResults();
-        robot.doubleClickOn("420 m");
+        // The table shows the length in the chosen units with the digits known ("420.0 m").
+        String shown = fx.editor.summaries().get(2).length();
+        assertEquals("420.0 m", shown);
+        robot.doubleClickOn(shown);
         WaitForAsyncUtils.waitForFxEvents();
         TextField cell = robot.lookup("#segment-table .text-field").queryAs(TextField.class);
         robot.interact(cell::selectAll);
