@@ -61,6 +61,21 @@ public record DataTable(Path file, List<Column> columns) {
      *     of the wrong length, or a file that cannot be read
      */
     public static DataTable read(Path file) {
+        return read(file, () -> false, rows -> {});
+    }
+
+    /** Rows read between looks at the cancel flag and progress reports. */
+    static final int CHECK_EVERY_ROWS = 10_000;
+
+    /**
+     * Reads a table, looking every {@value #CHECK_EVERY_ROWS} rows whether to stop.
+     *
+     * @param cancelled asked between blocks of rows; true stops the import
+     * @param progress told the number of rows read so far
+     * @throws java.util.concurrent.CancellationException when cancelled
+     */
+    public static DataTable read(
+            Path file, java.util.function.BooleanSupplier cancelled, java.util.function.IntConsumer progress) {
         CSVFormat csv = CSVFormat.DEFAULT
                 .builder()
                 .setIgnoreSurroundingSpaces(true)
@@ -103,6 +118,12 @@ public record DataTable(Path file, List<Column> columns) {
                     throw new InputException(
                             where + " line " + line,
                             "has " + record.size() + " values but the header names " + names.size() + " columns");
+                }
+                if (rows % CHECK_EVERY_ROWS == 0 && rows > 0) {
+                    if (cancelled.getAsBoolean()) {
+                        throw new java.util.concurrent.CancellationException("import cancelled");
+                    }
+                    progress.accept(rows);
                 }
                 if (rows == values.get(0).length) {
                     for (int c = 0; c < values.size(); c++) {

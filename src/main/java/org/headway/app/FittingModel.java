@@ -193,25 +193,42 @@ public final class FittingModel {
 
     // ---- actions ----
 
-    /** Asks for a CSV and imports it. */
-    public boolean chooseAndImport() {
-        return dialogs.chooseDataToImport(editor.startFolder())
-                .map(this::importCsv)
-                .orElse(false);
+    /** Asks which CSV to import. */
+    public java.util.Optional<Path> chooseImportFile() {
+        return dialogs.chooseDataToImport(editor.startFolder());
     }
 
     /**
-     * Reads a CSV and offers its columns; guesses f (or the first column) as y and Re (or the
-     * second column) as x. A file that does not read leaves the previous data as they were.
+     * Reads a CSV and offers its columns, at once on the calling thread (the view reads in a
+     * background task with {@link DataTable#read(Path, BooleanSupplier, java.util.function.IntConsumer)}
+     * and then calls {@link #showTable}). A file that does not read leaves the previous data.
      */
     public boolean importCsv(Path file) {
         DataTable t;
         try {
             t = DataTable.read(file);
         } catch (InputException e) {
-            problem.set(plain(e));
+            importFailed(e);
             return false;
         }
+        showTable(t);
+        return true;
+    }
+
+    /** Reports an import that failed; the previous data stay. */
+    public void importFailed(Throwable t) {
+        problem.set(t instanceof InputException e ? plain(e) : "internal error (please report): " + t);
+        status.set("Import failed; the previous data are kept");
+    }
+
+    /** Records a cancelled import; the previous data stay. */
+    public void importCancelled() {
+        status.set("Import cancelled; the previous data are kept");
+    }
+
+    /** Offers a table's columns; guesses f (or the first column) as y and Re (or the second) as x. */
+    public void showTable(DataTable t) {
+        Path file = t.file();
         problem.set("");
         fits.clear();
         skipped.clear();
@@ -222,7 +239,6 @@ public final class FittingModel {
         responseColumn.set(guess(t, List.of("f", "friction", "friction_factor", "K"), 0));
         explanatoryColumn.set(guess(t, List.of("Re", "Reynolds", "re"), labels.size() > 1 ? 1 : 0));
         status.set("Imported " + t.rows() + " rows, " + labels.size() + " columns from " + file.getFileName());
-        return true;
     }
 
     private static String guess(DataTable t, List<String> names, int fallback) {

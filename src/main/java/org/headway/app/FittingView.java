@@ -38,6 +38,7 @@ final class FittingView extends BorderPane {
     private final Button cancel = new Button("Cancel");
     private final Label progressText = new Label();
     private Task<FitComparison> running;
+    private Task<DataTable> importing;
 
     FittingView(FittingModel model, ResultsModel results, Dialogs dialogs, Supplier<Path> folder) {
         this.model = model;
@@ -46,7 +47,7 @@ final class FittingView extends BorderPane {
 
         Button importCsv = new Button("Import CSV…");
         importCsv.setId("fit-import");
-        importCsv.setOnAction(e -> model.chooseAndImport());
+        importCsv.setOnAction(e -> model.chooseImportFile().ifPresent(this::importInBackground));
         Label file = new Label();
         file.setId("fit-file");
         file.getStyleClass().add("hint");
@@ -83,6 +84,9 @@ final class FittingView extends BorderPane {
         cancel.setOnAction(e -> {
             if (running != null) {
                 running.cancel(false);
+            }
+            if (importing != null) {
+                importing.cancel(false);
             }
         });
         progress.setPrefWidth(180);
@@ -198,9 +202,55 @@ final class FittingView extends BorderPane {
         progressText.setVisible(on);
     }
 
+    /** Reads a CSV in a background task with progress (rows read) and cancel. */
+    void importInBackground(Path file) {
+        if ((importing != null && importing.isRunning()) || (running != null && running.isRunning())) {
+            return;
+        }
+        Task<DataTable> task = new Task<>() {
+            @Override
+            protected DataTable call() {
+                updateMessage("reading " + file.getFileName() + "…");
+                return DataTable.read(
+                        file,
+                        this::isCancelled,
+                        rows -> updateMessage(String.format(java.util.Locale.ROOT, "read %,d rows…", rows)));
+            }
+        };
+        importing = task;
+        progress.progressProperty().unbind();
+        progress.setProgress(ProgressBar.INDETERMINATE_PROGRESS);
+        progressText.textProperty().bind(task.messageProperty());
+        setRunning(true);
+        task.setOnSucceeded(e -> {
+            finish();
+            model.showTable(task.getValue());
+        });
+        task.setOnCancelled(e -> {
+            finish();
+            model.importCancelled();
+        });
+        task.setOnFailed(e -> {
+            finish();
+            if (task.getException() instanceof java.util.concurrent.CancellationException) {
+                model.importCancelled();
+            } else {
+                model.importFailed(task.getException());
+            }
+        });
+        Thread thread = new Thread(task, "headway-import");
+        thread.setDaemon(true);
+        thread.start();
+    }
+
+    /** The import task last started, for tests. */
+    Task<DataTable> importTask() {
+        return importing;
+    }
+
     /** Starts the ticked forms in a background task; a run in progress is left to finish. */
     void runFits() {
-        if (running != null && running.isRunning()) {
+        if ((running != null && running.isRunning()) || (importing != null && importing.isRunning())) {
             return;
         }
         FittingModel.FitJob job = model.prepareFits();

@@ -217,7 +217,7 @@ public final class MainWindow {
         MenuItem exportSheet = item("Export head-loss sheet…", "Shortcut+E", this::exportSheet);
         MenuItem importData = item("Import measurements (CSV)…", "Shortcut+I", () -> {
             tabs.getSelectionModel().select(4);
-            fitting.chooseAndImport();
+            fitting.chooseImportFile().ifPresent(fittingView::importInBackground);
         });
         MenuItem quit = item("Close window", "Shortcut+W", () -> {
             if (editor.confirmDiscard() && root.getScene() != null) {

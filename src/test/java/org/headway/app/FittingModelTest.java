@@ -3,6 +3,7 @@ package org.headway.app;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.charset.StandardCharsets;
@@ -127,6 +128,22 @@ class FittingModelTest {
                 "bad.csv line 3, column f: 'abc' is not a number",
                 model.problemProperty().get());
         assertEquals(13, model.tableProperty().get().rows());
+    }
+
+    @Test
+    void aLongImportReportsRowsAndStopsWhenCancelled() throws Exception {
+        StringBuilder csv = new StringBuilder("Re [-],f [-]\n");
+        for (int i = 0; i < 25_000; i++) {
+            csv.append(5000 + i).append(",0.03\n");
+        }
+        Path big = Files.writeString(dir.resolve("big.csv"), csv);
+        List<Integer> seen = new ArrayList<>();
+        assertEquals(25_000, DataTable.read(big, () -> false, seen::add).rows());
+        assertEquals(List.of(10_000, 20_000), seen);
+        assertThrows(
+                java.util.concurrent.CancellationException.class,
+                () -> DataTable.read(big, () -> true, rows -> {}),
+                "a cancel is seen at the first block of rows");
     }
 
     @Test

@@ -79,6 +79,8 @@ class FittingUiTest {
         robot.interact(() -> fx.window.tabs().getSelectionModel().select(4));
         fx.dialogs.files.add(csv);
         robot.clickOn("#fit-import");
+        WaitForAsyncUtils.waitFor(
+                20, TimeUnit.SECONDS, () -> fx.window.fitting().tableProperty().get() != null);
         WaitForAsyncUtils.waitForFxEvents();
         robot.interact(() -> fx.window
                 .fitting()

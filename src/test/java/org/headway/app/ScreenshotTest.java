@@ -58,6 +58,8 @@ class ScreenshotTest {
         robot.interact(() -> fx.window.tabs().getSelectionModel().select(4));
         fx.dialogs.files.add(csv);
         robot.clickOn("#fit-import");
+        WaitForAsyncUtils.waitFor(
+                20, TimeUnit.SECONDS, () -> fx.window.fitting().tableProperty().get() != null);
         robot.clickOn("#fit-run");
         WaitForAsyncUtils.waitFor(
                 30, TimeUnit.SECONDS, () -> fx.window.fitting().fits().size() > 3);
