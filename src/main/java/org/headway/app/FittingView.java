@@ -156,8 +156,8 @@ final class FittingView extends BorderPane {
         onChart.setId("fit-on-chart");
         onChart.setSelected(true);
         onChart.setTooltip(new Tooltip("When x is Re and y is f"));
-        Runnable overlay = () -> results.frictionOverlayProperty()
-                .set(onChart.isSelected() ? model.frictionOverlay() : FrictionOverlay.NONE);
+        Runnable overlay = () -> results.setFrictionOverlay(
+                "fitting", onChart.isSelected() ? model.frictionOverlay() : FrictionOverlay.NONE);
         onChart.selectedProperty().addListener((o, a, b) -> overlay.run());
         model.selectedProperty().addListener((o, a, b) -> overlay.run());
         results.projectFrictionProperty().addListener((o, a, b) -> overlay.run());

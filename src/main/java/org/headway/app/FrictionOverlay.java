@@ -14,6 +14,17 @@ public record FrictionOverlay(List<FrictionChart.RigPoint> rigPoints, List<Frict
     /** Nothing to add. */
     public static final FrictionOverlay NONE = new FrictionOverlay(List.of(), List.of());
 
+    /** Several overlays as one: points and curves in the order given. */
+    public static FrictionOverlay combine(java.util.Collection<FrictionOverlay> parts) {
+        java.util.List<FrictionChart.RigPoint> points = new java.util.ArrayList<>();
+        java.util.List<FrictionChart.FittedCurve> curves = new java.util.ArrayList<>();
+        for (FrictionOverlay o : parts) {
+            points.addAll(o.rigPoints());
+            curves.addAll(o.fitted());
+        }
+        return new FrictionOverlay(points, curves);
+    }
+
     public FrictionOverlay {
         rigPoints = List.copyOf(rigPoints);
         fitted = List.copyOf(fitted);

@@ -82,7 +82,7 @@ public final class ResultsModel {
     private final ObjectProperty<JFreeChart> gradeChart = new SimpleObjectProperty<>();
     private final ObjectProperty<JFreeChart> systemChart = new SimpleObjectProperty<>();
     private final ObjectProperty<JFreeChart> frictionChart = new SimpleObjectProperty<>();
-    private final ObjectProperty<FrictionOverlay> overlay = new SimpleObjectProperty<>(FrictionOverlay.NONE);
+    private final java.util.Map<String, FrictionOverlay> overlays = new java.util.LinkedHashMap<>();
     private final StringProperty projectFriction = new SimpleStringProperty();
 
     public ResultsModel(ProjectEditor editor, Recalculator recalculator, String version) {
@@ -91,7 +91,6 @@ public final class ResultsModel {
         this.version = version;
         editor.projectProperty().addListener((obs, old, now) -> recalculate());
         editor.unitSystemProperty().addListener((obs, old, now) -> recalculate());
-        overlay.addListener((obs, old, now) -> recalculate());
         projectFriction.set(editor.project().friction());
         editor.projectProperty().addListener((obs, old, now) -> projectFriction.set(now.friction()));
         recalculate();
@@ -103,7 +102,7 @@ public final class ResultsModel {
         var units = editor.unitSystemProperty().get();
         var catalog = editor.catalog();
         var folder = editor.baseFolder();
-        var extra = overlay.get() == null ? FrictionOverlay.NONE : overlay.get();
+        var extra = FrictionOverlay.combine(overlays.values());
         computing.set(true);
         recalculator.request(() -> Recalculation.compute(project, units, catalog, folder, version, extra), this::show);
     }
@@ -247,9 +246,19 @@ public final class ResultsModel {
         return projectFriction;
     }
 
-    /** The engineer's points and fits to draw on the friction chart; setting it redraws. */
-    public ObjectProperty<FrictionOverlay> frictionOverlayProperty() {
-        return overlay;
+    /**
+     * Sets what one view adds to the friction chart (its points and fits) and redraws.
+     *
+     * @param source which view, e.g. {@code fitting} or {@code rig}
+     */
+    public void setFrictionOverlay(String source, FrictionOverlay overlay) {
+        overlays.put(source, overlay == null ? FrictionOverlay.NONE : overlay);
+        recalculate();
+    }
+
+    /** All the views' additions to the friction chart, combined. */
+    public FrictionOverlay frictionOverlay() {
+        return FrictionOverlay.combine(overlays.values());
     }
 
     public ReadOnlyObjectProperty<JFreeChart> frictionChartProperty() {

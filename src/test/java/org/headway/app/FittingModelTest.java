@@ -12,6 +12,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.headway.chart.FrictionChart;
 import org.headway.correlation.FitComparison;
 import org.headway.correlation.FitForm;
 import org.headway.correlation.FitResult;
@@ -207,6 +208,21 @@ class FittingModelTest {
         assertTrue(dialogs.errors.get(0).endsWith("Not a directory"), dialogs.errors.get(0));
         assertEquals("a file where a folder is expected", Files.readString(blocker));
         assertNull(model.savedFitProperty().get());
+    }
+
+    @Test
+    void pointsFromSeveralViewsShareTheFrictionChart() {
+        FrictionOverlay fitting = new FrictionOverlay(List.of(new FrictionChart.RigPoint(1e4, 0.031, 0, 0)), List.of());
+        FrictionOverlay rig =
+                new FrictionOverlay(List.of(new FrictionChart.RigPoint(2e4, 0.027, 400, 0.0008)), List.of());
+        ResultsModel results = new ResultsModel(editor, Recalculator.immediate(), "test");
+        results.setFrictionOverlay("fitting", fitting);
+        results.setFrictionOverlay("rig", rig);
+        assertEquals(2, results.frictionOverlay().rigPoints().size());
+        assertTrue(seriesNames((XYPlot) results.frictionChartProperty().get().getPlot())
+                .contains("rig data (±U)"));
+        results.setFrictionOverlay("fitting", FrictionOverlay.NONE);
+        assertEquals(rig.rigPoints(), results.frictionOverlay().rigPoints());
     }
 
     @Test
