@@ -40,6 +40,14 @@ public record DataTable(Path file, List<Column> columns) {
         }
     }
 
+    /**
+     * A decimal number as people write it (the rule {@code headway fit} applies): Java's own parser
+     * would also take hexadecimal ({@code 0x1p3}) and type suffixes ({@code 2f}), so a typo such as
+     * {@code 1028f} would pass as 1028.
+     */
+    private static final java.util.regex.Pattern DECIMAL =
+            java.util.regex.Pattern.compile("[+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?");
+
     public DataTable {
         columns = List.copyOf(columns);
     }
@@ -134,6 +142,9 @@ public record DataTable(Path file, List<Column> columns) {
                     String cell = record.get(c);
                     double v;
                     try {
+                        if (!DECIMAL.matcher(cell).matches()) {
+                            throw new NumberFormatException(cell);
+                        }
                         v = Double.parseDouble(cell);
                     } catch (NumberFormatException e) {
                         throw new InputException(
