@@ -117,9 +117,12 @@ public final class Autosave {
         return true;
     }
 
-    /** Removes the copy of the current project (and the one written last, after a Save as). */
+    /**
+     * Removes the copy this session wrote (after a Save as, the one under the old name). A copy left
+     * by an earlier session for another project is left alone: it is offered when that project is
+     * opened at start.
+     */
     public void discard() {
-        delete(fileFor(editor.fileProperty().get()));
         if (lastWritten != null) {
             delete(lastWritten);
             lastWritten = null;

@@ -66,4 +66,10 @@ public interface Dialogs {
      * @return true to restore it (as unsaved changes), false to throw it away
      */
     boolean askRestoreAutosave(String projectName, Instant savedAt);
+
+    /**
+     * @param startFolder folder to start in (may be null)
+     * @return the rig file (JSON naming its data CSV) chosen, or empty when the user cancels
+     */
+    Optional<Path> chooseRigFile(Path startFolder);
 }

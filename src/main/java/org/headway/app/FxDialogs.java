@@ -96,6 +96,17 @@ final class FxDialogs implements Dialogs {
     }
 
     @Override
+    public Optional<Path> chooseRigFile(Path startFolder) {
+        FileChooser chooser = chooser("Open a rig file", startFolder);
+        chooser.getExtensionFilters()
+                .addAll(
+                        new FileChooser.ExtensionFilter("Rig files (*.json)", "*.json"),
+                        new FileChooser.ExtensionFilter("All files", "*"));
+        File f = chooser.showOpenDialog(owner);
+        return Optional.ofNullable(f).map(File::toPath);
+    }
+
+    @Override
     public boolean askRestoreAutosave(String projectName, Instant savedAt) {
         ButtonType restore = new ButtonType("Restore", ButtonBar.ButtonData.YES);
         ButtonType discard = new ButtonType("Throw away", ButtonBar.ButtonData.NO);

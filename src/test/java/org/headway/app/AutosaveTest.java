@@ -118,6 +118,20 @@ class AutosaveTest {
     }
 
     @Test
+    void openingAnotherProjectLeavesThatProjectsCopyForItsNextStart() throws Exception {
+        Session before = start();
+        before.editor().setFlow("11.5 L/s");
+        before.autosave().saveNow();
+        Path copy = before.autosave().fileFor(demo.toAbsolutePath());
+        // Next session starts on a new project, then opens the demo from the menu.
+        FakeDialogs dialogs = new FakeDialogs();
+        ProjectEditor editor = new ProjectEditor(Catalog.bundled(), dialogs, new RecentFiles(dir.resolve("r.txt")));
+        new Autosave(editor, dialogs, copies);
+        assertTrue(editor.openFile(demo));
+        assertTrue(Files.exists(copy), "not deleted behind the engineer's back");
+    }
+
+    @Test
     void aNeverSavedProjectIsKeptUnderUntitledAndMovesWithSaveAs() throws Exception {
         FakeDialogs dialogs = new FakeDialogs();
         ProjectEditor editor = new ProjectEditor(Catalog.bundled(), dialogs, new RecentFiles(dir.resolve("r.txt")));

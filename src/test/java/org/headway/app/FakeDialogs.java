@@ -62,4 +62,9 @@ final class FakeDialogs implements Dialogs {
         }
         return a;
     }
+
+    @Override
+    public Optional<Path> chooseRigFile(Path startFolder) {
+        return Optional.ofNullable(files.poll());
+    }
 }
