@@ -1,6 +1,7 @@
 package org.headway.app;
 
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.Optional;
 
 /**
@@ -50,4 +51,25 @@ public interface Dialogs {
      * @param message the engine's message, in plain words
      */
     void showError(String heading, String message);
+
+    /**
+     * @param startFolder folder to start in (may be null)
+     * @return the data file (CSV) chosen, or empty when the user cancels
+     */
+    Optional<Path> chooseDataToImport(Path startFolder);
+
+    /**
+     * Offers work kept by the autosave after the app ended without saving it (a crash).
+     *
+     * @param projectName the project the autosave belongs to
+     * @param savedAt when the autosave was written
+     * @return true to restore it (as unsaved changes), false to throw it away
+     */
+    boolean askRestoreAutosave(String projectName, Instant savedAt);
+
+    /**
+     * @param startFolder folder to start in (may be null)
+     * @return the rig file (JSON naming its data CSV) chosen, or empty when the user cancels
+     */
+    Optional<Path> chooseRigFile(Path startFolder);
 }

@@ -3,6 +3,9 @@ package org.headway.app;
 import java.io.File;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Instant;
+import java.time.ZoneId;
+import java.time.format.DateTimeFormatter;
 import java.util.Optional;
 import javafx.scene.control.Alert;
 import javafx.scene.control.ButtonBar;
@@ -79,6 +82,44 @@ final class FxDialogs implements Dialogs {
         text.setMaxWidth(560);
         alert.getDialogPane().setContent(text);
         alert.showAndWait();
+    }
+
+    @Override
+    public Optional<Path> chooseDataToImport(Path startFolder) {
+        FileChooser chooser = chooser("Import measurements (CSV)", startFolder);
+        chooser.getExtensionFilters()
+                .addAll(
+                        new FileChooser.ExtensionFilter("CSV with a header row (*.csv)", "*.csv"),
+                        new FileChooser.ExtensionFilter("All files", "*"));
+        File f = chooser.showOpenDialog(owner);
+        return Optional.ofNullable(f).map(File::toPath);
+    }
+
+    @Override
+    public Optional<Path> chooseRigFile(Path startFolder) {
+        FileChooser chooser = chooser("Open a rig file", startFolder);
+        chooser.getExtensionFilters()
+                .addAll(
+                        new FileChooser.ExtensionFilter("Rig files (*.json)", "*.json"),
+                        new FileChooser.ExtensionFilter("All files", "*"));
+        File f = chooser.showOpenDialog(owner);
+        return Optional.ofNullable(f).map(File::toPath);
+    }
+
+    @Override
+    public boolean askRestoreAutosave(String projectName, Instant savedAt) {
+        ButtonType restore = new ButtonType("Restore", ButtonBar.ButtonData.YES);
+        ButtonType discard = new ButtonType("Throw away", ButtonBar.ButtonData.NO);
+        Alert alert = new Alert(Alert.AlertType.CONFIRMATION, "", restore, discard);
+        alert.initOwner(owner);
+        alert.setTitle("Unsaved work found");
+        alert.setHeaderText("Headway ended without saving changes to \"" + projectName + "\".");
+        String when = DateTimeFormatter.ofPattern("d MMM yyyy, HH:mm")
+                .withZone(ZoneId.systemDefault())
+                .format(savedAt);
+        alert.setContentText("An automatic copy was kept at " + when
+                + ". Restore it as unsaved changes? (Throw away deletes the copy; the project file stays as it is.)");
+        return alert.showAndWait().orElse(discard) == restore;
     }
 
     private static FileChooser chooser(String title, Path startFolder) {

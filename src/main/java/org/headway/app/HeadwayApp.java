@@ -39,11 +39,15 @@ public final class HeadwayApp extends Application {
         ResultsModel results = new ResultsModel(editor, new FxRecalculator(), version());
         MainWindow window = new MainWindow(editor, results, dialogs);
         window.attach(stage, WIDTH, HEIGHT);
+        Autosave autosave = new Autosave(editor, dialogs, Autosave.inUserDataFolder());
+        window.keepAutosave(stage, autosave);
         if (report) {
             System.err.println("headway: window built " + sinceJvmStart() + " ms after JVM start");
             reportFirstFrame();
         }
         stage.show();
+        // After a crash the copy is newer than the project file: offer it back.
+        autosave.offerRestore();
     }
 
     /** Prints the time from JVM start to the first frame after the window is shown (a measurement aid). */

@@ -39,7 +39,8 @@ import org.headway.units.UnitSystem;
 public final class MainWindow {
 
     /** Tab titles, also used by the screenshot test. */
-    static final List<String> TABS = List.of("Results", "Grade lines", "System curve", "Friction chart");
+    static final List<String> TABS =
+            List.of("Results", "Grade lines", "System curve", "Friction chart", "Rig data fitting", "π groups");
 
     private static final KeyCombination UNDO = KeyCombination.keyCombination("Shortcut+Z");
     private static final KeyCombination REDO = KeyCombination.keyCombination("Shortcut+Y");
@@ -52,6 +53,9 @@ public final class MainWindow {
     private final TabPane tabs = new TabPane();
     private final RunEditorView editorView;
     private final ChartView frictionView;
+    private final FittingModel fitting;
+    private final PiGroupsModel piGroups;
+    private final FittingView fittingView;
     private final Label status = new Label();
     private final ProgressBar progress = new ProgressBar();
     private final Button cancel = new Button("Cancel export");
@@ -77,12 +81,19 @@ public final class MainWindow {
                 dialogs,
                 editor::startFolder,
                 "friction-chart");
+        fitting = new FittingModel(editor, dialogs);
+        fittingView = new FittingView(fitting, results, dialogs, editor::startFolder);
+        piGroups = new PiGroupsModel();
+        ScrollPane piScroll = new ScrollPane(new PiGroupsView(piGroups));
+        piScroll.setFitToWidth(true);
         tabs.getTabs()
                 .addAll(
                         tab(TABS.get(0), new ScrollPane(new ResultsView(results))),
                         tab(TABS.get(1), grades),
                         tab(TABS.get(2), system),
-                        tab(TABS.get(3), frictionView));
+                        tab(TABS.get(3), frictionView),
+                        tab(TABS.get(4), fittingView),
+                        tab(TABS.get(5), piScroll));
         ((ScrollPane) tabs.getTabs().get(0).getContent()).setFitToWidth(true);
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         tabs.setId("views");
@@ -133,12 +144,49 @@ public final class MainWindow {
         });
     }
 
+    /**
+     * Keeps the autosave going: a copy {@value Autosave#DEBOUNCE_MS} ms after the last edit and
+     * every minute while there are unsaved changes; the copy goes when the window closes cleanly.
+     */
+    public void keepAutosave(Stage stage, Autosave autosave) {
+        javafx.animation.PauseTransition afterEdit =
+                new javafx.animation.PauseTransition(javafx.util.Duration.millis(Autosave.DEBOUNCE_MS));
+        afterEdit.setOnFinished(e -> autosave.saveNow());
+        editor.projectProperty().addListener((o, a, b) -> afterEdit.playFromStart());
+        javafx.animation.Timeline everyMinute = new javafx.animation.Timeline(new javafx.animation.KeyFrame(
+                javafx.util.Duration.millis(Autosave.INTERVAL_MS), e -> autosave.saveNow()));
+        everyMinute.setCycleCount(javafx.animation.Animation.INDEFINITE);
+        everyMinute.play();
+        autosave.problemProperty().addListener((o, a, b) -> {
+            if (!b.isEmpty()) {
+                status.setText(b);
+            }
+        });
+        stage.addEventHandler(javafx.stage.WindowEvent.WINDOW_HIDDEN, e -> {
+            everyMinute.stop();
+            afterEdit.stop();
+            autosave.discard();
+        });
+    }
+
     TabPane tabs() {
         return tabs;
     }
 
     ChartView frictionView() {
         return frictionView;
+    }
+
+    FittingModel fitting() {
+        return fitting;
+    }
+
+    FittingView fittingView() {
+        return fittingView;
+    }
+
+    PiGroupsModel piGroups() {
+        return piGroups;
     }
 
     private static Tab tab(String title, javafx.scene.Node content) {
@@ -167,6 +215,10 @@ public final class MainWindow {
         MenuItem save = item("Save", "Shortcut+S", editor::save);
         MenuItem saveAs = item("Save as…", "Shortcut+Shift+S", editor::saveAs);
         MenuItem exportSheet = item("Export head-loss sheet…", "Shortcut+E", this::exportSheet);
+        MenuItem importData = item("Import measurements (CSV)…", "Shortcut+I", () -> {
+            tabs.getSelectionModel().select(4);
+            fitting.chooseImportFile().ifPresent(fittingView::importInBackground);
+        });
         MenuItem quit = item("Close window", "Shortcut+W", () -> {
             if (editor.confirmDiscard() && root.getScene() != null) {
                 ((Stage) root.getScene().getWindow()).close();
@@ -181,6 +233,7 @@ public final class MainWindow {
                         save,
                         saveAs,
                         new SeparatorMenuItem(),
+                        importData,
                         exportSheet,
                         new SeparatorMenuItem(),
                         quit);

@@ -9,6 +9,7 @@ import java.util.Deque;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.function.BiConsumer;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.BooleanBinding;
 import javafx.beans.binding.StringBinding;
@@ -58,6 +59,7 @@ public final class ProjectEditor {
     private final BooleanProperty canRedo = new SimpleBooleanProperty(false);
     private final BooleanBinding dirty;
     private final StringBinding windowTitle;
+    private BiConsumer<Project, Path> writer = ProjectFile::save;
 
     public ProjectEditor(Catalog catalog, Dialogs dialogs, RecentFiles recent) {
         this.catalog = catalog;
@@ -978,6 +980,30 @@ public final class ProjectEditor {
         updateUndoState();
     }
 
+    /**
+     * Puts a project (an autosaved copy) in place as unsaved changes to the current file: the
+     * title shows them, Save writes them, Undo goes back to the file's version.
+     */
+    public void restoreUnsaved(Project p) {
+        Project current = project.get();
+        if (p.equals(current)) {
+            return;
+        }
+        undo.push(current);
+        redo.clear();
+        messages.clear();
+        project.set(p);
+        updateUndoState();
+    }
+
+    /**
+     * Replaces the project writer (atomic {@link ProjectFile#save} by default), so that tests can
+     * make a save fail part-way as a full disk would.
+     */
+    void useWriter(BiConsumer<Project, Path> writer) {
+        this.writer = writer;
+    }
+
     /** Saves to the current file, or asks where when there is none. */
     public boolean save() {
         if (file.get() == null) {
@@ -1003,7 +1029,7 @@ public final class ProjectEditor {
     private boolean write(Path target) {
         Project p = project.get();
         try {
-            ProjectFile.save(p, target);
+            writer.accept(p, target);
         } catch (InputException e) {
             dialogs.showError("Could not save " + target.getFileName(), plain(e));
             return false;

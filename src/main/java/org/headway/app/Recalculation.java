@@ -1,8 +1,13 @@
 package org.headway.app;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import org.headway.caution.InputException;
+import org.headway.chart.FrictionChart;
+import org.headway.correlation.FittedCorrelation;
 import org.headway.pipe.Catalog;
+import org.headway.project.FittedCorrelationFile;
 import org.headway.project.Project;
 import org.headway.project.ProjectResolver;
 import org.headway.project.ResolvedProject;
@@ -52,6 +57,21 @@ public final class Recalculation {
      * @param version Headway version for the sheet
      */
     public static Outcome compute(Project project, UnitSystem units, Catalog catalog, Path baseFolder, String version) {
+        return compute(project, units, catalog, baseFolder, version, FrictionOverlay.NONE);
+    }
+
+    /**
+     * As {@link #compute(Project, UnitSystem, Catalog, Path, String)}, with the engineer's own
+     * points and fits drawn on the friction chart; a project whose friction method is a fitted
+     * correlation ({@code fitted:FILE}) has that fit drawn too.
+     */
+    public static Outcome compute(
+            Project project,
+            UnitSystem units,
+            Catalog catalog,
+            Path baseFolder,
+            String version,
+            FrictionOverlay overlay) {
         HeadLossSheet sheet;
         try {
             ResolvedProject resolved = ProjectResolver.resolve(project, catalog, baseFolder);
@@ -67,6 +87,26 @@ public final class Recalculation {
                 "",
                 SheetCharts.grades(sheet, units),
                 SheetCharts.system(sheet, units),
-                SheetCharts.friction(sheet));
+                SheetCharts.friction(sheet, overlay.rigPoints(), fittedCurves(project, baseFolder, overlay)));
+    }
+
+    private static List<FrictionChart.FittedCurve> fittedCurves(
+            Project project, Path baseFolder, FrictionOverlay overlay) {
+        List<FrictionChart.FittedCurve> curves = new ArrayList<>(overlay.fitted());
+        String method = project.friction() == null ? "" : project.friction().strip();
+        if (method.startsWith(ProjectResolver.FITTED_PREFIX)) {
+            String name =
+                    method.substring(ProjectResolver.FITTED_PREFIX.length()).strip();
+            try {
+                FittedCorrelation fit = FittedCorrelationFile.load(baseFolder.resolve(name));
+                // A fit of (Re, ε/D) has no single curve to draw.
+                if (fit.variableNames().size() == 1) {
+                    curves.add(FittingModel.curve("pipe run: " + Path.of(name).getFileName(), fit));
+                }
+            } catch (InputException e) {
+                // The run resolved with this file a moment ago; if it has gone since, the chart goes without it.
+            }
+        }
+        return curves;
     }
 }

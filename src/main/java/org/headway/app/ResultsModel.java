@@ -82,6 +82,8 @@ public final class ResultsModel {
     private final ObjectProperty<JFreeChart> gradeChart = new SimpleObjectProperty<>();
     private final ObjectProperty<JFreeChart> systemChart = new SimpleObjectProperty<>();
     private final ObjectProperty<JFreeChart> frictionChart = new SimpleObjectProperty<>();
+    private final java.util.Map<String, FrictionOverlay> overlays = new java.util.LinkedHashMap<>();
+    private final StringProperty projectFriction = new SimpleStringProperty();
 
     public ResultsModel(ProjectEditor editor, Recalculator recalculator, String version) {
         this.editor = editor;
@@ -89,6 +91,8 @@ public final class ResultsModel {
         this.version = version;
         editor.projectProperty().addListener((obs, old, now) -> recalculate());
         editor.unitSystemProperty().addListener((obs, old, now) -> recalculate());
+        projectFriction.set(editor.project().friction());
+        editor.projectProperty().addListener((obs, old, now) -> projectFriction.set(now.friction()));
         recalculate();
     }
 
@@ -98,8 +102,9 @@ public final class ResultsModel {
         var units = editor.unitSystemProperty().get();
         var catalog = editor.catalog();
         var folder = editor.baseFolder();
+        var extra = FrictionOverlay.combine(overlays.values());
         computing.set(true);
-        recalculator.request(() -> Recalculation.compute(project, units, catalog, folder, version), this::show);
+        recalculator.request(() -> Recalculation.compute(project, units, catalog, folder, version, extra), this::show);
     }
 
     /** Shows an outcome (on the view's thread). */
@@ -234,6 +239,26 @@ public final class ResultsModel {
 
     public ReadOnlyObjectProperty<JFreeChart> systemChartProperty() {
         return systemChart;
+    }
+
+    /** The project's friction method; changes only when the method does, not on every edit. */
+    public ReadOnlyStringProperty projectFrictionProperty() {
+        return projectFriction;
+    }
+
+    /**
+     * Sets what one view adds to the friction chart (its points and fits) and redraws.
+     *
+     * @param source which view, e.g. {@code fitting} or {@code rig}
+     */
+    public void setFrictionOverlay(String source, FrictionOverlay overlay) {
+        overlays.put(source, overlay == null ? FrictionOverlay.NONE : overlay);
+        recalculate();
+    }
+
+    /** All the views' additions to the friction chart, combined. */
+    public FrictionOverlay frictionOverlay() {
+        return FrictionOverlay.combine(overlays.values());
     }
 
     public ReadOnlyObjectProperty<JFreeChart> frictionChartProperty() {

@@ -157,6 +157,8 @@ public final class FrictionChart {
         }
         XYLineAndShapeRenderer curveRenderer = new XYLineAndShapeRenderer(true, false);
         XYLineAndShapeRenderer lowRenderer = new XYLineAndShapeRenderer(true, false);
+        // Drawn as one path: segment by segment each short piece restarts the dash and the line looks solid.
+        lowRenderer.setDrawSeriesLineAsPath(true);
         for (int i = 0; i < curves.getSeriesCount(); i++) {
             curveRenderer.setSeriesPaint(i, ChartStyle.family(i));
             curveRenderer.setSeriesStroke(i, ChartStyle.solid(1.2f));
@@ -204,6 +206,7 @@ public final class FrictionChart {
         }
         XYLineAndShapeRenderer fitRenderer = new XYLineAndShapeRenderer(true, false);
         XYLineAndShapeRenderer fitOutRenderer = new XYLineAndShapeRenderer(true, false);
+        fitOutRenderer.setDrawSeriesLineAsPath(true);
         for (int i = 0; i < fittedIn.getSeriesCount(); i++) {
             fitRenderer.setSeriesPaint(i, ChartStyle.TEAL);
             fitRenderer.setSeriesStroke(i, ChartStyle.solid(2.2f));
@@ -217,7 +220,9 @@ public final class FrictionChart {
         // Rig data with uncertainty bars, thinned evenly when there are very many.
         XYIntervalSeriesCollection rig = new XYIntervalSeriesCollection();
         if (!spec.rigPoints().isEmpty()) {
-            XYIntervalSeries rs = new XYIntervalSeries("rig data (±U)", false, true);
+            boolean bars =
+                    spec.rigPoints().stream().anyMatch(p -> p.reynoldsUncertainty() > 0 || p.frictionUncertainty() > 0);
+            XYIntervalSeries rs = new XYIntervalSeries(bars ? "rig data (±U)" : "rig data", false, true);
             int n = spec.rigPoints().size();
             int stride = Math.max(1, (n + MAX_DRAWN_RIG_POINTS - 1) / MAX_DRAWN_RIG_POINTS);
             for (int i = 0; i < n; i += stride) {

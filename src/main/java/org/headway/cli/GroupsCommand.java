@@ -14,6 +14,7 @@ import org.headway.correlation.DimensionalAnalysis;
 import org.headway.correlation.DimensionalVariable;
 import org.headway.correlation.DimensionlessGroup;
 import org.headway.correlation.GroupAnalysis;
+import org.headway.units.DimensionParser;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -61,7 +62,8 @@ public final class GroupsCommand implements Callable<Integer> {
                 throw new InputException("--var", "expected NAME=UNIT such as rho=kg/m^3, got '" + v + "'");
             }
             String name = v.substring(0, eq).trim();
-            vars.add(new DimensionalVariable(name, DimensionParser.parse(v.substring(eq + 1), "--var " + name)));
+            vars.add(
+                    DimensionalVariable.ofExponents(name, DimensionParser.parse(v.substring(eq + 1), "--var " + name)));
         }
         GroupAnalysis analysis = DimensionalAnalysis.analyse(vars, repeating);
         PrintWriter out = spec.commandLine().getOut();

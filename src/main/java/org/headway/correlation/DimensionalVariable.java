@@ -46,6 +46,27 @@ public record DimensionalVariable(String name, Map<Dimension, Integer> exponents
         return new DimensionalVariable(name, e);
     }
 
+    /**
+     * From exponents listed in the order of {@link Dimension} (mass, length, time, temperature,
+     * current, amount, luminous intensity), as a unit parser gives them.
+     *
+     * @param name variable name
+     * @param exponents one exponent per base dimension, at most {@code Dimension.values().length}
+     * @return the variable
+     */
+    public static DimensionalVariable ofExponents(String name, int[] exponents) {
+        Dimension[] dims = Dimension.values();
+        if (exponents.length > dims.length) {
+            throw new InputException(
+                    "variable " + name, "has " + exponents.length + " dimension exponents, at most " + dims.length);
+        }
+        EnumMap<Dimension, Integer> e = new EnumMap<>(Dimension.class);
+        for (int i = 0; i < exponents.length; i++) {
+            e.put(dims[i], exponents[i]);
+        }
+        return new DimensionalVariable(name, e);
+    }
+
     /** Exponent of one dimension (0 if absent). */
     public int exponent(Dimension d) {
         return exponents.getOrDefault(d, 0);

@@ -87,6 +87,15 @@ public final class SheetCharts {
 
     /** The friction chart with each segment's operating point. */
     public static JFreeChart friction(HeadLossSheet sheet) {
+        return friction(sheet, List.of(), List.of());
+    }
+
+    /**
+     * The friction chart with each segment's operating point, measured points with their
+     * uncertainty bars, and fitted correlations (solid over their fitted range, dashed beyond).
+     */
+    public static JFreeChart friction(
+            HeadLossSheet sheet, List<FrictionChart.RigPoint> rigPoints, List<FrictionChart.FittedCurve> fitted) {
         List<FrictionChart.MarkedPoint> points = new ArrayList<>();
         double maxRe = 1e8;
         double minRe = 1e3;
@@ -99,6 +108,12 @@ public final class SheetCharts {
                 minRe = Math.min(minRe, s.reynolds() / 3);
             }
         }
+        for (FrictionChart.RigPoint p : rigPoints) {
+            if (p.reynolds() > 0) {
+                maxRe = Math.max(maxRe, p.reynolds() * 2);
+                minRe = Math.min(minRe, p.reynolds() / 2);
+            }
+        }
         List<Double> roughness = new ArrayList<>(FrictionChart.Spec.USUAL_ROUGHNESS);
         return FrictionChart.build(new FrictionChart.Spec(
                 "Friction factor against Reynolds number (Colebrook–White curves; squares: segments by number)",
@@ -107,8 +122,8 @@ public final class SheetCharts {
                 Math.max(minRe, 500),
                 maxRe,
                 points,
-                List.of(),
-                List.of()));
+                rigPoints,
+                fitted));
     }
 
     /** Energy and hydraulic grade lines along the run. */

@@ -1,6 +1,7 @@
 package org.headway.app;
 
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
@@ -14,6 +15,8 @@ final class FakeDialogs implements Dialogs {
     final Deque<UnsavedAnswer> answers = new ArrayDeque<>();
     final List<String> errors = new ArrayList<>();
     int unsavedAsked;
+    final Deque<Boolean> restoreAnswers = new ArrayDeque<>();
+    final List<String> restoreAsked = new ArrayList<>();
 
     @Override
     public Optional<Path> chooseProjectToOpen(Path startFolder) {
@@ -43,5 +46,25 @@ final class FakeDialogs implements Dialogs {
     @Override
     public void showError(String heading, String message) {
         errors.add(heading + ": " + message);
+    }
+
+    @Override
+    public Optional<Path> chooseDataToImport(Path startFolder) {
+        return Optional.ofNullable(files.poll());
+    }
+
+    @Override
+    public boolean askRestoreAutosave(String projectName, Instant savedAt) {
+        restoreAsked.add(projectName);
+        Boolean a = restoreAnswers.poll();
+        if (a == null) {
+            throw new AssertionError("unexpected restore question for " + projectName);
+        }
+        return a;
+    }
+
+    @Override
+    public Optional<Path> chooseRigFile(Path startFolder) {
+        return Optional.ofNullable(files.poll());
     }
 }

@@ -116,7 +116,10 @@ class MainWindowUiTest {
     @Test
     void aLengthCanBeTypedIntoTheSegmentTable(FxRobot robot) throws Exception {
         fx.awaitResults();
-        robot.doubleClickOn("420 m");
+        // The table echoes the length in the chosen units without padding zeros ("420 m").
+        String shown = fx.editor.summaries().get(2).length();
+        assertEquals("420 m", shown);
+        robot.doubleClickOn(shown);
         WaitForAsyncUtils.waitForFxEvents();
         TextField cell = robot.lookup("#segment-table .text-field").queryAs(TextField.class);
         robot.interact(cell::selectAll);

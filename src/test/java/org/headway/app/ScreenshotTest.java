@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
 import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.image.WritableImage;
 import javafx.stage.Stage;
@@ -34,21 +35,53 @@ class ScreenshotTest {
         fx = new WindowFixture(stage);
     }
 
+    private void snap(FxRobot robot, int tab, String name) throws Exception {
+        robot.interact(() -> fx.window.tabs().getSelectionModel().select(tab));
+        WaitForAsyncUtils.waitForFxEvents();
+        Path file = FOLDER.resolve(name + ".png");
+        WritableImage[] image = new WritableImage[1];
+        robot.interact(() -> image[0] = stage.getScene().snapshot(null));
+        ImageIO.write(SwingFXUtils.fromFXImage(image[0], null), "png", file.toFile());
+        assertTrue(Files.size(file) > 10_000, file + " holds a drawn window");
+    }
+
     @Test
     void eachMainViewIsWritten(FxRobot robot) throws Exception {
         fx.awaitResults();
         Files.createDirectories(FOLDER);
         String[] names = {"results", "grade-lines", "system-curve", "friction-chart"};
-        for (int i = 0; i < MainWindow.TABS.size(); i++) {
-            int tab = i;
-            robot.interact(() -> fx.window.tabs().getSelectionModel().select(tab));
-            WaitForAsyncUtils.waitForFxEvents();
-            Path file = FOLDER.resolve(names[i] + ".png");
-            WritableImage[] image = new WritableImage[1];
-            robot.interact(() -> image[0] = stage.getScene().snapshot(null));
-            ImageIO.write(SwingFXUtils.fromFXImage(image[0], null), "png", file.toFile());
-            assertTrue(Files.size(file) > 10_000, file + " holds a drawn window");
+        for (int i = 0; i < names.length; i++) {
+            snap(robot, i, names[i]);
         }
+        // Invented rig readings, fitted with the usual forms; the chosen fit is used in the run.
+        Path csv = FittingUiTest.rigCsv(fx.dir);
+        robot.interact(() -> fx.window.tabs().getSelectionModel().select(4));
+        fx.dialogs.files.add(csv);
+        robot.clickOn("#fit-import");
+        WaitForAsyncUtils.waitFor(
+                20, TimeUnit.SECONDS, () -> fx.window.fitting().tableProperty().get() != null);
+        robot.clickOn("#fit-run");
+        WaitForAsyncUtils.waitFor(
+                30, TimeUnit.SECONDS, () -> fx.window.fitting().fits().size() > 3);
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> fx.window
+                .fitting()
+                .selectedProperty()
+                .set(fx.window.fitting().fits().stream()
+                        .filter(r -> r.form().equals("power"))
+                        .findFirst()
+                        .orElseThrow()));
+        fx.dialogs.files.add(fx.dir.resolve("rig-power-fit.json"));
+        robot.clickOn("#fit-save");
+        WaitForAsyncUtils.waitForFxEvents();
+        snap(robot, 4, "rig-fitting");
+        robot.clickOn("#fit-use");
+        WaitForAsyncUtils.waitForFxEvents();
+        snap(robot, 5, "pi-groups");
+        Thread.sleep(FxRecalculator.DEBOUNCE_MS * 2L);
+        fx.awaitResults();
+        snap(robot, 3, "friction-chart-rig-data");
+        robot.interact(() -> fx.editor.undo());
         // A trickle through the run: transitional flow raises cautions, so the panel opens.
         robot.interact(() -> {
             fx.window.tabs().getSelectionModel().select(0);

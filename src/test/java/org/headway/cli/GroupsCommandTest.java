@@ -9,6 +9,8 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.util.Map;
 import org.headway.caution.InputException;
 import org.headway.correlation.Dimension;
+import org.headway.correlation.DimensionalVariable;
+import org.headway.units.DimensionParser;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -98,7 +100,8 @@ class GroupsCommandTest {
                 "-; 0; 0; 0"
             })
     void unitsBecomeDimensionExponents(String unit, int mass, int length, int time) {
-        Map<Dimension, Integer> e = DimensionParser.parse(unit, "test");
+        Map<Dimension, Integer> e = DimensionalVariable.ofExponents("x", DimensionParser.parse(unit, "test"))
+                .exponents();
         assertEquals(mass, e.getOrDefault(Dimension.MASS, 0), unit);
         assertEquals(length, e.getOrDefault(Dimension.LENGTH, 0), unit);
         assertEquals(time, e.getOrDefault(Dimension.TIME, 0), unit);
@@ -108,8 +111,12 @@ class GroupsCommandTest {
     void temperatureAndAmountAreBaseDimensions() {
         assertEquals(
                 Map.of(Dimension.MASS, 1, Dimension.LENGTH, 2, Dimension.TIME, -2, Dimension.TEMPERATURE, -1),
-                DimensionParser.parse("J/K", "x"));
-        assertEquals(Map.of(Dimension.AMOUNT, 1, Dimension.LENGTH, -3), DimensionParser.parse("mol/L", "x"));
+                DimensionalVariable.ofExponents("x", DimensionParser.parse("J/K", "x"))
+                        .exponents());
+        assertEquals(
+                Map.of(Dimension.AMOUNT, 1, Dimension.LENGTH, -3),
+                DimensionalVariable.ofExponents("x", DimensionParser.parse("mol/L", "x"))
+                        .exponents());
     }
 
     @Test

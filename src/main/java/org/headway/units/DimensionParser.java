@@ -1,9 +1,7 @@
-package org.headway.cli;
+package org.headway.units;
 
-import java.util.EnumMap;
 import java.util.Map;
 import org.headway.caution.InputException;
-import org.headway.correlation.Dimension;
 
 /**
  * Reads a unit written as text (e.g. {@code kg/m^3}, {@code Pa*s}, {@code m/s}, {@code N·m},
@@ -14,8 +12,15 @@ import org.headway.correlation.Dimension;
  * {@code 1} or {@code -} for dimensionless. Prefixes Y Z E P T G M k h da d c m µ u n p f a z y.
  * Operators {@code *} {@code ·} {@code /} (left to right: {@code kg/m/s} is kg·m⁻¹·s⁻¹), {@code ^}
  * with an integer exponent (also {@code ^(-1)}, and the superscripts ⁻¹²³⁴), and parentheses.
+ *
+ * <p>Lives at the edge with the other unit text so that both the command line and the desktop app
+ * can read the units engineers type; it returns plain exponents so that {@code units} stays free of
+ * the correlation engine.
  */
-final class DimensionParser {
+public final class DimensionParser {
+
+    /** Number of SI base dimensions, the length of the array {@link #parse} returns. */
+    public static final int BASE_DIMENSIONS = 7;
 
     private static final Map<String, int[]> SYMBOLS = Map.ofEntries(
             // exponents of M, L, T, Θ, I, N, J
@@ -54,27 +59,22 @@ final class DimensionParser {
     /**
      * @param unit the unit text
      * @param where what to name in an error message, e.g. {@code --var rho}
-     * @return exponent of each base dimension (zero exponents left out)
+     * @return exponent of each SI base dimension in the order mass, length, time, temperature,
+     *     current, amount of substance, luminous intensity (the order of {@code
+     *     org.headway.correlation.Dimension})
      * @throws InputException naming the character position and the unknown symbol or bad syntax
      */
-    static Map<Dimension, Integer> parse(String unit, String where) {
+    public static int[] parse(String unit, String where) {
         String t = unit.trim();
-        Map<Dimension, Integer> out = new EnumMap<>(Dimension.class);
         if (t.isEmpty() || t.equals("1") || t.equals("-")) {
-            return out;
+            return new int[BASE_DIMENSIONS];
         }
         DimensionParser p = new DimensionParser(t, where);
         int[] e = p.product();
         if (p.pos < t.length()) {
             throw p.error("unexpected '" + t.charAt(p.pos) + "'");
         }
-        Dimension[] dims = Dimension.values();
-        for (int i = 0; i < dims.length; i++) {
-            if (e[i] != 0) {
-                out.put(dims[i], e[i]);
-            }
-        }
-        return out;
+        return e;
     }
 
     private int[] product() {
