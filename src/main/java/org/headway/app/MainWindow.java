@@ -39,8 +39,8 @@ import org.headway.units.UnitSystem;
 public final class MainWindow {
 
     /** Tab titles, also used by the screenshot test. */
-    static final List<String> TABS =
-            List.of("Results", "Grade lines", "System curve", "Friction chart", "Rig data fitting", "π groups");
+    static final List<String> TABS = List.of(
+            "Results", "Grade lines", "System curve", "Friction chart", "Rig data", "Rig data fitting", "π groups");
 
     private static final KeyCombination UNDO = KeyCombination.keyCombination("Shortcut+Z");
     private static final KeyCombination REDO = KeyCombination.keyCombination("Shortcut+Y");
@@ -56,6 +56,8 @@ public final class MainWindow {
     private final FittingModel fitting;
     private final PiGroupsModel piGroups;
     private final FittingView fittingView;
+    private final RigDataModel rigData;
+    private final RigDataView rigView;
     private final Label status = new Label();
     private final ProgressBar progress = new ProgressBar();
     private final Button cancel = new Button("Cancel export");
@@ -83,6 +85,8 @@ public final class MainWindow {
                 "friction-chart");
         fitting = new FittingModel(editor, dialogs);
         fittingView = new FittingView(fitting, results, dialogs, editor::startFolder);
+        rigData = new RigDataModel(dialogs, editor.unitSystemProperty());
+        rigView = new RigDataView(rigData, results, editor::startFolder);
         piGroups = new PiGroupsModel();
         ScrollPane piScroll = new ScrollPane(new PiGroupsView(piGroups));
         piScroll.setFitToWidth(true);
@@ -92,8 +96,9 @@ public final class MainWindow {
                         tab(TABS.get(1), grades),
                         tab(TABS.get(2), system),
                         tab(TABS.get(3), frictionView),
-                        tab(TABS.get(4), fittingView),
-                        tab(TABS.get(5), piScroll));
+                        tab(TABS.get(4), rigView),
+                        tab(TABS.get(5), fittingView),
+                        tab(TABS.get(6), piScroll));
         ((ScrollPane) tabs.getTabs().get(0).getContent()).setFitToWidth(true);
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         tabs.setId("views");
@@ -185,6 +190,14 @@ public final class MainWindow {
         return fittingView;
     }
 
+    RigDataModel rigData() {
+        return rigData;
+    }
+
+    RigDataView rigView() {
+        return rigView;
+    }
+
     PiGroupsModel piGroups() {
         return piGroups;
     }
@@ -214,9 +227,13 @@ public final class MainWindow {
         fillRecent.run();
         MenuItem save = item("Save", "Shortcut+S", editor::save);
         MenuItem saveAs = item("Save as…", "Shortcut+Shift+S", editor::saveAs);
+        MenuItem openRig = item("Open rig data…", "Shortcut+R", () -> {
+            tabs.getSelectionModel().select(TABS.indexOf("Rig data"));
+            rigData.chooseRigFile(editor.startFolder()).ifPresent(rigView::analyseInBackground);
+        });
         MenuItem exportSheet = item("Export head-loss sheet…", "Shortcut+E", this::exportSheet);
         MenuItem importData = item("Import measurements (CSV)…", "Shortcut+I", () -> {
-            tabs.getSelectionModel().select(4);
+            tabs.getSelectionModel().select(TABS.indexOf("Rig data fitting"));
             fitting.chooseImportFile().ifPresent(fittingView::importInBackground);
         });
         MenuItem quit = item("Close window", "Shortcut+W", () -> {
@@ -233,6 +250,7 @@ public final class MainWindow {
                         save,
                         saveAs,
                         new SeparatorMenuItem(),
+                        openRig,
                         importData,
                         exportSheet,
                         new SeparatorMenuItem(),

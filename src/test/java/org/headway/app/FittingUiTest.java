@@ -76,7 +76,7 @@ class FittingUiTest {
 
     /** Imports the data, fits a power law in the background task and waits for it. */
     static void importAndFitPower(WindowFixture fx, FxRobot robot, Path csv) throws Exception {
-        robot.interact(() -> fx.window.tabs().getSelectionModel().select(4));
+        robot.interact(() -> fx.window.tabs().getSelectionModel().select(5));
         fx.dialogs.files.add(csv);
         robot.clickOn("#fit-import");
         WaitForAsyncUtils.waitFor(
@@ -146,7 +146,7 @@ class FittingUiTest {
 
     @Test
     void thePiGroupsHelperExplainsDependentRepeatingVariables(FxRobot robot) throws Exception {
-        robot.interact(() -> fx.window.tabs().getSelectionModel().select(5));
+        robot.interact(() -> fx.window.tabs().getSelectionModel().select(6));
         WaitForAsyncUtils.waitForFxEvents();
         Label summary = robot.lookup("#pi-summary").queryAs(Label.class);
         assertEquals("6 variables, rank 3: 3 dimensionless groups", summary.getText());

@@ -53,9 +53,18 @@ class ScreenshotTest {
         for (int i = 0; i < names.length; i++) {
             snap(robot, i, names[i]);
         }
+        // The bundled invented demo rig, analysed against its comparison correlation.
+        Path rig = RigDataModelTest.copyDemoRig(fx.dir);
+        robot.interact(() -> fx.window.tabs().getSelectionModel().select(4));
+        fx.dialogs.files.add(rig);
+        robot.clickOn("#rig-open");
+        WaitForAsyncUtils.waitFor(
+                30, TimeUnit.SECONDS, () -> fx.window.rigData().reportProperty().get() != null);
+        WaitForAsyncUtils.waitForFxEvents();
+        snap(robot, 4, "rig-data");
         // Invented rig readings, fitted with the usual forms; the chosen fit is used in the run.
         Path csv = FittingUiTest.rigCsv(fx.dir);
-        robot.interact(() -> fx.window.tabs().getSelectionModel().select(4));
+        robot.interact(() -> fx.window.tabs().getSelectionModel().select(5));
         fx.dialogs.files.add(csv);
         robot.clickOn("#fit-import");
         WaitForAsyncUtils.waitFor(
@@ -74,10 +83,10 @@ class ScreenshotTest {
         fx.dialogs.files.add(fx.dir.resolve("rig-power-fit.json"));
         robot.clickOn("#fit-save");
         WaitForAsyncUtils.waitForFxEvents();
-        snap(robot, 4, "rig-fitting");
+        snap(robot, 5, "rig-fitting");
         robot.clickOn("#fit-use");
         WaitForAsyncUtils.waitForFxEvents();
-        snap(robot, 5, "pi-groups");
+        snap(robot, 6, "pi-groups");
         Thread.sleep(FxRecalculator.DEBOUNCE_MS * 2L);
         fx.awaitResults();
         snap(robot, 3, "friction-chart-rig-data");
