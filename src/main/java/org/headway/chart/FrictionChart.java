@@ -118,7 +118,17 @@ public final class FrictionChart {
         reAxis.setRange(spec.minReynolds(), spec.maxReynolds());
         reAxis.setSmallestValue(1e-300);
         LogarithmicAxis fAxis = new LogarithmicAxis("Darcy friction factor f");
-        fAxis.setRange(0.005, 0.11);
+        // The usual Moody range, widened so that no measured point (with its bar) falls off the chart.
+        double fLow = 0.005;
+        double fHigh = 0.11;
+        for (RigPoint p : spec.rigPoints()) {
+            if (p.frictionFactor() > 0 && Double.isFinite(p.frictionFactor())) {
+                fHigh = Math.max(fHigh, (p.frictionFactor() + p.frictionUncertainty()) * 1.1);
+                double low = p.frictionFactor() - p.frictionUncertainty();
+                fLow = Math.min(fLow, (low > 0 ? low : p.frictionFactor()) / 1.1);
+            }
+        }
+        fAxis.setRange(fLow, fHigh);
         fAxis.setStrictValuesFlag(false);
         fAxis.setAutoRangeNextLogFlag(false);
 
@@ -171,7 +181,7 @@ public final class FrictionChart {
         // Laminar line f = 64/Re up to the turbulent limit (dashed beyond the laminar limit).
         XYSeriesCollection laminar = new XYSeriesCollection();
         XYSeries lam = new XYSeries("laminar f = 64/Re", false, true);
-        double lamStart = Math.max(spec.minReynolds(), 64 / 0.11);
+        double lamStart = Math.max(spec.minReynolds(), 64 / fHigh);
         for (double re : logSpace(lamStart, FlowRegimes.TURBULENT_LIMIT)) {
             lam.add(re, 64 / re);
         }

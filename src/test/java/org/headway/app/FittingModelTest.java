@@ -223,6 +223,13 @@ class FittingModelTest {
                 .contains("rig data (±U)"));
         results.setFrictionOverlay("fitting", FrictionOverlay.NONE);
         assertEquals(rig.rigPoints(), results.frictionOverlay().rigPoints());
+        // A laminar point above the usual top of the chart (f = 0.11) widens the f axis to hold it and its bar.
+        results.setFrictionOverlay(
+                "rig", new FrictionOverlay(List.of(new FrictionChart.RigPoint(700, 0.12, 10, 0.02)), List.of()));
+        XYPlot plot = (XYPlot) results.frictionChartProperty().get().getPlot();
+        assertTrue(
+                plot.getRangeAxis().getUpperBound() >= 0.14,
+                "top " + plot.getRangeAxis().getUpperBound());
     }
 
     @Test
