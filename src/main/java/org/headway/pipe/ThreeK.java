@@ -1,7 +1,6 @@
 package org.headway.pipe;
 
 import java.util.List;
-import java.util.Locale;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 
@@ -106,21 +105,13 @@ public final class ThreeK implements Fitting {
     @Override
     public List<Caution> cautions(double reynolds, double innerDiameter) {
         FittingChecks.requireFlow(reynolds, innerDiameter);
-        double inches = innerDiameter / FittingChecks.METRES_PER_INCH;
-        if (inches < DIAMETER_LOW_INCHES || inches > DIAMETER_HIGH_INCHES) {
-            return List.of(Caution.warning(
-                    "fitting-size-outside-data",
-                    String.format(
-                            Locale.ROOT,
-                            "%s: inner diameter %.2f in lies outside %.2f–%.0f in covered by the 3-K data;"
-                                    + " K is extrapolated.",
-                            id,
-                            inches,
-                            DIAMETER_LOW_INCHES,
-                            DIAMETER_HIGH_INCHES),
-                    "Darby 2001 3-K method; size range assumed, no source"));
-        }
-        return List.of();
+        return FittingChecks.sizeCautions(
+                id,
+                innerDiameter,
+                DIAMETER_LOW_INCHES,
+                DIAMETER_HIGH_INCHES,
+                "the 3-K data",
+                "Darby 2001 3-K method; size range assumed, no source");
     }
 
     @Override

@@ -7,11 +7,9 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
@@ -93,18 +91,11 @@ public final class FittedCorrelationFile {
      * @throws IOException if the folder cannot be written
      */
     public static void save(Path file, FittedCorrelation fit) throws IOException {
-        Path absolute = file.toAbsolutePath();
-        Path folder = absolute.getParent();
-        Path temp = Files.createTempFile(folder, "." + absolute.getFileName(), ".tmp");
+        byte[] bytes = (MAPPER.writeValueAsString(toJson(fit)) + "\n").getBytes(StandardCharsets.UTF_8);
         try {
-            Files.writeString(temp, MAPPER.writeValueAsString(toJson(fit)) + "\n", StandardCharsets.UTF_8);
-            try {
-                Files.move(temp, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(temp, absolute, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(temp);
+            AtomicFiles.write(file, true, out -> out.write(bytes));
+        } catch (java.io.UncheckedIOException e) {
+            throw e.getCause();
         }
     }
 

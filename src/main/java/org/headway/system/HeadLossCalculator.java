@@ -52,17 +52,11 @@ public final class HeadLossCalculator {
         double lossesBeforePump = 0;
         double elevationAtPump = 0;
 
-        // The pump head equals what the run needs at this flow, so the grade line closes on the delivery head.
-        // Without a pump the grade line starts at the source head and a deficit shows as a positive total head.
-        double lossesTotal = headLossOnly(run, flow);
-        double pumpHead = staticHead + lossesTotal;
-
         for (int i = 0; i < run.segments().size(); i++) {
             Segment s = run.segments().get(i);
             if (i == run.pumpPosition() && run.pump().isPresent()) {
                 lossesBeforePump = friction + minor;
                 elevationAtPump = elevation;
-                energy += pumpHead;
             }
             List<Caution> segmentCautions = new ArrayList<>();
             double area = s.area();
@@ -172,6 +166,14 @@ public final class HeadLossCalculator {
                     "the head loss at " + flow + " m³/s overflows double precision; check flows, lengths and diameters"
                             + " and their units");
         }
+        if (run.pump().isPresent()) {
+            // The pump adds exactly the head the run needs at this flow, so downstream of it the grade lines
+            // close on the delivery head. Without a pump they start at the source head and a deficit shows as a
+            // positive total head.
+            for (int i = run.pumpPosition(); i < results.size(); i++) {
+                results.set(i, raised(results.get(i), totalHead));
+            }
+        }
         RunTotals totals = new RunTotals(
                 friction, minor, staticHead, totalHead, rho * g * (friction + minor), rho * g * totalHead);
 
@@ -270,6 +272,29 @@ public final class HeadLossCalculator {
      */
     public static double totalHead(PipeRun run, double flow) {
         return run.staticHead() + headLossOnly(run, flow);
+    }
+
+    private static SegmentResult raised(SegmentResult r, double head) {
+        return new SegmentResult(
+                r.name(),
+                r.velocity(),
+                r.reynolds(),
+                r.relativeRoughness(),
+                r.regime(),
+                r.frictionFactor(),
+                r.frictionMethod(),
+                r.frictionIterations(),
+                r.majorHeadLoss(),
+                r.totalLossCoefficient(),
+                r.minorHeadLoss(),
+                r.velocityHead(),
+                r.inletElevation(),
+                r.outletElevation(),
+                r.inletEnergyGrade() + head,
+                r.outletEnergyGrade() + head,
+                r.inletHydraulicGrade() + head,
+                r.outletHydraulicGrade() + head,
+                r.cautions());
     }
 
     private static FrictionResult evaluateFriction(PipeRun run, Segment s, double reynolds) {
