@@ -5,7 +5,6 @@ import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
-import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
@@ -55,7 +54,9 @@ public final class AtomicFiles {
         }
         Path temp = null;
         try {
-            Files.createDirectories(folder);
+            if (Files.notExists(folder)) {
+                Files.createDirectories(folder);
+            }
             temp = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".tmp");
             try (OutputStream out = Files.newOutputStream(temp, StandardOpenOption.WRITE)) {
                 writer.write(out);
@@ -70,8 +71,6 @@ public final class AtomicFiles {
                 Files.move(temp, absolute, StandardCopyOption.REPLACE_EXISTING);
             }
             temp = null;
-        } catch (FileAlreadyExistsException e) {
-            throw new InputException(target.toString(), "already exists", e);
         } catch (IOException e) {
             throw new UncheckedIOException("could not write " + target + ": " + e.getMessage(), e);
         } finally {
