@@ -69,7 +69,7 @@ public class SystemCurveBenchmark {
                 "",
                 List.of());
         method = FrictionMethods.byId("auto");
-        run = new PipeRun(
+        run = PipeRun.of(
                 "bench",
                 water,
                 method,

@@ -123,4 +123,29 @@ public final class AutoFriction implements FrictionCorrelation {
                 (reynolds - FlowRegimes.LAMINAR_LIMIT) / (FlowRegimes.TURBULENT_LIMIT - FlowRegimes.LAMINAR_LIMIT);
         return laminarEnd + share * (turbulentEnd - laminarEnd);
     }
+
+    /**
+     * df/dRe of the branch in use: −64/Re² below Re 2300, the slope of the straight-line blend
+     * between 2300 and 4000, Colebrook–White's implicit slope above. At the two limits the slope
+     * jumps (the blend is continuous, not smooth); the value of the branch that holds there is
+     * returned.
+     */
+    @Override
+    public double frictionFactorSlope(double reynolds, double relativeRoughness) {
+        FrictionChecks.requireValid(reynolds, relativeRoughness);
+        if (reynolds < FlowRegimes.LAMINAR_LIMIT) {
+            return LAMINAR.frictionFactorSlope(reynolds, relativeRoughness);
+        }
+        if (reynolds >= FlowRegimes.TURBULENT_LIMIT) {
+            return colebrook.frictionFactorSlope(reynolds, relativeRoughness);
+        }
+        double laminarEnd = HagenPoiseuille.LAMINAR_CONSTANT / FlowRegimes.LAMINAR_LIMIT;
+        double turbulentEnd = colebrook.frictionFactor(FlowRegimes.TURBULENT_LIMIT, relativeRoughness);
+        return (turbulentEnd - laminarEnd) / (FlowRegimes.TURBULENT_LIMIT - FlowRegimes.LAMINAR_LIMIT);
+    }
+
+    @Override
+    public boolean laminarAtLowReynolds() {
+        return true;
+    }
 }

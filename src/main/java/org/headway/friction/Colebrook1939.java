@@ -187,6 +187,23 @@ public final class Colebrook1939 implements FrictionCorrelation {
         return FrictionChecks.requireUsable(displayName(), 1.0 / (x * x), reynolds, relativeRoughness);
     }
 
+    /**
+     * df/dRe by implicit differentiation of F(x, Re) = x + 2 log₁₀(a + b x) = 0 with x = 1/√f,
+     * a = ε/(3.7 D), b = 2.51/Re: dx/dRe = −F_Re/F_x = c b x / (Re (u + c b)) with c = 2/ln 10 and
+     * u = a + b x, and df/dRe = −2 x⁻³ dx/dRe = −2 c b / (x² Re (u + c b)). Exact for the solved
+     * root (to the solver's 10⁻¹⁴).
+     */
+    @Override
+    public double frictionFactorSlope(double reynolds, double relativeRoughness) {
+        FrictionChecks.requireValid(reynolds, relativeRoughness);
+        requireSolvable(reynolds);
+        double x = inverseRoot(reynolds, relativeRoughness);
+        double b = VISCOUS_COEFFICIENT / reynolds;
+        double u = relativeRoughness / ROUGHNESS_DIVISOR + b * x;
+        double cb = LN_COEFFICIENT * b;
+        return -2.0 * cb / (x * x * reynolds * (u + cb));
+    }
+
     private static void requireSolvable(double reynolds) {
         if (reynolds < MIN_SOLVABLE_REYNOLDS) {
             throw new InputException(

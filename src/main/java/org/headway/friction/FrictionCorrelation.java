@@ -47,4 +47,33 @@ public interface FrictionCorrelation {
     default double frictionFactor(double reynolds, double relativeRoughness) {
         return evaluate(reynolds, relativeRoughness).frictionFactor();
     }
+
+    /**
+     * Slope of the friction factor with Reynolds number, df/dRe, at fixed ε/D. Used for the exact
+     * derivative of a pipe's head loss with flow (network solvers). The default is a fourth-order
+     * centred difference with step 10⁻⁴ Re (truncation about 10⁻¹⁶, round-off about 10⁻¹² relative);
+     * correlations with a closed form override it.
+     *
+     * @param reynolds Reynolds number (ratio), finite and positive
+     * @param relativeRoughness ε/D (ratio), 0 ≤ ε/D &lt; 1
+     * @return df/dRe (per unit Reynolds number)
+     */
+    default double frictionFactorSlope(double reynolds, double relativeRoughness) {
+        double h = 1e-4 * reynolds;
+        return (-frictionFactor(reynolds + 2 * h, relativeRoughness)
+                        + 8 * frictionFactor(reynolds + h, relativeRoughness)
+                        - 8 * frictionFactor(reynolds - h, relativeRoughness)
+                        + frictionFactor(reynolds - 2 * h, relativeRoughness))
+                / (12 * h);
+    }
+
+    /**
+     * Whether the method follows the laminar law f = 64/Re at small Reynolds numbers, so that a
+     * pipe's head loss is proportional to flow as the flow tends to zero (and its slope there is
+     * the Hagen–Poiseuille value). Turbulent-only methods return false: their loss tends to zero
+     * with a zero slope.
+     */
+    default boolean laminarAtLowReynolds() {
+        return false;
+    }
 }

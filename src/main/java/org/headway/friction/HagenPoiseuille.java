@@ -63,4 +63,16 @@ public final class HagenPoiseuille implements FrictionCorrelation {
         FrictionChecks.requireValid(reynolds, relativeRoughness);
         return FrictionChecks.requireUsable(displayName(), LAMINAR_CONSTANT / reynolds, reynolds, relativeRoughness);
     }
+
+    /** df/dRe = −64/Re². */
+    @Override
+    public double frictionFactorSlope(double reynolds, double relativeRoughness) {
+        FrictionChecks.requireValid(reynolds, relativeRoughness);
+        return -LAMINAR_CONSTANT / (reynolds * reynolds);
+    }
+
+    @Override
+    public boolean laminarAtLowReynolds() {
+        return true;
+    }
 }

@@ -52,6 +52,9 @@ public final class Catalog {
 
     static final List<String> MATERIAL_COLUMNS = List.of(
             "id", "name", "roughness_mm", "roughness_low_mm", "roughness_high_mm", "condition", "size_table", "source");
+    /** Optional material columns: {@code hw_c}, the Hazen–Williams coefficient C of the material. */
+    static final List<String> MATERIAL_OPTIONAL_COLUMNS = List.of("hw_c", "hw_c_source");
+
     static final List<String> SIZE_COLUMNS = List.of("nominal", "schedule", "od_mm", "wall_mm");
     static final List<String> FITTING_COLUMNS =
             List.of("id", "description", "method", "k", "k1", "k_inf", "k_d", "source");
@@ -392,7 +395,7 @@ public final class Catalog {
 
         void add(String fileName, String label, String text) {
             if (fileName.equals(MATERIALS_FILE)) {
-                addMaterials(CatalogFile.parse(label, text, MATERIAL_COLUMNS));
+                addMaterials(CatalogFile.parse(label, text, MATERIAL_COLUMNS, MATERIAL_OPTIONAL_COLUMNS));
             } else if (fileName.equals(FITTINGS_FILE)) {
                 addFittings(CatalogFile.parse(label, text, FITTING_COLUMNS));
             } else {
@@ -448,11 +451,30 @@ public final class Catalog {
                         high,
                         condition,
                         file.optionalText(row, "size_table"),
-                        file.text(row, "source"));
+                        file.text(row, "source"),
+                        hazenWilliams(file, row));
                 materials.remove(id);
                 materials.put(id, material);
                 materialOrigins.put(id, file.where(row, "size_table"));
             }
+        }
+
+        private static java.util.Optional<HazenWilliamsCoefficient> hazenWilliams(
+                CatalogFile file, CatalogFile.Row row) {
+            if (file.isBlank(row, "hw_c")) {
+                return java.util.Optional.empty();
+            }
+            double c = file.positive(row, "hw_c");
+            if (c < HazenWilliamsCoefficient.MIN || c > HazenWilliamsCoefficient.MAX) {
+                throw file.error(
+                        row,
+                        "hw_c",
+                        "Hazen–Williams C " + row.cells().get("hw_c") + " is outside " + HazenWilliamsCoefficient.MIN
+                                + "–" + HazenWilliamsCoefficient.MAX + "; published values lie within it");
+            }
+            String source = file.optionalText(row, "hw_c_source");
+            return java.util.Optional.of(
+                    new HazenWilliamsCoefficient(c, source.isEmpty() ? file.text(row, "source") : source));
         }
 
         private void addSizes(String table, CatalogFile file) {

@@ -56,6 +56,19 @@ final class CatalogFile {
      * @param columns columns the header must hold, in any order, and no others
      */
     static CatalogFile parse(String label, String text, List<String> columns) {
+        return parse(label, text, columns, List.of());
+    }
+
+    /**
+     * Parses a catalog file whose header may also hold some known optional columns (a newer
+     * column such as {@code hw_c} must not break a user's older file).
+     *
+     * @param label file name as it should appear in error messages
+     * @param text whole file content
+     * @param columns columns the header must hold, in any order
+     * @param optionalColumns columns the header may also hold
+     */
+    static CatalogFile parse(String label, String text, List<String> columns, List<String> optionalColumns) {
         String[] lines = text.split("\r?\n", -1);
         String source = null;
         List<String> header = null;
@@ -81,7 +94,7 @@ final class CatalogFile {
             if (header == null) {
                 header = fields;
                 headerLine = lineNumber;
-                checkHeader(label, lineNumber, header, columns);
+                checkHeader(label, lineNumber, header, columns, optionalColumns);
                 continue;
             }
             if (fields.size() != header.size()) {
@@ -132,7 +145,8 @@ final class CatalogFile {
         }
     }
 
-    private static void checkHeader(String label, int lineNumber, List<String> header, List<String> columns) {
+    private static void checkHeader(
+            String label, int lineNumber, List<String> header, List<String> columns, List<String> optionalColumns) {
         for (String column : columns) {
             if (!header.contains(column)) {
                 throw new InputException(
@@ -143,10 +157,13 @@ final class CatalogFile {
         }
         for (int i = 0; i < header.size(); i++) {
             String name = header.get(i);
-            if (!columns.contains(name)) {
+            if (!columns.contains(name) && !optionalColumns.contains(name)) {
                 throw new InputException(
                         label + " line " + lineNumber + ", column " + (i + 1),
-                        "unknown column '" + name + "'; expected " + String.join(",", columns));
+                        "unknown column '" + name + "'; expected " + String.join(",", columns)
+                                + (optionalColumns.isEmpty()
+                                        ? ""
+                                        : " and optionally " + String.join(",", optionalColumns)));
             }
             if (header.indexOf(name) != i) {
                 throw new InputException(

@@ -42,4 +42,32 @@ public interface Fitting {
     default List<Caution> cautions(double reynolds, double innerDiameter) {
         return List.of();
     }
+
+    /**
+     * Slope of K with Reynolds number at fixed bore, dK/dRe, for the exact derivative of a pipe's
+     * head loss with flow. The default is a fourth-order centred difference with step 10⁻⁴ Re;
+     * the catalog methods override it with their closed form.
+     *
+     * @param reynolds Reynolds number in the pipe (ratio), positive
+     * @param innerDiameter pipe inner diameter (m), positive
+     * @return dK/dRe (per unit Reynolds number)
+     */
+    default double lossCoefficientSlope(double reynolds, double innerDiameter) {
+        double h = 1e-4 * reynolds;
+        return (-lossCoefficient(reynolds + 2 * h, innerDiameter)
+                        + 8 * lossCoefficient(reynolds + h, innerDiameter)
+                        - 8 * lossCoefficient(reynolds - h, innerDiameter)
+                        + lossCoefficient(reynolds - 2 * h, innerDiameter))
+                / (12 * h);
+    }
+
+    /**
+     * The part of K that varies as 1/Re (K₁ of the 2-K and 3-K methods), which makes the fitting's
+     * loss proportional to flow as the flow tends to zero; 0 for a fixed K.
+     *
+     * @return K₁ (ratio)
+     */
+    default double laminarCoefficient() {
+        return 0;
+    }
 }

@@ -84,4 +84,9 @@ public final class FixedK implements Fitting {
     public String toString() {
         return id + " (fixed K = " + coefficient + ")";
     }
+
+    @Override
+    public double lossCoefficientSlope(double reynolds, double innerDiameter) {
+        return 0;
+    }
 }

@@ -1,5 +1,7 @@
 package org.headway.pipe;
 
+import java.util.Optional;
+
 /**
  * A pipe material and condition with its absolute roughness.
  *
@@ -12,6 +14,7 @@ package org.headway.pipe;
  * @param sizeTable id of the size table this material's nominal sizes come from (e.g. {@code
  *     asme-b36.10m}), empty if none
  * @param source publication the roughness comes from, or "from memory"/"common practice, no source"
+ * @param hazenWilliams the material's Hazen–Williams C with its source, when the catalog gives one
  */
 public record Material(
         String id,
@@ -21,4 +24,10 @@ public record Material(
         double roughnessHigh,
         String condition,
         String sizeTable,
-        String source) {}
+        String source,
+        Optional<HazenWilliamsCoefficient> hazenWilliams) {
+
+    public Material {
+        hazenWilliams = hazenWilliams == null ? Optional.empty() : hazenWilliams;
+    }
+}

@@ -119,4 +119,11 @@ public final class ThreeK implements Fitting {
         return id + " (3-K: K1 = " + laminarCoefficient + ", Ki = " + turbulentCoefficient + ", Kd = " + sizeCoefficient
                 + ")";
     }
+
+    /** dK/dRe = −K₁/Re². */
+    @Override
+    public double lossCoefficientSlope(double reynolds, double innerDiameter) {
+        FittingChecks.requireFlow(reynolds, innerDiameter);
+        return -laminarCoefficient / (reynolds * reynolds);
+    }
 }

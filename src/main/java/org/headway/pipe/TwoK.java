@@ -99,4 +99,11 @@ public final class TwoK implements Fitting {
     public String toString() {
         return id + " (2-K: K1 = " + laminarCoefficient + ", Kinf = " + turbulentCoefficient + ")";
     }
+
+    /** dK/dRe = −K₁/Re². */
+    @Override
+    public double lossCoefficientSlope(double reynolds, double innerDiameter) {
+        FittingChecks.requireFlow(reynolds, innerDiameter);
+        return -laminarCoefficient / (reynolds * reynolds);
+    }
 }

@@ -108,7 +108,7 @@ public final class ProjectResolver {
         final Optional<PumpCurve> pumpCurve = pump;
         PipeRun run = attempt(
                 "",
-                () -> new PipeRun(
+                () -> PipeRun.of(
                         p.title(),
                         fluid,
                         friction,

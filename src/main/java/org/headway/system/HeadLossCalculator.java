@@ -3,23 +3,31 @@ package org.headway.system;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.OptionalDouble;
 import java.util.Set;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 import org.headway.fluid.FluidState;
-import org.headway.friction.FlowRegime;
-import org.headway.friction.FrictionResult;
 
 /**
- * Solve mode 1, head loss for a given flow: Darcy–Weisbach h_f = f (L/D) V²/(2g) per segment, minor
- * losses h_m = ΣK V²/(2g) with each fitting's K evaluated at the segment's Reynolds number and bore,
- * grade lines along the run, totals, NPSH available and cautions.
+ * Solve mode 1, head loss for a given flow along a series run of elements: each pipe by
+ * Darcy–Weisbach h_f = f (L/D) V²/(2g) (or Hazen–Williams) with its fittings' losses
+ * h_m = ΣK V²/(2g) at its own Reynolds number and bore; each valve, component and diameter change
+ * by its own law; grade lines and gauge pressures along the run; totals, NPSH available and
+ * cautions.
+ *
+ * <p>Component losses (valves by K_v, rated components, diameter changes) are counted with the
+ * fittings as minor (local) losses in the totals.
  *
  * <p>Accuracy: exact arithmetic of the formulas above in double precision; the friction factor's
  * accuracy is that of the chosen correlation (Colebrook solved to 1e-14 relative).
  */
 public final class HeadLossCalculator {
+
+    /** Basis of the column-separation check. */
+    static final String VAPOUR_BASIS =
+            "a liquid cannot sustain an absolute pressure below its vapour pressure; common practice, no source";
 
     private HeadLossCalculator() {}
 
@@ -28,17 +36,20 @@ public final class HeadLossCalculator {
      *
      * @param run the run
      * @param flow volumetric flow (m³/s), ≥ 0
-     * @return per-segment results, totals, NPSH available and cautions
+     * @return per-element results, grade lines and pressures, totals, NPSH available and cautions
      */
     public static RunResult solve(PipeRun run, double flow) {
         InputException.requireNonNegative("flow", flow);
         FluidState fluid = run.fluid();
+        FlowContext context = run.context();
         double rho = fluid.density();
-        double mu = fluid.dynamicViscosity();
         double g = Gravity.STANDARD;
         DesignLimits limits = run.limits();
+        List<Element> elements = run.elements();
+        double[] adjacentVelocityHead = adjacentVelocityHeads(elements, flow);
 
-        List<SegmentResult> results = new ArrayList<>(run.segments().size());
+        List<SegmentResult> results = new ArrayList<>();
+        List<ElementProfile> profiles = new ArrayList<>(elements.size());
         Set<Caution> cautions = new LinkedHashSet<>();
         for (Caution c : fluid.cautions()) {
             cautions.add(c);
@@ -51,112 +62,93 @@ public final class HeadLossCalculator {
         double staticHead = run.staticHead();
         double lossesBeforePump = 0;
         double elevationAtPump = 0;
+        int pumpIndex = -1;
 
-        for (int i = 0; i < run.segments().size(); i++) {
-            Segment s = run.segments().get(i);
-            if (i == run.pumpPosition() && run.pump().isPresent()) {
-                lossesBeforePump = friction + minor;
-                elevationAtPump = elevation;
-            }
-            List<Caution> segmentCautions = new ArrayList<>();
-            double area = s.area();
-            double velocity = flow / area;
-            double velocityHead = velocity * velocity / (2 * g);
-            double reynolds = rho * velocity * s.innerDiameter() / mu;
-            double f;
-            String method;
-            int iterations;
-            FlowRegime regime;
-            double kTotal = s.extraLossCoefficient();
-            if (flow == 0) {
-                f = 0;
-                method = "none (no flow)";
-                iterations = 0;
-                regime = FlowRegime.LAMINAR;
-            } else {
-                FrictionResult fr = evaluateFriction(run, s, reynolds);
-                f = fr.frictionFactor();
-                method = fr.method();
-                iterations = fr.iterations();
-                regime = fr.regime();
-                for (Caution c : fr.cautions()) {
-                    segmentCautions.add(c.about(s.name()));
-                }
-                kTotal += fittingK(s, reynolds);
-                for (FittingUse use : s.fittings()) {
-                    for (Caution c : use.fitting().cautions(reynolds, s.innerDiameter())) {
-                        segmentCautions.add(c.about(s.name()));
-                    }
-                }
-            }
-            double major = s.length() == 0 ? 0 : f * s.length() / s.innerDiameter() * velocityHead;
-            double minorLoss = kTotal * velocityHead;
+        for (int i = 0; i < elements.size(); i++) {
+            Element element = elements.get(i);
             double inletEnergy = energy;
             double inletElevation = elevation;
-            energy -= major + minorLoss;
-            elevation += s.elevationChange();
-            friction += major;
-            minor += minorLoss;
-
-            if (flow > 0) {
-                if (velocity > limits.maximumVelocity()) {
-                    segmentCautions.add(Caution.warning(
-                                    "velocity-high",
-                                    String.format(
-                                            "velocity %.3g m/s is above the usual design maximum of %.3g m/s (erosion,"
-                                                    + " noise, surge)",
-                                            velocity, limits.maximumVelocity()),
-                                    DesignLimits.USUAL_BASIS)
-                            .about(s.name()));
-                } else if (velocity < limits.minimumVelocity()) {
-                    segmentCautions.add(Caution.note(
-                                    "velocity-low",
-                                    String.format(
-                                            "velocity %.3g m/s is below the usual design minimum of %.3g m/s (settling,"
-                                                    + " trapped air, oversized pipe)",
-                                            velocity, limits.minimumVelocity()),
-                                    DesignLimits.USUAL_BASIS)
-                            .about(s.name()));
+            double inletVelocityHead;
+            double outletVelocityHead;
+            ElementResult elementResult;
+            if (element instanceof Segment s) {
+                PipeFlow p = s.flowAt(flow, context);
+                List<Caution> segmentCautions = new ArrayList<>(p.cautions());
+                segmentCautions.addAll(designCautions(s, p, flow, limits));
+                energy -= p.majorHeadLoss() + p.minorHeadLoss();
+                elevation += s.elevationChange();
+                friction += p.majorHeadLoss();
+                minor += p.minorHeadLoss();
+                inletVelocityHead = p.velocityHead();
+                outletVelocityHead = p.velocityHead();
+                results.add(new SegmentResult(
+                        s.id(),
+                        s.name(),
+                        p.velocity(),
+                        p.reynolds(),
+                        s.relativeRoughness(),
+                        p.regime(),
+                        p.frictionFactor(),
+                        p.frictionMethod(),
+                        p.frictionIterations(),
+                        p.majorHeadLoss(),
+                        p.totalLossCoefficient(),
+                        p.minorHeadLoss(),
+                        p.velocityHead(),
+                        inletElevation,
+                        elevation,
+                        inletEnergy,
+                        energy,
+                        inletEnergy - p.velocityHead(),
+                        energy - p.velocityHead(),
+                        segmentCautions));
+                cautions.addAll(segmentCautions);
+                String law = s.hazenWilliams().isPresent()
+                        ? String.format(
+                                Locale.ROOT,
+                                "Hazen–Williams C %.4g",
+                                s.hazenWilliams().get().value())
+                        : "Darcy–Weisbach, f by " + p.frictionMethod();
+                double loss = p.headLoss();
+                elementResult = new ElementResult(s.id(), s.kind(), flow, loss, rho * g * loss, law, segmentCautions);
+            } else if (element instanceof PumpElement pump) {
+                pumpIndex = i;
+                lossesBeforePump = friction + minor;
+                elevationAtPump = elevation;
+                inletVelocityHead = adjacentVelocityHead[i];
+                outletVelocityHead = adjacentVelocityHead[i];
+                // Filled in once the head the run needs is known (below).
+                elementResult = pump.evaluate(flow, context);
+            } else {
+                elementResult = element.evaluate(flow, context);
+                double loss = elementResult.headLoss();
+                energy -= loss;
+                elevation += element.rise();
+                minor += loss;
+                cautions.addAll(elementResult.cautions());
+                if (element instanceof DiameterChange change) {
+                    inletVelocityHead = velocityHead(flow, change.inletDiameter());
+                    outletVelocityHead = velocityHead(flow, change.outletDiameter());
+                } else {
+                    inletVelocityHead = adjacentVelocityHead[i];
+                    outletVelocityHead = adjacentVelocityHead[i];
                 }
             }
-            if ("aged".equalsIgnoreCase(s.pipeCondition()) || "corroded".equalsIgnoreCase(s.pipeCondition())) {
-                segmentCautions.add(Caution.note(
-                                "aged-roughness",
-                                "roughness of aged pipe varies widely with water chemistry and service; the band"
-                                        + " shows its range",
-                                "common practice, no source")
-                        .about(s.name()));
-            }
-            if (s.length() == 0) {
-                segmentCautions.add(Caution.note(
-                                "zero-length", "segment has zero length; only its fittings contribute", "input check")
-                        .about(s.name()));
-            }
-            results.add(new SegmentResult(
-                    s.name(),
-                    velocity,
-                    reynolds,
-                    s.relativeRoughness(),
-                    regime,
-                    f,
-                    method,
-                    iterations,
-                    major,
-                    kTotal,
-                    minorLoss,
-                    velocityHead,
+            profiles.add(new ElementProfile(
+                    element.id(),
+                    element.kind(),
+                    element.name(),
+                    elementResult,
                     inletElevation,
                     elevation,
                     inletEnergy,
                     energy,
-                    inletEnergy - velocityHead,
-                    energy - velocityHead,
-                    segmentCautions));
-            cautions.addAll(segmentCautions);
-        }
-        if (run.pump().isPresent() && run.pumpPosition() == run.segments().size()) {
-            lossesBeforePump = friction + minor;
-            elevationAtPump = elevation;
+                    inletEnergy - inletVelocityHead,
+                    energy - outletVelocityHead,
+                    0,
+                    0,
+                    OptionalDouble.empty(),
+                    List.of()));
         }
 
         double totalHead = staticHead + friction + minor;
@@ -166,14 +158,41 @@ public final class HeadLossCalculator {
                     "the head loss at " + flow + " m³/s overflows double precision; check flows, lengths and diameters"
                             + " and their units");
         }
-        if (run.pump().isPresent()) {
+        if (pumpIndex >= 0) {
             // The pump adds exactly the head the run needs at this flow, so downstream of it the grade lines
             // close on the delivery head. Without a pump they start at the source head and a deficit shows as a
             // positive total head.
-            for (int i = run.pumpPosition(); i < results.size(); i++) {
+            int firstRaisedPipe = run.pumpPosition();
+            for (int i = firstRaisedPipe; i < results.size(); i++) {
                 results.set(i, raised(results.get(i), totalHead));
             }
+            for (int i = pumpIndex; i < profiles.size(); i++) {
+                profiles.set(i, raised(profiles.get(i), totalHead, i == pumpIndex));
+            }
+            PumpElement pump = (PumpElement) elements.get(pumpIndex);
+            ElementResult curve = profiles.get(pumpIndex).result();
+            ElementResult supplied = new ElementResult(
+                    curve.id(),
+                    curve.kind(),
+                    flow,
+                    -totalHead,
+                    -rho * g * totalHead,
+                    String.format(
+                            Locale.ROOT,
+                            "supplies the %.4g m the run needs at this flow (its curve gives %.4g m; the operating"
+                                    + " point is solved separately)",
+                            totalHead,
+                            pump.head(flow)),
+                    curve.cautions());
+            cautions.addAll(curve.cautions());
+            profiles.set(pumpIndex, withResult(profiles.get(pumpIndex), supplied));
         }
+        List<Caution> pressureCautions = new ArrayList<>();
+        for (int i = 0; i < profiles.size(); i++) {
+            profiles.set(i, withPressures(profiles.get(i), elements.get(i), run, pressureCautions));
+        }
+        cautions.addAll(pressureCautions);
+
         RunTotals totals = new RunTotals(
                 friction, minor, staticHead, totalHead, rho * g * (friction + minor), rho * g * totalHead);
 
@@ -181,17 +200,20 @@ public final class HeadLossCalculator {
             cautions.add(Caution.note(
                     "minor-losses-dominate",
                     String.format(
+                            Locale.ROOT,
                             "fitting losses (%.3g m) exceed pipe friction (%.3g m); published K values scatter"
                                     + " more than friction factors, so the total is less certain",
-                            minor, friction),
+                            minor,
+                            friction),
                     "common practice, no source"));
         }
         // Round-off of a balanced gravity run leaves ~1e-14 m; only a real deficit is worth a caution.
         double resolution = 1e-9 * Math.max(1.0, Math.abs(staticHead) + friction + minor);
-        if (run.pump().isEmpty() && totalHead > resolution && flow > 0) {
+        if (pumpIndex < 0 && totalHead > resolution && flow > 0) {
             cautions.add(Caution.note(
                     "head-required",
                     String.format(
+                            Locale.ROOT,
                             "no pump is given for this run; at this flow it needs %.3g m of head that the ends alone"
                                     + " do not supply",
                             totalHead),
@@ -199,7 +221,8 @@ public final class HeadLossCalculator {
         }
 
         OptionalDouble npsh = OptionalDouble.empty();
-        if (run.pump().isPresent()) {
+        if (pumpIndex >= 0) {
+            PumpElement pump = (PumpElement) elements.get(pumpIndex);
             if (fluid.vapourPressure().isPresent()) {
                 // NPSHa = (p_abs/ρg + V²/2g) − p_v/ρg at the pump suction; energy grade minus elevation is the gauge
                 // pressure head plus the velocity head.
@@ -208,18 +231,21 @@ public final class HeadLossCalculator {
                         - elevationAtPump
                         + (run.atmosphericPressure() - fluid.vapourPressure().getAsDouble()) / (rho * g);
                 npsh = OptionalDouble.of(value);
-                PumpCurve pump = run.pump().get();
-                double required = pump.npshRequired().orElse(0.0);
+                OptionalDouble requiredGiven = pump.npshRequired();
+                double required = requiredGiven.orElse(0.0);
                 double margin = limits.npshMargin();
                 if (value < required + margin) {
-                    String what = pump.npshRequired().isPresent()
-                            ? String.format("NPSH required %.3g m plus a margin of %.3g m", required, margin)
-                            : String.format("a margin of %.3g m (NPSH required unknown)", margin);
+                    String what = requiredGiven.isPresent()
+                            ? String.format(
+                                    Locale.ROOT, "NPSH required %.3g m plus a margin of %.3g m", required, margin)
+                            : String.format(Locale.ROOT, "a margin of %.3g m (NPSH required unknown)", margin);
                     cautions.add(Caution.serious(
                             "cavitation-risk",
                             String.format(
+                                    Locale.ROOT,
                                     "NPSH available at the pump inlet is %.3g m, less than %s; the pump may cavitate",
-                                    value, what),
+                                    value,
+                                    what),
                             "margin: common practice, no source; NPSH definition per ISO 17769-1"));
                 }
             } else {
@@ -230,12 +256,187 @@ public final class HeadLossCalculator {
             }
         }
         cautions.add(Caution.GENERAL_REVIEW);
-        return new RunResult(flow, results, totals, npsh, new ArrayList<>(cautions));
+        return new RunResult(flow, results, profiles, totals, npsh, new ArrayList<>(cautions));
+    }
+
+    private static List<Caution> designCautions(Segment s, PipeFlow p, double flow, DesignLimits limits) {
+        List<Caution> out = new ArrayList<>();
+        double velocity = p.velocity();
+        if (flow > 0) {
+            if (velocity > limits.maximumVelocity()) {
+                out.add(Caution.warning(
+                                "velocity-high",
+                                String.format(
+                                        Locale.ROOT,
+                                        "velocity %.3g m/s is above the usual design maximum of %.3g m/s (erosion,"
+                                                + " noise, surge)",
+                                        velocity,
+                                        limits.maximumVelocity()),
+                                DesignLimits.USUAL_BASIS)
+                        .about(s.name()));
+            } else if (velocity < limits.minimumVelocity()) {
+                out.add(Caution.note(
+                                "velocity-low",
+                                String.format(
+                                        Locale.ROOT,
+                                        "velocity %.3g m/s is below the usual design minimum of %.3g m/s (settling,"
+                                                + " trapped air, oversized pipe)",
+                                        velocity,
+                                        limits.minimumVelocity()),
+                                DesignLimits.USUAL_BASIS)
+                        .about(s.name()));
+            }
+        }
+        if ("aged".equalsIgnoreCase(s.pipeCondition()) || "corroded".equalsIgnoreCase(s.pipeCondition())) {
+            out.add(Caution.note(
+                            "aged-roughness",
+                            "roughness of aged pipe varies widely with water chemistry and service; the band"
+                                    + " shows its range",
+                            "common practice, no source")
+                    .about(s.name()));
+        }
+        if (s.length() == 0) {
+            out.add(Caution.note("zero-length", "segment has zero length; only its fittings contribute", "input check")
+                    .about(s.name()));
+        }
+        return out;
+    }
+
+    /** For each element, the velocity head of the nearest pipe upstream, or downstream when none is upstream. */
+    private static double[] adjacentVelocityHeads(List<Element> elements, double flow) {
+        double[] out = new double[elements.size()];
+        double last = Double.NaN;
+        for (int i = 0; i < elements.size(); i++) {
+            if (elements.get(i) instanceof Segment s) {
+                last = velocityHead(flow, s.innerDiameter());
+            } else if (elements.get(i) instanceof DiameterChange d) {
+                last = velocityHead(flow, d.outletDiameter());
+            }
+            out[i] = last;
+        }
+        double next = 0;
+        for (int i = elements.size() - 1; i >= 0; i--) {
+            if (elements.get(i) instanceof Segment s) {
+                next = velocityHead(flow, s.innerDiameter());
+            } else if (elements.get(i) instanceof DiameterChange d) {
+                next = velocityHead(flow, d.inletDiameter());
+            }
+            if (Double.isNaN(out[i])) {
+                out[i] = next;
+            }
+        }
+        return out;
+    }
+
+    private static double velocityHead(double flow, double diameter) {
+        double velocity = flow / (Math.PI * diameter * diameter / 4.0);
+        return velocity * velocity / (2 * Gravity.STANDARD);
+    }
+
+    private static ElementProfile withPressures(ElementProfile p, Element element, PipeRun run, List<Caution> out) {
+        double rho = run.fluid().density();
+        double g = Gravity.STANDARD;
+        double inlet = rho * g * (p.inletHydraulicGrade() - p.inletElevation());
+        double outlet = rho * g * (p.outletHydraulicGrade() - p.outletElevation());
+        OptionalDouble high = OptionalDouble.empty();
+        if (element instanceof Segment s && s.highPoint().isPresent()) {
+            Segment.HighPoint point = s.highPoint().get();
+            double share = s.length() == 0 ? 0 : point.distance() / s.length();
+            // Friction and fittings taken as spread evenly along the pipe: the grade falls linearly.
+            double grade = p.inletHydraulicGrade() + share * (p.outletHydraulicGrade() - p.inletHydraulicGrade());
+            high = OptionalDouble.of(rho * g * (grade - (p.inletElevation() + point.rise())));
+        }
+        List<Caution> cautions = new ArrayList<>();
+        double atmosphere = run.atmosphericPressure();
+        double vapour = run.fluid().vapourPressure().orElse(0.0);
+        String vapourWords = run.fluid().vapourPressure().isPresent() ? "the vapour pressure" : "zero (absolute)";
+        String[] places = {"inlet", "outlet", "high point"};
+        double[] gauges = {inlet, outlet, high.orElse(Double.NaN)};
+        boolean separated = false;
+        for (int k = 0; k < 3 && !separated; k++) {
+            if (Double.isNaN(gauges[k])) {
+                continue;
+            }
+            double absolute = gauges[k] + atmosphere;
+            if (absolute < vapour) {
+                separated = true;
+                cautions.add(Caution.serious(
+                                "below-vapour-pressure",
+                                String.format(
+                                        Locale.ROOT,
+                                        "at its %s the absolute pressure would be %.1f kPa, below %s (%.2f kPa): the"
+                                                + " hydraulic grade lies %.2f m below the pipe and the liquid column"
+                                                + " separates, so the run cannot carry this flow as computed — raise"
+                                                + " the grade line or lower the pipe",
+                                        places[k],
+                                        absolute / 1000.0,
+                                        vapourWords,
+                                        vapour / 1000.0,
+                                        -gauges[k] / (rho * g)),
+                                VAPOUR_BASIS)
+                        .about(p.id()));
+            }
+        }
+        if (!separated) {
+            double lowest = Math.min(inlet, Math.min(outlet, high.orElse(Double.POSITIVE_INFINITY)));
+            if (lowest < 0 && !(element instanceof PumpElement)) {
+                cautions.add(Caution.warning(
+                                "sub-atmospheric",
+                                String.format(
+                                        Locale.ROOT,
+                                        "gauge pressure falls to %.1f kPa (below atmospheric): joints may draw in air"
+                                                + " and an air valve here would admit air rather than release it",
+                                        lowest / 1000.0),
+                                "common practice, no source")
+                        .about(p.id()));
+            }
+        }
+        PressureLimits limits = run.pressureLimits();
+        double lowest = Math.min(inlet, Math.min(outlet, high.orElse(Double.POSITIVE_INFINITY)));
+        double highest = Math.max(inlet, outlet);
+        if (lowest < limits.minimumGauge()) {
+            cautions.add(Caution.warning(
+                            "pressure-below-minimum",
+                            String.format(
+                                    Locale.ROOT,
+                                    "gauge pressure %.1f kPa is below the minimum of %.1f kPa set for this run",
+                                    lowest / 1000.0,
+                                    limits.minimumGauge() / 1000.0),
+                            "project pressure limits")
+                    .about(p.id()));
+        }
+        if (highest > limits.maximumGauge()) {
+            cautions.add(Caution.warning(
+                            "pressure-above-maximum",
+                            String.format(
+                                    Locale.ROOT,
+                                    "gauge pressure %.1f kPa is above the maximum of %.1f kPa set for this run",
+                                    highest / 1000.0,
+                                    limits.maximumGauge() / 1000.0),
+                            "project pressure limits")
+                    .about(p.id()));
+        }
+        out.addAll(cautions);
+        return new ElementProfile(
+                p.id(),
+                p.kind(),
+                p.name(),
+                p.result(),
+                p.inletElevation(),
+                p.outletElevation(),
+                p.inletEnergyGrade(),
+                p.outletEnergyGrade(),
+                p.inletHydraulicGrade(),
+                p.outletHydraulicGrade(),
+                inlet,
+                outlet,
+                high,
+                cautions);
     }
 
     /**
      * Friction plus minor loss of the whole run at one flow, without grade lines or cautions (the
-     * hot path of system curves, root finding and sizing).
+     * hot path of system curves, root finding and sizing). A pump's head is not counted.
      *
      * @param run the run
      * @param flow volumetric flow (m³/s), ≥ 0
@@ -248,17 +449,14 @@ public final class HeadLossCalculator {
         if (flow == 0) {
             return 0;
         }
-        double rho = run.fluid().density();
-        double mu = run.fluid().dynamicViscosity();
+        FlowContext context = run.context();
         double total = 0;
-        for (Segment s : run.segments()) {
-            double velocity = flow / s.area();
-            double velocityHead = velocity * velocity / (2 * Gravity.STANDARD);
-            double reynolds = rho * velocity * s.innerDiameter() / mu;
-            double f = frictionFactorOnly(run, s, reynolds);
-            double k = s.extraLossCoefficient() + fittingK(s, reynolds);
-            double major = s.length() == 0 ? 0 : f * s.length() / s.innerDiameter() * velocityHead;
-            total += major + k * velocityHead;
+        for (Element e : run.elements()) {
+            if (e instanceof Segment s) {
+                total += s.headLossMagnitude(flow, context);
+            } else if (!(e instanceof PumpElement)) {
+                total += e.headLoss(flow, context);
+            }
         }
         return total;
     }
@@ -276,6 +474,7 @@ public final class HeadLossCalculator {
 
     private static SegmentResult raised(SegmentResult r, double head) {
         return new SegmentResult(
+                r.id(),
                 r.name(),
                 r.velocity(),
                 r.reynolds(),
@@ -297,27 +496,40 @@ public final class HeadLossCalculator {
                 r.cautions());
     }
 
-    private static FrictionResult evaluateFriction(PipeRun run, Segment s, double reynolds) {
-        try {
-            return run.friction().evaluate(reynolds, s.relativeRoughness());
-        } catch (InputException e) {
-            throw e.at("segment " + s.name() + ", ");
-        }
+    private static ElementProfile raised(ElementProfile p, double head, boolean outletOnly) {
+        double inletRaise = outletOnly ? 0 : head;
+        return new ElementProfile(
+                p.id(),
+                p.kind(),
+                p.name(),
+                p.result(),
+                p.inletElevation(),
+                p.outletElevation(),
+                p.inletEnergyGrade() + inletRaise,
+                p.outletEnergyGrade() + head,
+                p.inletHydraulicGrade() + inletRaise,
+                p.outletHydraulicGrade() + head,
+                p.inletPressure(),
+                p.outletPressure(),
+                p.highPointPressure(),
+                p.cautions());
     }
 
-    private static double frictionFactorOnly(PipeRun run, Segment s, double reynolds) {
-        try {
-            return run.friction().frictionFactor(reynolds, s.relativeRoughness());
-        } catch (InputException e) {
-            throw e.at("segment " + s.name() + ", ");
-        }
-    }
-
-    private static double fittingK(Segment s, double reynolds) {
-        double k = 0;
-        for (FittingUse use : s.fittings()) {
-            k += use.count() * use.fitting().lossCoefficient(reynolds, s.innerDiameter());
-        }
-        return k;
+    private static ElementProfile withResult(ElementProfile p, ElementResult result) {
+        return new ElementProfile(
+                p.id(),
+                p.kind(),
+                p.name(),
+                result,
+                p.inletElevation(),
+                p.outletElevation(),
+                p.inletEnergyGrade(),
+                p.outletEnergyGrade(),
+                p.inletHydraulicGrade(),
+                p.outletHydraulicGrade(),
+                p.inletPressure(),
+                p.outletPressure(),
+                p.highPointPressure(),
+                p.cautions());
     }
 }

@@ -2,13 +2,29 @@ package org.headway.system;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
+import java.util.Optional;
+import org.headway.caution.Caution;
 import org.headway.caution.InputException;
+import org.headway.friction.FlowRegime;
+import org.headway.friction.FlowRegimes;
+import org.headway.friction.FrictionCorrelation;
+import org.headway.friction.FrictionResult;
+import org.headway.pipe.HazenWilliamsCoefficient;
 
 /**
- * One straight run of a single pipe size with its fittings, from inlet to outlet. Build with
- * {@link #builder(String)}.
+ * A pipe element: one straight run of a single pipe size with its fittings, from inlet to outlet.
+ * Build with {@link #builder(String)}.
  *
+ * <p>Law: h = (f L/D + ΣK) V|V|/(2 g) by Darcy–Weisbach with f from the system's friction method
+ * or the pipe's own, each fitting's K evaluated at the pipe's own Reynolds number and bore; or,
+ * where the pipe is given a Hazen–Williams C, h_f from V = 0.849 C R^0.63 S^0.54 (SI, R = D/4 the
+ * hydraulic radius, S the friction slope; Williams &amp; Hazen, Hydraulic Tables, 1905, in its usual
+ * SI form, e.g. Fair, Geyer &amp; Okun's Water and Wastewater Engineering, Shammas &amp; Wang 2011,
+ * eq. 5.34 in US units), i.e. h_f ∝ L Q^(1/0.54) / (C^(1/0.54) D^(2.63/0.54)).
+ *
+ * @param id stable id, unique in its system (the name when none is given)
  * @param name the name the engineer gave it, shown on every result
  * @param length pipe length (m), ≥ 0
  * @param innerDiameter inner diameter D (m), > 0
@@ -21,8 +37,12 @@ import org.headway.caution.InputException;
  * @param fittings fittings and valves with counts
  * @param extraLossCoefficient an explicit additional K (ratio), ≥ 0
  * @param elevationChange outlet elevation minus inlet elevation (m)
+ * @param frictionOverride the pipe's own Darcy friction method, when it is not the system's
+ * @param hazenWilliams the Hazen–Williams C this pipe is computed with, when it uses that method
+ * @param highPoint a point along the pipe higher than both its ends, when there is one
  */
 public record Segment(
+        String id,
         String name,
         double length,
         double innerDiameter,
@@ -34,7 +54,42 @@ public record Segment(
         String pipeCondition,
         List<FittingUse> fittings,
         double extraLossCoefficient,
-        double elevationChange) {
+        double elevationChange,
+        Optional<FrictionCorrelation> frictionOverride,
+        Optional<HazenWilliamsCoefficient> hazenWilliams,
+        Optional<HighPoint> highPoint)
+        implements Element {
+
+    /** Hazen–Williams SI coefficient k of V = k C R^0.63 S^0.54 (Williams &amp; Hazen 1905, SI form). */
+    public static final double HAZEN_WILLIAMS_SI = 0.849;
+
+    /** Hazen–Williams exponent of the hydraulic radius. */
+    public static final double HAZEN_WILLIAMS_RADIUS_EXPONENT = 0.63;
+
+    /** Hazen–Williams exponent of the friction slope. */
+    public static final double HAZEN_WILLIAMS_SLOPE_EXPONENT = 0.54;
+
+    /** Smallest bore Hazen–Williams is usually applied to (m): 2 in (common practice, no source). */
+    public static final double HAZEN_WILLIAMS_MIN_DIAMETER = 0.05;
+
+    /** Ordinary water temperatures Hazen–Williams was fitted to (K): about 5–25 °C (from memory). */
+    public static final double HAZEN_WILLIAMS_MIN_TEMPERATURE = 278.15;
+
+    /** Upper end of the ordinary temperature range (K). */
+    public static final double HAZEN_WILLIAMS_MAX_TEMPERATURE = 298.15;
+
+    /**
+     * A point along a pipe above both its ends (a main over a ridge).
+     *
+     * @param distance distance from the inlet along the pipe (m), 0 ≤ distance ≤ length
+     * @param rise elevation of the point above the pipe's inlet (m)
+     */
+    public record HighPoint(double distance, double rise) {
+        public HighPoint {
+            InputException.requireNonNegative("high point distance", distance);
+            InputException.requireFinite("high point rise", rise);
+        }
+    }
 
     /** Longest segment accepted (m): 10,000 km, far beyond any real run; guards against typos like 1e308. */
     public static final double MAX_LENGTH = 1e7;
@@ -47,6 +102,15 @@ public record Segment(
 
     public Segment {
         Objects.requireNonNull(name, "name");
+        id = id == null || id.isBlank() ? name : id;
+        frictionOverride = frictionOverride == null ? Optional.empty() : frictionOverride;
+        hazenWilliams = hazenWilliams == null ? Optional.empty() : hazenWilliams;
+        highPoint = highPoint == null ? Optional.empty() : highPoint;
+        if (highPoint.isPresent() && highPoint.get().distance() > length) {
+            throw new InputException(
+                    "high point distance",
+                    "the high point lies " + highPoint.get().distance() + " m along a pipe of " + length + " m");
+        }
         InputException.requireNonNegative("length", length);
         InputException.requirePositive("inner diameter", innerDiameter);
         requireAtMost("length", length, MAX_LENGTH, "m");
@@ -102,6 +166,7 @@ public record Segment(
     /** A copy with another bore and roughness (used by sizing). */
     public Segment withPipe(double newInnerDiameter, double newRoughness, double low, double high, String description) {
         return new Segment(
+                id,
                 name,
                 length,
                 newInnerDiameter,
@@ -113,12 +178,16 @@ public record Segment(
                 pipeCondition,
                 fittings,
                 extraLossCoefficient,
-                elevationChange);
+                elevationChange,
+                frictionOverride,
+                hazenWilliams,
+                highPoint);
     }
 
     /** A copy with another length (used to check that loss scales with length). */
     public Segment withLength(double newLength) {
         return new Segment(
+                id,
                 name,
                 newLength,
                 innerDiameter,
@@ -130,12 +199,16 @@ public record Segment(
                 pipeCondition,
                 fittings,
                 extraLossCoefficient,
-                elevationChange);
+                elevationChange,
+                frictionOverride,
+                hazenWilliams,
+                highPoint);
     }
 
     /** A copy with the roughness moved to another value inside or at the ends of its range. */
     public Segment withRoughness(double newRoughness) {
         return new Segment(
+                id,
                 name,
                 length,
                 innerDiameter,
@@ -147,7 +220,318 @@ public record Segment(
                 pipeCondition,
                 fittings,
                 extraLossCoefficient,
-                elevationChange);
+                elevationChange,
+                frictionOverride,
+                hazenWilliams,
+                highPoint);
+    }
+
+    @Override
+    public String kind() {
+        return "pipe";
+    }
+
+    @Override
+    public double rise() {
+        return elevationChange;
+    }
+
+    /** A copy with another id (used when a format-1 project names two segments alike). */
+    public Segment withId(String newId) {
+        return new Segment(
+                newId,
+                name,
+                length,
+                innerDiameter,
+                roughness,
+                roughnessLow,
+                roughnessHigh,
+                roughnessSource,
+                pipeDescription,
+                pipeCondition,
+                fittings,
+                extraLossCoefficient,
+                elevationChange,
+                frictionOverride,
+                hazenWilliams,
+                highPoint);
+    }
+
+    /** The friction method this pipe uses with a system default. */
+    public FrictionCorrelation frictionMethod(FrictionCorrelation systemDefault) {
+        return frictionOverride.orElse(systemDefault);
+    }
+
+    /**
+     * The pipe's hydraulics at a flow magnitude, with the cautions of its friction method and
+     * fittings (the design-limit cautions are the run's business).
+     *
+     * @param flow volumetric flow magnitude (m³/s), ≥ 0
+     * @param context fluid and default friction method
+     * @return velocity, Reynolds number, friction factor, losses
+     */
+    public PipeFlow flowAt(double flow, FlowContext context) {
+        double rho = context.fluid().density();
+        double mu = context.fluid().dynamicViscosity();
+        double g = Gravity.STANDARD;
+        List<Caution> cautions = new ArrayList<>();
+        double velocity = flow / area();
+        double velocityHead = velocity * velocity / (2 * g);
+        double reynolds = rho * velocity * innerDiameter / mu;
+        double kTotal = extraLossCoefficient;
+        if (flow == 0) {
+            return new PipeFlow(
+                    velocity,
+                    reynolds,
+                    0,
+                    "none (no flow)",
+                    0,
+                    FlowRegime.LAMINAR,
+                    0,
+                    kTotal,
+                    0,
+                    velocityHead,
+                    cautions);
+        }
+        double f;
+        String method;
+        int iterations;
+        FlowRegime regime;
+        double major;
+        if (hazenWilliams.isPresent()) {
+            major = hazenWilliamsLoss(flow);
+            f = length == 0 ? 0 : major * innerDiameter / (length * velocityHead);
+            method = "hazen-williams";
+            iterations = 0;
+            regime = FlowRegimes.of(reynolds);
+            hazenWilliamsCautions(context, velocity, reynolds, major, cautions);
+        } else {
+            FrictionResult fr = evaluateFriction(context, reynolds);
+            f = fr.frictionFactor();
+            method = fr.method();
+            iterations = fr.iterations();
+            regime = fr.regime();
+            for (Caution c : fr.cautions()) {
+                cautions.add(c.about(name));
+            }
+            major = length == 0 ? 0 : f * length / innerDiameter * velocityHead;
+        }
+        kTotal += fittingK(reynolds);
+        for (FittingUse use : fittings) {
+            for (Caution c : use.fitting().cautions(reynolds, innerDiameter)) {
+                cautions.add(c.about(name));
+            }
+        }
+        double minor = kTotal * velocityHead;
+        return new PipeFlow(
+                velocity, reynolds, f, method, iterations, regime, major, kTotal, minor, velocityHead, cautions);
+    }
+
+    /**
+     * Friction plus fitting loss at a flow magnitude without results or cautions (the hot path of
+     * system curves and root finding). Equal to {@code flowAt(flow, context).headLoss()}.
+     *
+     * @param flow volumetric flow magnitude (m³/s), ≥ 0
+     * @param context fluid and default friction method
+     * @return head loss (m)
+     */
+    public double headLossMagnitude(double flow, FlowContext context) {
+        if (flow == 0) {
+            return 0;
+        }
+        double rho = context.fluid().density();
+        double mu = context.fluid().dynamicViscosity();
+        double velocity = flow / area();
+        double velocityHead = velocity * velocity / (2 * Gravity.STANDARD);
+        double reynolds = rho * velocity * innerDiameter / mu;
+        double major;
+        if (hazenWilliams.isPresent()) {
+            major = hazenWilliamsLoss(flow);
+        } else {
+            double f = frictionFactorOnly(context, reynolds);
+            major = length == 0 ? 0 : f * length / innerDiameter * velocityHead;
+        }
+        double k = extraLossCoefficient + fittingK(reynolds);
+        return major + k * velocityHead;
+    }
+
+    @Override
+    public double headLoss(double flow, FlowContext context) {
+        Element.requireFiniteFlow(this, flow);
+        return Math.signum(flow) * headLossMagnitude(Math.abs(flow), context);
+    }
+
+    /**
+     * dh/dQ, exact: for Q ≠ 0, with q = |Q|, h_v = V²/(2 g), h = (f L/D + K) h_v,
+     * dh/dQ = (f L/D + K) 2 h_v/q + (f′ L/D + K′) Re h_v/q, where f′ = df/dRe and K′ = dK/dRe (Re ∝ q);
+     * by Hazen–Williams the friction part is h_f/(0.54 q). At Q = 0 the limit: 32 μ L/(ρ g D² A)
+     * for a method with a laminar branch, plus Σ K₁ μ/(2 g ρ D A) for the 1/Re part of 2-K and 3-K
+     * fittings; zero for the quadratic parts.
+     */
+    @Override
+    public double headLossSlope(double flow, FlowContext context) {
+        Element.requireFiniteFlow(this, flow);
+        double rho = context.fluid().density();
+        double mu = context.fluid().dynamicViscosity();
+        double g = Gravity.STANDARD;
+        double area = area();
+        double q = Math.abs(flow);
+        if (q == 0) {
+            double slope = 0;
+            if (hazenWilliams.isEmpty() && frictionMethod(context.friction()).laminarAtLowReynolds()) {
+                slope += 32.0 * mu * length / (rho * g * innerDiameter * innerDiameter * area);
+            }
+            double k1 = 0;
+            for (FittingUse use : fittings) {
+                k1 += use.count() * use.fitting().laminarCoefficient();
+            }
+            return slope + k1 * mu / (2.0 * g * rho * innerDiameter * area);
+        }
+        double velocity = q / area;
+        double velocityHead = velocity * velocity / (2 * g);
+        double reynolds = rho * velocity * innerDiameter / mu;
+        double k = extraLossCoefficient + fittingK(reynolds);
+        double kSlope = 0;
+        for (FittingUse use : fittings) {
+            kSlope += use.count() * use.fitting().lossCoefficientSlope(reynolds, innerDiameter);
+        }
+        double slope = k * 2.0 * velocityHead / q + kSlope * reynolds * velocityHead / q;
+        if (hazenWilliams.isPresent()) {
+            slope += hazenWilliamsLoss(q) / (HAZEN_WILLIAMS_SLOPE_EXPONENT * q);
+        } else if (length > 0) {
+            FrictionCorrelation method = frictionMethod(context.friction());
+            double f = frictionFactorOnly(context, reynolds);
+            double fSlope;
+            try {
+                fSlope = method.frictionFactorSlope(reynolds, relativeRoughness());
+            } catch (InputException e) {
+                throw e.at("pipe " + id + ", ");
+            }
+            double lengthRatio = length / innerDiameter;
+            slope += f * lengthRatio * 2.0 * velocityHead / q + fSlope * lengthRatio * reynolds * velocityHead / q;
+        }
+        return slope;
+    }
+
+    @Override
+    public ElementResult evaluate(double flow, FlowContext context) {
+        Element.requireFiniteFlow(this, flow);
+        PipeFlow p = flowAt(Math.abs(flow), context);
+        double h = Math.signum(flow) * p.headLoss();
+        String law = hazenWilliams.isPresent()
+                ? String.format(
+                        Locale.ROOT,
+                        "Hazen–Williams C %.4g",
+                        hazenWilliams.get().value())
+                : "Darcy–Weisbach, f by " + p.frictionMethod();
+        return new ElementResult(
+                id, kind(), flow, h, context.fluid().density() * Gravity.STANDARD * h, law, p.cautions());
+    }
+
+    /**
+     * Hazen–Williams friction loss h_f = L S with S = (V/(k C R^0.63))^(1/0.54), R = D/4.
+     *
+     * @param flow flow magnitude (m³/s), ≥ 0
+     * @return friction loss (m)
+     */
+    double hazenWilliamsLoss(double flow) {
+        if (length == 0 || flow == 0) {
+            return 0;
+        }
+        double c = hazenWilliams.orElseThrow().value();
+        double velocity = flow / area();
+        double radius = innerDiameter / 4.0;
+        double slope = Math.pow(
+                velocity / (HAZEN_WILLIAMS_SI * c * Math.pow(radius, HAZEN_WILLIAMS_RADIUS_EXPONENT)),
+                1.0 / HAZEN_WILLIAMS_SLOPE_EXPONENT);
+        return length * slope;
+    }
+
+    private void hazenWilliamsCautions(
+            FlowContext context, double velocity, double reynolds, double major, List<Caution> cautions) {
+        String basis = "Hazen–Williams is an empirical law for water in ordinary pipes; common practice, no source";
+        String fluidId = context.fluid().fluid();
+        if (fluidId == null || !fluidId.toLowerCase(Locale.ROOT).startsWith("water")) {
+            cautions.add(Caution.warning(
+                            "hazen-williams-fluid",
+                            "Hazen–Williams was fitted to water; for " + fluidId
+                                    + " its loss may be badly wrong — use Darcy–Weisbach",
+                            basis)
+                    .about(name));
+        }
+        double t = context.fluid().temperature();
+        if (Double.isFinite(t) && (t < HAZEN_WILLIAMS_MIN_TEMPERATURE - 5 || t > HAZEN_WILLIAMS_MAX_TEMPERATURE + 5)) {
+            cautions.add(Caution.warning(
+                            "hazen-williams-temperature",
+                            String.format(
+                                    Locale.ROOT,
+                                    "water at %.1f °C is far from the ordinary temperatures Hazen–Williams was fitted"
+                                            + " to; C does not follow the change of viscosity — use Darcy–Weisbach",
+                                    t - 273.15),
+                            basis)
+                    .about(name));
+        }
+        if (innerDiameter < HAZEN_WILLIAMS_MIN_DIAMETER) {
+            cautions.add(Caution.warning(
+                            "hazen-williams-small-bore",
+                            String.format(
+                                    Locale.ROOT,
+                                    "bore %.1f mm is below the 50 mm Hazen–Williams is usually applied down to",
+                                    innerDiameter * 1000),
+                            basis)
+                    .about(name));
+        }
+        if (reynolds < FlowRegimes.TURBULENT_LIMIT) {
+            cautions.add(Caution.warning(
+                            "hazen-williams-not-turbulent",
+                            String.format(
+                                    Locale.ROOT,
+                                    "Re = %.0f is not fully turbulent; Hazen–Williams has no laminar or transitional"
+                                            + " branch — use Darcy–Weisbach",
+                                    reynolds),
+                            basis)
+                    .about(name));
+        }
+        if (length > 0 && reynolds >= org.headway.friction.Colebrook1939.MIN_SOLVABLE_REYNOLDS) {
+            double fDarcy = org.headway.friction.Colebrook1939.solver().frictionFactor(reynolds, relativeRoughness());
+            double darcy = fDarcy * length / innerDiameter * velocity * velocity / (2 * Gravity.STANDARD);
+            cautions.add(Caution.note(
+                            "hazen-williams-vs-darcy",
+                            String.format(
+                                    Locale.ROOT,
+                                    "Hazen–Williams friction loss %.4g m; Darcy–Weisbach with Colebrook–White at"
+                                            + " ε = %.3g mm gives %.4g m (%+.1f %%)",
+                                    major,
+                                    roughness * 1000,
+                                    darcy,
+                                    darcy > 0 ? (darcy / major - 1) * 100 : 0.0),
+                            "comparison at the same flow, bore and roughness")
+                    .about(name));
+        }
+    }
+
+    private FrictionResult evaluateFriction(FlowContext context, double reynolds) {
+        try {
+            return frictionMethod(context.friction()).evaluate(reynolds, relativeRoughness());
+        } catch (InputException e) {
+            throw e.at("segment " + name + ", ");
+        }
+    }
+
+    private double frictionFactorOnly(FlowContext context, double reynolds) {
+        try {
+            return frictionMethod(context.friction()).frictionFactor(reynolds, relativeRoughness());
+        } catch (InputException e) {
+            throw e.at("segment " + name + ", ");
+        }
+    }
+
+    private double fittingK(double reynolds) {
+        double k = 0;
+        for (FittingUse use : fittings) {
+            k += use.count() * use.fitting().lossCoefficient(reynolds, innerDiameter);
+        }
+        return k;
     }
 
     /** Starts a segment description. */
@@ -169,6 +553,10 @@ public record Segment(
         private final List<FittingUse> fittings = new ArrayList<>();
         private double extraLossCoefficient;
         private double elevationChange;
+        private String id;
+        private Optional<FrictionCorrelation> frictionOverride = Optional.empty();
+        private Optional<HazenWilliamsCoefficient> hazenWilliams = Optional.empty();
+        private Optional<HighPoint> highPoint = Optional.empty();
 
         private Builder(String name) {
             this.name = name;
@@ -232,6 +620,33 @@ public record Segment(
             return this;
         }
 
+        /** @param value stable id (the name when not given) */
+        public Builder id(String value) {
+            id = value;
+            return this;
+        }
+
+        /** @param method the pipe's own Darcy friction method */
+        public Builder friction(FrictionCorrelation method) {
+            frictionOverride = Optional.of(method);
+            return this;
+        }
+
+        /** @param coefficient compute this pipe by Hazen–Williams with this C */
+        public Builder hazenWilliams(HazenWilliamsCoefficient coefficient) {
+            hazenWilliams = Optional.of(coefficient);
+            return this;
+        }
+
+        /**
+         * @param distance distance of the high point from the inlet (m)
+         * @param rise its elevation above the inlet (m)
+         */
+        public Builder highPoint(double distance, double rise) {
+            highPoint = Optional.of(new HighPoint(distance, rise));
+            return this;
+        }
+
         public Segment build() {
             if (Double.isNaN(innerDiameter)) {
                 throw new InputException(name, "no inner diameter given");
@@ -239,6 +654,7 @@ public record Segment(
             double low = Double.isNaN(roughnessLow) ? roughness : roughnessLow;
             double high = Double.isNaN(roughnessHigh) ? roughness : roughnessHigh;
             return new Segment(
+                    id,
                     name,
                     length,
                     innerDiameter,
@@ -250,7 +666,10 @@ public record Segment(
                     pipeCondition,
                     fittings,
                     extraLossCoefficient,
-                    elevationChange);
+                    elevationChange,
+                    frictionOverride,
+                    hazenWilliams,
+                    highPoint);
         }
     }
 }

@@ -7,6 +7,7 @@ import org.headway.friction.FlowRegime;
 /**
  * Hydraulics of one segment at one flow.
  *
+ * @param id the pipe's element id
  * @param name segment name
  * @param velocity mean velocity Q/A (m/s)
  * @param reynolds Reynolds number ρVD/μ (ratio)
@@ -28,6 +29,7 @@ import org.headway.friction.FlowRegime;
  * @param cautions cautions for this segment, each naming it
  */
 public record SegmentResult(
+        String id,
         String name,
         double velocity,
         double reynolds,

@@ -138,7 +138,7 @@ class HeadLossCalculatorTest {
                 "p",
                 List.of(new PumpCurve.Point(0, 40), new PumpCurve.Point(0.01, 36), new PumpCurve.Point(0.02, 25)),
                 java.util.OptionalDouble.of(2.0));
-        PipeRun run = new PipeRun(
+        PipeRun run = PipeRun.of(
                 "t",
                 WATER,
                 RunFixtures.method("auto"),
@@ -177,7 +177,7 @@ class HeadLossCalculatorTest {
                 "p",
                 List.of(new PumpCurve.Point(0, 30), new PumpCurve.Point(0.004, 27), new PumpCurve.Point(0.008, 20)),
                 java.util.OptionalDouble.of(3.0));
-        PipeRun run = new PipeRun(
+        PipeRun run = PipeRun.of(
                 "t",
                 RunFixtures.liquid(983, 4.7e-4, 31_000),
                 RunFixtures.method("auto"),

@@ -33,7 +33,7 @@ final class RunFixtures {
     }
 
     static PipeRun run(FluidState fluid, String method, List<Segment> segments) {
-        return new PipeRun(
+        return PipeRun.of(
                 "test",
                 fluid,
                 method(method),

@@ -32,7 +32,7 @@ class SolveModesTest {
                 .elevationChange(-6)
                 .extraLossCoefficient(1.0)
                 .build();
-        return new PipeRun(
+        return PipeRun.of(
                 "gravity",
                 fluid,
                 RunFixtures.method(method),
@@ -80,7 +80,7 @@ class SolveModesTest {
     @Test
     void reverseAndNoFlowAreReported() {
         PipeRun uphill = gravityRun(WATER, 0, "auto")
-                .withSegments(List.of(Segment.builder("up")
+                .withElements(List.of(Segment.builder("up")
                         .length(10)
                         .bore(0.1, 0)
                         .elevationChange(5)
@@ -158,7 +158,7 @@ class SolveModesTest {
                         new PumpCurve.Point(0.03, 18)),
                 OptionalDouble.empty());
         PipeRun base = gravityRun(WATER, 0, "auto");
-        PipeRun run = new PipeRun(
+        PipeRun run = PipeRun.of(
                 "p",
                 WATER,
                 base.friction(),
@@ -184,7 +184,7 @@ class SolveModesTest {
                 List.of(new PumpCurve.Point(0, 10), new PumpCurve.Point(0.01, 9), new PumpCurve.Point(0.02, 6)),
                 OptionalDouble.empty());
         PipeRun base = gravityRun(WATER, 0, "auto");
-        PipeRun run = new PipeRun(
+        PipeRun run = PipeRun.of(
                 "p",
                 WATER,
                 base.friction(),
@@ -221,7 +221,7 @@ class SolveModesTest {
                 .bore(0.1, 1.5e-4)
                 .roughnessRange(4.5e-5, 1e-3)
                 .build();
-        PipeRun run = gravityRun(WATER, 0, "auto").withSegments(List.of(aged)).withDesignFlow(0.01);
+        PipeRun run = gravityRun(WATER, 0, "auto").withElements(List.of(aged)).withDesignFlow(0.01);
         UncertaintyBand band = UncertaintyBand.evaluate(run);
         assertTrue(band.headLoss().low() < band.headLoss().nominal());
         assertTrue(band.headLoss().high() > band.headLoss().nominal());
@@ -233,7 +233,7 @@ class SolveModesTest {
         FluidState oil = RunFixtures.liquid(870, 0.02, 100);
         Segment s = Segment.builder("mid").length(100).bore(0.08, 0).build();
         double flow = 3000 * 0.02 / (870 * 0.08) * Math.PI * 0.08 * 0.08 / 4;
-        PipeRun run = gravityRun(oil, 0, "auto").withSegments(List.of(s)).withDesignFlow(flow);
+        PipeRun run = gravityRun(oil, 0, "auto").withElements(List.of(s)).withDesignFlow(flow);
         UncertaintyBand band = UncertaintyBand.evaluate(run);
         double u = run.flowUncertainty(); // the high end is also at Q(1 + u)
         double colebrook = org.headway.friction.FrictionMethods.byId("colebrook")
