@@ -75,7 +75,7 @@ public final class ProjectEditor {
 
     /** A new project: water at 20 °C through one 10 m length of 2-inch steel pipe. */
     public static Project blankProject() {
-        return new Project(
+        return Project.of(
                 "New pipe run",
                 Project.TitleBlock.EMPTY,
                 new Project.FluidSpec("water", "20 degC", "", "", "", ""),
@@ -392,19 +392,20 @@ public final class ProjectEditor {
                             v,
                             l.npshMargin());
             }
-            return new Project(
-                    p.title(),
-                    p.titleBlock(),
-                    p.fluid(),
-                    p.flow(),
-                    p.flowUncertainty(),
-                    p.friction(),
-                    p.segments(),
-                    new Project.EndsSpec(src, dst),
-                    p.pump(),
-                    l,
-                    p.sizing(),
-                    p.curve());
+            return Project.of(
+                            p.title(),
+                            p.titleBlock(),
+                            p.fluid(),
+                            p.flow(),
+                            p.flowUncertainty(),
+                            p.friction(),
+                            p.segments(),
+                            new Project.EndsSpec(src, dst),
+                            p.pump(),
+                            l,
+                            p.sizing(),
+                            p.curve())
+                    .keepingDevicesOf(p);
         });
     }
 
@@ -506,19 +507,20 @@ public final class ProjectEditor {
     }
 
     private static Project withPump(Project p, Optional<Project.PumpSpec> pump) {
-        return new Project(
-                p.title(),
-                p.titleBlock(),
-                p.fluid(),
-                p.flow(),
-                p.flowUncertainty(),
-                p.friction(),
-                p.segments(),
-                p.ends(),
-                pump,
-                p.limits(),
-                p.sizing(),
-                p.curve());
+        return Project.of(
+                        p.title(),
+                        p.titleBlock(),
+                        p.fluid(),
+                        p.flow(),
+                        p.flowUncertainty(),
+                        p.friction(),
+                        p.segments(),
+                        p.ends(),
+                        pump,
+                        p.limits(),
+                        p.sizing(),
+                        p.curve())
+                .keepingDevicesOf(p);
     }
 
     // ---- segment edits ----
@@ -736,7 +738,9 @@ public final class ProjectEditor {
             String roughness,
             List<Project.FittingSpec> fittings,
             String elevation) {
-        return new Project.SegmentSpec(name, length, pipe, bore, roughness, fittings, s.lossCoefficient(), elevation);
+        // The edit keeps the segment's id and its format-2 fields, so results and devices stay tied to it.
+        return s.withCoreOf(
+                new Project.SegmentSpec(name, length, pipe, bore, roughness, fittings, s.lossCoefficient(), elevation));
     }
 
     /** Appends a segment like the last one (same pipe), named after its position. */
@@ -801,19 +805,20 @@ public final class ProjectEditor {
             String flow,
             String friction,
             List<Project.SegmentSpec> segments) {
-        return new Project(
-                title,
-                p.titleBlock(),
-                fluid,
-                flow,
-                p.flowUncertainty(),
-                friction,
-                segments,
-                p.ends(),
-                p.pump(),
-                p.limits(),
-                p.sizing(),
-                p.curve());
+        return Project.of(
+                        title,
+                        p.titleBlock(),
+                        fluid,
+                        flow,
+                        p.flowUncertainty(),
+                        friction,
+                        segments,
+                        p.ends(),
+                        p.pump(),
+                        p.limits(),
+                        p.sizing(),
+                        p.curve())
+                .keepingDevicesOf(p);
     }
 
     /** A check that either gives the next project or throws with a message. */

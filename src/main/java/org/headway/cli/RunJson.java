@@ -8,6 +8,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import java.util.Locale;
 import org.headway.caution.Caution;
+import org.headway.system.ElementProfile;
 import org.headway.system.OperatingPoint;
 import org.headway.system.PipeRun;
 import org.headway.system.RunResult;
@@ -50,6 +51,7 @@ final class RunJson {
         for (SegmentResult s : result.segments()) {
             ObjectNode n = segs.addObject();
             n.put("name", s.name());
+            n.put("id", s.id());
             n.put("velocity_m_per_s", s.velocity());
             n.put("reynolds", s.reynolds());
             n.put("relative_roughness", s.relativeRoughness());
@@ -64,6 +66,26 @@ final class RunJson {
             n.put("outlet_elevation_m", s.outletElevation());
             n.put("outlet_energy_grade_m", s.outletEnergyGrade());
             n.put("outlet_hydraulic_grade_m", s.outletHydraulicGrade());
+        }
+        root.put("barometric_pressure_pa", run.atmosphericPressure());
+        ArrayNode elements = root.putArray("elements");
+        for (ElementProfile e : result.elements()) {
+            ObjectNode n = elements.addObject();
+            n.put("id", e.id());
+            n.put("kind", e.kind());
+            n.put("name", e.name());
+            n.put("head_loss_m", e.result().headLoss());
+            n.put("pressure_drop_pa", e.result().pressureDrop());
+            n.put("law", e.result().law());
+            n.put("inlet_elevation_m", e.inletElevation());
+            n.put("outlet_elevation_m", e.outletElevation());
+            n.put("inlet_hydraulic_grade_m", e.inletHydraulicGrade());
+            n.put("outlet_hydraulic_grade_m", e.outletHydraulicGrade());
+            n.put("inlet_pressure_pa", e.inletPressure());
+            n.put("outlet_pressure_pa", e.outletPressure());
+            n.put("inlet_absolute_pressure_pa", e.inletPressure() + run.atmosphericPressure());
+            n.put("outlet_absolute_pressure_pa", e.outletPressure() + run.atmosphericPressure());
+            e.highPointPressure().ifPresent(v -> n.put("high_point_pressure_pa", v));
         }
         ObjectNode totals = root.putObject("totals");
         totals.put("friction_head_loss_m", result.totals().frictionHeadLoss());

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.util.List;
 import java.util.Locale;
 import org.headway.caution.Caution;
+import org.headway.system.ElementProfile;
 import org.headway.system.OperatingPoint;
 import org.headway.system.PipeRun;
 import org.headway.system.RunResult;
@@ -67,6 +68,31 @@ final class RunText {
                     n(s.totalLossCoefficient()),
                     n(Quantities.fromSi(s.minorHeadLoss(), QuantityKind.HEAD, u)));
         }
+        out.println();
+        String pUnit = Quantities.unitSymbol(QuantityKind.PRESSURE, u);
+        out.printf(
+                Locale.ROOT,
+                "%-28s %-12s %9s %12s %12s  %s%n",
+                "element",
+                "kind",
+                "h [" + h + "]",
+                "p in [" + pUnit + "]",
+                "p out [" + pUnit + "]",
+                "law");
+        for (ElementProfile e : r.elements()) {
+            out.printf(
+                    Locale.ROOT,
+                    "%-28s %-12s %9s %12s %12s  %s%n",
+                    clip(e.id(), 28),
+                    e.kind(),
+                    n(Quantities.fromSi(e.result().headLoss(), QuantityKind.HEAD, u)),
+                    n(Quantities.fromSi(e.inletPressure(), QuantityKind.PRESSURE, u)),
+                    n(Quantities.fromSi(e.outletPressure(), QuantityKind.PRESSURE, u)),
+                    e.result().law());
+        }
+        out.println(
+                "(pressures are gauge; barometric pressure " + q(run.atmosphericPressure(), QuantityKind.PRESSURE, u)
+                        + ", " + run.site().basis() + ")");
         out.println();
         out.println("Friction loss:    " + q(r.totals().frictionHeadLoss(), QuantityKind.HEAD, u));
         out.println("Fitting loss:     " + q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u));

@@ -13,13 +13,16 @@ import java.util.Optional;
  * @param fluid the fluid
  * @param flow design flow, text with unit
  * @param flowUncertainty relative uncertainty of the flow, e.g. {@code "5 %"} or {@code "0.05"}
- * @param friction friction method id, or {@code fitted:PATH} for a saved fitted correlation
- * @param segments segments in flow order
+ * @param friction friction method id ({@code hazen-williams} too), or {@code fitted:PATH} for a saved
+ *     fitted correlation
+ * @param elements the run's elements in flow order: pipes, the pump, valves, components
  * @param ends end conditions
- * @param pump pump, if any
  * @param limits design limits (each optional)
  * @param sizing what sizing may choose from, if given
  * @param curve system curve range, if given
+ * @param site site atmosphere (altitude or barometric pressure), each optional
+ * @param pressureLimits gauge-pressure limits along the run, each optional
+ * @param inletLevel absolute level of the run inlet, when the file gives absolute levels
  */
 public record Project(
         String title,
@@ -28,20 +31,206 @@ public record Project(
         String flow,
         String flowUncertainty,
         String friction,
-        List<SegmentSpec> segments,
+        List<ElementSpec> elements,
         EndsSpec ends,
-        Optional<PumpSpec> pump,
         LimitsSpec limits,
         Optional<SizingSpec> sizing,
-        Optional<CurveSpec> curve) {
+        Optional<CurveSpec> curve,
+        SiteSpec site,
+        PressureLimitsSpec pressureLimits,
+        String inletLevel) {
 
     /** Format name written into every project file. */
     public static final String FORMAT = "headway-project";
-    /** Current format version. */
-    public static final int VERSION = 1;
+    /** Current format version: 2, named elements with ids. Version 1 files load and migrate. */
+    public static final int VERSION = 2;
 
     public Project {
-        segments = List.copyOf(segments);
+        elements = List.copyOf(elements);
+        site = site == null ? SiteSpec.SEA_LEVEL : site;
+        pressureLimits = pressureLimits == null ? PressureLimitsSpec.NONE : pressureLimits;
+        inletLevel = inletLevel == null ? "" : inletLevel;
+    }
+
+    /**
+     * A project of the format-1 shape: pipe segments and a pump placed before the segment at its
+     * position. Ids come from the segment names (made unique) and {@code pump}.
+     */
+    public static Project of(
+            String title,
+            TitleBlock titleBlock,
+            FluidSpec fluid,
+            String flow,
+            String flowUncertainty,
+            String friction,
+            List<SegmentSpec> segments,
+            EndsSpec ends,
+            Optional<PumpSpec> pump,
+            LimitsSpec limits,
+            Optional<SizingSpec> sizing,
+            Optional<CurveSpec> curve) {
+        return new Project(
+                title,
+                titleBlock,
+                fluid,
+                flow,
+                flowUncertainty,
+                friction,
+                elementsOf(segments, pump),
+                ends,
+                limits,
+                sizing,
+                curve,
+                SiteSpec.SEA_LEVEL,
+                PressureLimitsSpec.NONE,
+                "");
+    }
+
+    /** Pipes with unique ids from their names, then the pump at its position. */
+    static List<ElementSpec> elementsOf(List<SegmentSpec> segments, Optional<PumpSpec> pump) {
+        java.util.Set<String> taken = new java.util.HashSet<>();
+        List<ElementSpec> out = new java.util.ArrayList<>();
+        for (SegmentSpec s : segments) {
+            String id = s.id().isEmpty() ? s.name() : s.id();
+            String unique = id;
+            for (int n = 2; !taken.add(unique); n++) {
+                unique = id + " (" + n + ")";
+            }
+            out.add(unique.equals(s.id()) ? s : s.withId(unique));
+        }
+        if (pump.isPresent()) {
+            PumpSpec ps = pump.get();
+            String id = ps.id().isEmpty() ? "pump" : ps.id();
+            String unique = id;
+            for (int n = 2; !taken.add(unique); n++) {
+                unique = id + "-" + n;
+            }
+            int index = 0;
+            int pipes = 0;
+            while (index < out.size() && pipes < ps.position()) {
+                if (out.get(index) instanceof SegmentSpec) {
+                    pipes++;
+                }
+                index++;
+            }
+            // The element order holds the position; the stored spec carries 0 so that a format-2 reload is equal.
+            out.add(Math.min(index, out.size()), ps.withId(unique).withPosition(0));
+        }
+        return out;
+    }
+
+    /** The pipes in flow order. */
+    public List<SegmentSpec> segments() {
+        List<SegmentSpec> out = new java.util.ArrayList<>();
+        for (ElementSpec e : elements) {
+            if (e instanceof SegmentSpec s) {
+                out.add(s);
+            }
+        }
+        return out;
+    }
+
+    /** The pump with its position (pipes upstream of it), if the run has one. */
+    public Optional<PumpSpec> pump() {
+        int pipes = 0;
+        for (ElementSpec e : elements) {
+            if (e instanceof PumpSpec p) {
+                return Optional.of(p.withPosition(pipes));
+            }
+            if (e instanceof SegmentSpec) {
+                pipes++;
+            }
+        }
+        return Optional.empty();
+    }
+
+    /**
+     * This project's elements other than pipes and the pump (valves, components…) put back into
+     * a format-1-shaped edit of it, each after the element it followed here (matched by id), so
+     * that an edit of the pipes loses none of them; site, pressure limits and inlet level are kept.
+     */
+    public Project keepingDevicesOf(Project before) {
+        List<ElementSpec> merged = new java.util.ArrayList<>(elements);
+        String previous = "";
+        for (ElementSpec e : before.elements()) {
+            if (e instanceof DeviceSpec) {
+                int at = 0;
+                if (!previous.isEmpty()) {
+                    for (int i = 0; i < merged.size(); i++) {
+                        if (merged.get(i).id().equals(previous)) {
+                            at = i + 1;
+                            break;
+                        }
+                    }
+                }
+                merged.add(at, e);
+            }
+            previous = e.id();
+        }
+        return new Project(
+                title,
+                titleBlock,
+                fluid,
+                flow,
+                flowUncertainty,
+                friction,
+                merged,
+                ends,
+                limits,
+                sizing,
+                curve,
+                before.site(),
+                before.pressureLimits(),
+                before.inletLevel());
+    }
+
+    /** An element of the run as written: a pipe, the pump, or a device (valve, component…). */
+    public sealed interface ElementSpec permits SegmentSpec, PumpSpec, DeviceSpec {
+        /** The element's id. */
+        String id();
+
+        /** The element's kind as written ({@code pipe}, {@code pump}, {@code valve}, …). */
+        String kind();
+    }
+
+    /**
+     * A device other than a pipe or pump, with its fields as typed.
+     *
+     * @param kind {@code valve}, {@code component}, {@code reducer}, {@code check-valve}, {@code isolation}
+     * @param id stable id
+     * @param name name, optional
+     * @param values the kind's fields as text (e.g. {@code kv} → {@code "25"})
+     */
+    public record DeviceSpec(String kind, String id, String name, java.util.Map<String, String> values)
+            implements ElementSpec {
+
+        /** Fields each device kind may carry. */
+        public static final java.util.Map<String, List<String>> FIELDS = java.util.Map.of(
+                "valve", List.of("kv", "cv"),
+                "component", List.of("ratedPressureDrop", "ratedFlow", "exponent"),
+                "reducer", List.of("inletDiameter", "outletDiameter", "includedAngleDegrees"),
+                "check-valve", List.of("lossCoefficient", "diameter", "kv", "cv"),
+                "isolation", List.of("status", "lossCoefficient", "diameter", "kv", "cv"));
+
+        public DeviceSpec {
+            name = name == null ? "" : name;
+            values = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(values));
+        }
+
+        /** A field's text, empty when not given. */
+        public String value(String key) {
+            return values.getOrDefault(key, "");
+        }
+    }
+
+    /** Site atmosphere as typed: an altitude or a barometric pressure (at most one). */
+    public record SiteSpec(String altitude, String barometricPressure) {
+        public static final SiteSpec SEA_LEVEL = new SiteSpec("", "");
+    }
+
+    /** Gauge-pressure limits as typed, each optional. */
+    public record PressureLimitsSpec(String minimum, String maximum) {
+        public static final PressureLimitsSpec NONE = new PressureLimitsSpec("", "");
     }
 
     /** Sign-off block: all fields may be empty (the sheet then prints a blank line to sign). */
@@ -67,6 +256,7 @@ public record Project(
             String vapourPressure) {}
 
     /**
+     * @param id stable id (empty: the name)
      * @param name segment name
      * @param length text with unit
      * @param pipe catalog pipe, or empty when the bore is given
@@ -75,8 +265,14 @@ public record Project(
      * @param fittings fittings with counts
      * @param lossCoefficient explicit additional K, text (optional)
      * @param elevationChange outlet minus inlet elevation, text with unit (optional, 0)
+     * @param outletLevel absolute outlet level, text with unit (optional; needs the project's inlet level)
+     * @param friction the pipe's own friction method id, optional
+     * @param hazenWilliamsC the pipe's Hazen–Williams C, optional
+     * @param highPointDistance distance of a high point from the inlet, optional
+     * @param highPointRise rise of that high point above the inlet, optional
      */
     public record SegmentSpec(
+            String id,
             String name,
             String length,
             Optional<PipeSpec> pipe,
@@ -84,9 +280,91 @@ public record Project(
             String roughness,
             List<FittingSpec> fittings,
             String lossCoefficient,
-            String elevationChange) {
+            String elevationChange,
+            String outletLevel,
+            String friction,
+            String hazenWilliamsC,
+            String highPointDistance,
+            String highPointRise)
+            implements ElementSpec {
         public SegmentSpec {
             fittings = List.copyOf(fittings);
+            id = id == null ? "" : id;
+            outletLevel = outletLevel == null ? "" : outletLevel;
+            friction = friction == null ? "" : friction;
+            hazenWilliamsC = hazenWilliamsC == null ? "" : hazenWilliamsC;
+            highPointDistance = highPointDistance == null ? "" : highPointDistance;
+            highPointRise = highPointRise == null ? "" : highPointRise;
+        }
+
+        /** A segment of the format-1 shape (id from the name, no per-pipe method, no high point). */
+        public SegmentSpec(
+                String name,
+                String length,
+                Optional<PipeSpec> pipe,
+                String innerDiameter,
+                String roughness,
+                List<FittingSpec> fittings,
+                String lossCoefficient,
+                String elevationChange) {
+            this(
+                    "",
+                    name,
+                    length,
+                    pipe,
+                    innerDiameter,
+                    roughness,
+                    fittings,
+                    lossCoefficient,
+                    elevationChange,
+                    "",
+                    "",
+                    "",
+                    "",
+                    "");
+        }
+
+        @Override
+        public String kind() {
+            return "pipe";
+        }
+
+        /** A copy with another id. */
+        public SegmentSpec withId(String newId) {
+            return new SegmentSpec(
+                    newId,
+                    name,
+                    length,
+                    pipe,
+                    innerDiameter,
+                    roughness,
+                    fittings,
+                    lossCoefficient,
+                    elevationChange,
+                    outletLevel,
+                    friction,
+                    hazenWilliamsC,
+                    highPointDistance,
+                    highPointRise);
+        }
+
+        /** A copy with the edited format-1 fields of another spec, keeping this one's id and format-2 fields. */
+        public SegmentSpec withCoreOf(SegmentSpec edited) {
+            return new SegmentSpec(
+                    id,
+                    edited.name(),
+                    edited.length(),
+                    edited.pipe(),
+                    edited.innerDiameter(),
+                    edited.roughness(),
+                    edited.fittings(),
+                    edited.lossCoefficient(),
+                    edited.elevationChange(),
+                    outletLevel,
+                    friction,
+                    hazenWilliamsC,
+                    highPointDistance,
+                    highPointRise);
         }
     }
 
@@ -111,14 +389,38 @@ public record Project(
     }
 
     /**
+     * @param id stable id (empty: {@code pump})
      * @param name pump name
-     * @param position index of the first segment downstream of the pump
+     * @param position number of pipes upstream of the pump (derived from the element order in format 2)
      * @param points maker's points
      * @param npshRequired NPSH required, optional
+     * @param speedRatio running speed over the curve's speed, optional (1)
      */
-    public record PumpSpec(String name, int position, List<PumpPointSpec> points, String npshRequired) {
+    public record PumpSpec(
+            String id, String name, int position, List<PumpPointSpec> points, String npshRequired, String speedRatio)
+            implements ElementSpec {
         public PumpSpec {
             points = List.copyOf(points);
+            id = id == null ? "" : id;
+            speedRatio = speedRatio == null ? "" : speedRatio;
+        }
+
+        /** A pump of the format-1 shape. */
+        public PumpSpec(String name, int position, List<PumpPointSpec> points, String npshRequired) {
+            this("", name, position, points, npshRequired, "");
+        }
+
+        @Override
+        public String kind() {
+            return "pump";
+        }
+
+        PumpSpec withId(String newId) {
+            return new PumpSpec(newId, name, position, points, npshRequired, speedRatio);
+        }
+
+        PumpSpec withPosition(int newPosition) {
+            return new PumpSpec(id, name, newPosition, points, npshRequired, speedRatio);
         }
     }
 

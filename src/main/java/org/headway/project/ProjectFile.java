@@ -107,29 +107,55 @@ public final class ProjectFile {
             throw new InputException("$", "a project file must be a JSON object");
         }
         Obj top = new Obj(root, "");
-        top.allow(
-                "format",
-                "version",
-                "title",
-                "reference",
-                "fluid",
-                "flow",
-                "flowUncertainty",
-                "friction",
-                "segments",
-                "ends",
-                "pump",
-                "limits",
-                "sizing",
-                "curve");
-        String format = top.text("format", true);
+        String format = top.has("format") ? top.text("format", true) : "";
         if (!Project.FORMAT.equals(format)) {
             throw new InputException("format", "expected \"" + Project.FORMAT + "\", got \"" + format + "\"");
         }
         int version = top.integer("version", true, 0);
-        if (version != Project.VERSION) {
+        if (version > Project.VERSION) {
             throw new InputException(
-                    "version", "this Headway reads version " + Project.VERSION + ", the file says " + version);
+                    "version",
+                    "this Headway reads format versions 1 to " + Project.VERSION + "; the file is of version " + version
+                            + ", written by a newer Headway — update Headway to open it");
+        }
+        if (version < 1) {
+            throw new InputException(
+                    "version", "this Headway reads versions 1 to " + Project.VERSION + ", the file says " + version);
+        }
+        if (version == 1) {
+            top.allow(
+                    "format",
+                    "version",
+                    "title",
+                    "reference",
+                    "fluid",
+                    "flow",
+                    "flowUncertainty",
+                    "friction",
+                    "segments",
+                    "ends",
+                    "pump",
+                    "limits",
+                    "sizing",
+                    "curve");
+        } else {
+            top.allow(
+                    "format",
+                    "version",
+                    "title",
+                    "reference",
+                    "fluid",
+                    "flow",
+                    "flowUncertainty",
+                    "friction",
+                    "elements",
+                    "ends",
+                    "limits",
+                    "sizing",
+                    "curve",
+                    "site",
+                    "pressureLimits",
+                    "inletLevel");
         }
         Project.TitleBlock titleBlock = Project.TitleBlock.EMPTY;
         if (top.has("reference")) {
@@ -153,77 +179,12 @@ public final class ProjectFile {
                 f.quantity("viscosity"),
                 f.quantity("vapourPressure"));
 
-        List<Project.SegmentSpec> segments = new ArrayList<>();
-        ArrayNode segs = top.array("segments", true);
-        for (int i = 0; i < segs.size(); i++) {
-            Obj s = new Obj(segs.get(i), "segments[" + i + "]");
-            s.allow(
-                    "name",
-                    "length",
-                    "pipe",
-                    "innerDiameter",
-                    "roughness",
-                    "fittings",
-                    "lossCoefficient",
-                    "elevationChange");
-            Optional<Project.PipeSpec> pipe = Optional.empty();
-            if (s.has("pipe")) {
-                Obj p = s.object("pipe");
-                p.allow("material", "size", "schedule");
-                pipe = Optional.of(new Project.PipeSpec(
-                        p.text("material", true), p.textOrNumber("size", true), p.textOrNumber("schedule", false)));
-            }
-            List<Project.FittingSpec> fittings = new ArrayList<>();
-            if (s.has("fittings")) {
-                ArrayNode fits = s.array("fittings", false);
-                for (int j = 0; j < fits.size(); j++) {
-                    Obj fit = new Obj(fits.get(j), s.path + ".fittings[" + j + "]");
-                    fit.allow("kind", "count", "lossCoefficient");
-                    int count = fit.integer("count", false, 1);
-                    if (count < 1) {
-                        throw new InputException(fit.path + ".count", "must be at least 1, got " + count);
-                    }
-                    fittings.add(
-                            new Project.FittingSpec(fit.text("kind", true), count, fit.quantity("lossCoefficient")));
-                }
-            }
-            String name = s.has("name") ? s.text("name", true) : "segment " + (i + 1);
-            segments.add(new Project.SegmentSpec(
-                    name,
-                    s.quantityRequired("length"),
-                    pipe,
-                    s.quantity("innerDiameter"),
-                    s.quantity("roughness"),
-                    fittings,
-                    s.quantity("lossCoefficient"),
-                    s.quantity("elevationChange")));
-        }
-
         Project.EndsSpec ends = Project.EndsSpec.OPEN;
         if (top.has("ends")) {
             Obj e = top.object("ends");
             e.allow("source", "delivery");
             ends = new Project.EndsSpec(end(e, "source"), end(e, "delivery"));
         }
-
-        Optional<Project.PumpSpec> pump = Optional.empty();
-        if (top.has("pump")) {
-            Obj p = top.object("pump");
-            p.allow("name", "position", "points", "npshRequired");
-            List<Project.PumpPointSpec> points = new ArrayList<>();
-            ArrayNode pts = p.array("points", true);
-            for (int i = 0; i < pts.size(); i++) {
-                Obj pt = new Obj(pts.get(i), p.path + ".points[" + i + "]");
-                pt.allow("flow", "head");
-                points.add(new Project.PumpPointSpec(pt.quantityRequired("flow"), pt.quantityRequired("head")));
-            }
-            pump = Optional.of(new Project.PumpSpec(
-                    p.has("name") ? p.text("name", true) : "pump",
-                    p.integer("position", false, 0),
-                    points,
-                    p.quantity("npshRequired")));
-        }
-
         Project.LimitsSpec limits = Project.LimitsSpec.NONE;
         if (top.has("limits")) {
             Obj l = top.object("limits");
@@ -248,19 +209,204 @@ public final class ProjectFile {
             curve = Optional.of(new Project.CurveSpec(
                     c.quantity("minimumFlow"), c.quantityRequired("maximumFlow"), c.integer("points", false, 41)));
         }
+        String friction = top.has("friction") ? top.text("friction", true) : "auto";
+        if (version == 1) {
+            List<Project.SegmentSpec> segments = new ArrayList<>();
+            ArrayNode segs = top.array("segments", true);
+            for (int i = 0; i < segs.size(); i++) {
+                Obj s = new Obj(segs.get(i), "segments[" + i + "]");
+                s.allow(
+                        "name",
+                        "length",
+                        "pipe",
+                        "innerDiameter",
+                        "roughness",
+                        "fittings",
+                        "lossCoefficient",
+                        "elevationChange");
+                segments.add(segment(s, "segment " + (i + 1), false));
+            }
+            Optional<Project.PumpSpec> pump = Optional.empty();
+            if (top.has("pump")) {
+                Obj p = top.object("pump");
+                p.allow("name", "position", "points", "npshRequired");
+                pump = Optional.of(new Project.PumpSpec(
+                        p.has("name") ? p.text("name", true) : "pump",
+                        p.integer("position", false, 0),
+                        pumpPoints(p),
+                        p.quantity("npshRequired")));
+            }
+            return Project.of(
+                    top.text("title", false),
+                    titleBlock,
+                    fluid,
+                    top.quantityRequired("flow"),
+                    top.quantity("flowUncertainty"),
+                    friction,
+                    segments,
+                    ends,
+                    pump,
+                    limits,
+                    sizing,
+                    curve);
+        }
+        List<Project.ElementSpec> elements = new ArrayList<>();
+        ArrayNode list = top.array("elements", true);
+        java.util.Set<String> ids = new java.util.HashSet<>();
+        for (int i = 0; i < list.size(); i++) {
+            Obj e = new Obj(list.get(i), "elements[" + i + "]");
+            String kind = e.has("kind") ? e.text("kind", true) : "pipe";
+            String id = e.text("id", true);
+            if (id.isBlank()) {
+                throw new InputException(e.path + ".id", "an element needs a non-blank id");
+            }
+            if (!ids.add(id)) {
+                throw new InputException(
+                        e.path + ".id", "the id \"" + id + "\" is used by an earlier element; ids must be unique");
+            }
+            switch (kind) {
+                case "pipe" -> {
+                    e.allow(
+                            "id",
+                            "kind",
+                            "name",
+                            "length",
+                            "pipe",
+                            "innerDiameter",
+                            "roughness",
+                            "fittings",
+                            "lossCoefficient",
+                            "elevationChange",
+                            "outletLevel",
+                            "friction",
+                            "hazenWilliamsC",
+                            "highPoint");
+                    elements.add(segment(e, id, true).withId(id));
+                }
+                case "pump" -> {
+                    e.allow("id", "kind", "name", "points", "npshRequired", "speedRatio");
+                    elements.add(new Project.PumpSpec(
+                            id,
+                            e.has("name") ? e.text("name", true) : id,
+                            0,
+                            pumpPoints(e),
+                            e.quantity("npshRequired"),
+                            e.quantity("speedRatio")));
+                }
+                default -> {
+                    List<String> fields = Project.DeviceSpec.FIELDS.get(kind);
+                    if (fields == null) {
+                        throw new InputException(
+                                e.path + ".kind",
+                                "unknown element kind \"" + kind + "\"; expected pipe, pump, "
+                                        + String.join(
+                                                ", ", new java.util.TreeSet<>(Project.DeviceSpec.FIELDS.keySet())));
+                    }
+                    List<String> allowed = new ArrayList<>(List.of("id", "kind", "name"));
+                    allowed.addAll(fields);
+                    e.allow(allowed.toArray(new String[0]));
+                    java.util.Map<String, String> values = new java.util.LinkedHashMap<>();
+                    for (String key : fields) {
+                        String v = e.quantity(key);
+                        if (!v.isEmpty()) {
+                            values.put(key, v);
+                        }
+                    }
+                    elements.add(new Project.DeviceSpec(kind, id, e.has("name") ? e.text("name", true) : "", values));
+                }
+            }
+        }
+        Project.SiteSpec site = Project.SiteSpec.SEA_LEVEL;
+        if (top.has("site")) {
+            Obj z = top.object("site");
+            z.allow("altitude", "barometricPressure");
+            site = new Project.SiteSpec(z.quantity("altitude"), z.quantity("barometricPressure"));
+            if (!site.altitude().isEmpty() && !site.barometricPressure().isEmpty()) {
+                throw new InputException("site", "give the site altitude or its barometric pressure, not both");
+            }
+        }
+        Project.PressureLimitsSpec pressureLimits = Project.PressureLimitsSpec.NONE;
+        if (top.has("pressureLimits")) {
+            Obj z = top.object("pressureLimits");
+            z.allow("minimum", "maximum");
+            pressureLimits = new Project.PressureLimitsSpec(z.quantity("minimum"), z.quantity("maximum"));
+        }
         return new Project(
                 top.text("title", false),
                 titleBlock,
                 fluid,
                 top.quantityRequired("flow"),
                 top.quantity("flowUncertainty"),
-                top.has("friction") ? top.text("friction", true) : "auto",
-                segments,
+                friction,
+                elements,
                 ends,
-                pump,
                 limits,
                 sizing,
-                curve);
+                curve,
+                site,
+                pressureLimits,
+                top.quantity("inletLevel"));
+    }
+
+    private static List<Project.PumpPointSpec> pumpPoints(Obj p) {
+        List<Project.PumpPointSpec> points = new ArrayList<>();
+        ArrayNode pts = p.array("points", true);
+        for (int i = 0; i < pts.size(); i++) {
+            Obj pt = new Obj(pts.get(i), p.path + ".points[" + i + "]");
+            pt.allow("flow", "head");
+            points.add(new Project.PumpPointSpec(pt.quantityRequired("flow"), pt.quantityRequired("head")));
+        }
+        return points;
+    }
+
+    private static Project.SegmentSpec segment(Obj s, String defaultName, boolean formatTwo) {
+        Optional<Project.PipeSpec> pipe = Optional.empty();
+        if (s.has("pipe")) {
+            Obj p = s.object("pipe");
+            p.allow("material", "size", "schedule");
+            pipe = Optional.of(new Project.PipeSpec(
+                    p.text("material", true), p.textOrNumber("size", true), p.textOrNumber("schedule", false)));
+        }
+        List<Project.FittingSpec> fittings = new ArrayList<>();
+        if (s.has("fittings")) {
+            ArrayNode fits = s.array("fittings", false);
+            for (int j = 0; j < fits.size(); j++) {
+                Obj fit = new Obj(fits.get(j), s.path + ".fittings[" + j + "]");
+                fit.allow("kind", "count", "lossCoefficient");
+                int count = fit.integer("count", false, 1);
+                if (count < 1) {
+                    throw new InputException(fit.path + ".count", "must be at least 1, got " + count);
+                }
+                fittings.add(new Project.FittingSpec(fit.text("kind", true), count, fit.quantity("lossCoefficient")));
+            }
+        }
+        String name = s.has("name") ? s.text("name", true) : defaultName;
+        String highDistance = "";
+        String highRise = "";
+        if (formatTwo && s.has("highPoint")) {
+            Obj h = s.object("highPoint");
+            h.allow("distance", "rise");
+            highDistance = h.quantityRequired("distance");
+            highRise = h.quantityRequired("rise");
+        }
+        if (formatTwo && s.has("outletLevel") && s.has("elevationChange")) {
+            throw new InputException(s.path, "give elevationChange or outletLevel, not both");
+        }
+        return new Project.SegmentSpec(
+                "",
+                name,
+                s.quantityRequired("length"),
+                pipe,
+                s.quantity("innerDiameter"),
+                s.quantity("roughness"),
+                fittings,
+                s.quantity("lossCoefficient"),
+                s.quantity("elevationChange"),
+                formatTwo ? s.quantity("outletLevel") : "",
+                formatTwo && s.has("friction") ? s.text("friction", true) : "",
+                formatTwo ? s.quantity("hazenWilliamsC") : "",
+                highDistance,
+                highRise);
     }
 
     private static Project.EndSpec end(Obj ends, String key) {
@@ -304,30 +450,66 @@ public final class ProjectFile {
         root.put("flow", p.flow());
         putIf(root, "flowUncertainty", p.flowUncertainty());
         root.put("friction", p.friction());
-        ArrayNode segs = root.putArray("segments");
-        for (Project.SegmentSpec s : p.segments()) {
-            ObjectNode n = segs.addObject();
-            n.put("name", s.name());
-            n.put("length", s.length());
-            s.pipe().ifPresent(pipe -> {
-                ObjectNode pn = n.putObject("pipe");
-                pn.put("material", pipe.material());
-                pn.put("size", pipe.size());
-                putIf(pn, "schedule", pipe.schedule());
-            });
-            putIf(n, "innerDiameter", s.innerDiameter());
-            putIf(n, "roughness", s.roughness());
-            if (!s.fittings().isEmpty()) {
-                ArrayNode fits = n.putArray("fittings");
-                for (Project.FittingSpec fit : s.fittings()) {
-                    ObjectNode fn = fits.addObject();
-                    fn.put("kind", fit.kind());
-                    fn.put("count", fit.count());
-                    putIf(fn, "lossCoefficient", fit.lossCoefficient());
+        putIf(root, "inletLevel", p.inletLevel());
+        if (!p.site().equals(Project.SiteSpec.SEA_LEVEL)) {
+            ObjectNode z = root.putObject("site");
+            putIf(z, "altitude", p.site().altitude());
+            putIf(z, "barometricPressure", p.site().barometricPressure());
+        }
+        if (!p.pressureLimits().equals(Project.PressureLimitsSpec.NONE)) {
+            ObjectNode z = root.putObject("pressureLimits");
+            putIf(z, "minimum", p.pressureLimits().minimum());
+            putIf(z, "maximum", p.pressureLimits().maximum());
+        }
+        ArrayNode list = root.putArray("elements");
+        for (Project.ElementSpec element : p.elements()) {
+            ObjectNode n = list.addObject();
+            n.put("id", element.id());
+            n.put("kind", element.kind());
+            if (element instanceof Project.SegmentSpec s) {
+                n.put("name", s.name());
+                n.put("length", s.length());
+                s.pipe().ifPresent(pipe -> {
+                    ObjectNode pn = n.putObject("pipe");
+                    pn.put("material", pipe.material());
+                    pn.put("size", pipe.size());
+                    putIf(pn, "schedule", pipe.schedule());
+                });
+                putIf(n, "innerDiameter", s.innerDiameter());
+                putIf(n, "roughness", s.roughness());
+                if (!s.fittings().isEmpty()) {
+                    ArrayNode fits = n.putArray("fittings");
+                    for (Project.FittingSpec fit : s.fittings()) {
+                        ObjectNode fn = fits.addObject();
+                        fn.put("kind", fit.kind());
+                        fn.put("count", fit.count());
+                        putIf(fn, "lossCoefficient", fit.lossCoefficient());
+                    }
                 }
+                putIf(n, "lossCoefficient", s.lossCoefficient());
+                putIf(n, "elevationChange", s.elevationChange());
+                putIf(n, "outletLevel", s.outletLevel());
+                putIf(n, "friction", s.friction());
+                putIf(n, "hazenWilliamsC", s.hazenWilliamsC());
+                if (!s.highPointDistance().isEmpty() || !s.highPointRise().isEmpty()) {
+                    ObjectNode h = n.putObject("highPoint");
+                    putIf(h, "distance", s.highPointDistance());
+                    putIf(h, "rise", s.highPointRise());
+                }
+            } else if (element instanceof Project.PumpSpec pump) {
+                n.put("name", pump.name());
+                ArrayNode pts = n.putArray("points");
+                for (Project.PumpPointSpec pt : pump.points()) {
+                    ObjectNode ptn = pts.addObject();
+                    ptn.put("flow", pt.flow());
+                    ptn.put("head", pt.head());
+                }
+                putIf(n, "npshRequired", pump.npshRequired());
+                putIf(n, "speedRatio", pump.speedRatio());
+            } else if (element instanceof Project.DeviceSpec d) {
+                putIf(n, "name", d.name());
+                d.values().forEach((k, v) -> putIf(n, k, v));
             }
-            putIf(n, "lossCoefficient", s.lossCoefficient());
-            putIf(n, "elevationChange", s.elevationChange());
         }
         if (!p.ends().equals(Project.EndsSpec.OPEN)) {
             ObjectNode e = root.putObject("ends");
@@ -339,18 +521,6 @@ public final class ProjectFile {
                 putIf(en, "pressure", end.pressure());
             }
         }
-        p.pump().ifPresent(pump -> {
-            ObjectNode pn = root.putObject("pump");
-            pn.put("name", pump.name());
-            pn.put("position", pump.position());
-            ArrayNode pts = pn.putArray("points");
-            for (Project.PumpPointSpec pt : pump.points()) {
-                ObjectNode ptn = pts.addObject();
-                ptn.put("flow", pt.flow());
-                ptn.put("head", pt.head());
-            }
-            putIf(pn, "npshRequired", pump.npshRequired());
-        });
         if (!p.limits().equals(Project.LimitsSpec.NONE)) {
             ObjectNode l = root.putObject("limits");
             putIf(l, "minimumVelocity", p.limits().minimumVelocity());

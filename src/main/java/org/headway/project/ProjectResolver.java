@@ -15,15 +15,26 @@ import org.headway.friction.FrictionCorrelation;
 import org.headway.friction.FrictionMethods;
 import org.headway.pipe.Catalog;
 import org.headway.pipe.Fitting;
+import org.headway.pipe.HazenWilliamsCoefficient;
 import org.headway.pipe.Material;
 import org.headway.pipe.PipeSize;
+import org.headway.system.CheckValve;
 import org.headway.system.DesignLimits;
+import org.headway.system.DiameterChange;
+import org.headway.system.Element;
 import org.headway.system.EndCondition;
 import org.headway.system.FittingUse;
+import org.headway.system.FlowCoefficientValve;
 import org.headway.system.GivenLossCoefficient;
+import org.headway.system.IsolationValve;
+import org.headway.system.LocalLoss;
 import org.headway.system.PipeRun;
+import org.headway.system.PressureLimits;
 import org.headway.system.PumpCurve;
+import org.headway.system.PumpElement;
+import org.headway.system.RatedComponent;
 import org.headway.system.Segment;
+import org.headway.system.SiteAtmosphere;
 import org.headway.system.SizeSelector;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
@@ -63,15 +74,41 @@ public final class ProjectResolver {
         double uncertainty = p.flowUncertainty().isEmpty()
                 ? DEFAULT_FLOW_UNCERTAINTY
                 : orZero(attempt("flowUncertainty", () -> ratio(p.flowUncertainty())));
-        FrictionCorrelation friction = attempt("friction", () -> friction(p.friction()));
 
-        List<Segment> segments = new ArrayList<>();
-        for (int i = 0; i < p.segments().size(); i++) {
-            Project.SegmentSpec spec = p.segments().get(i);
-            String path = "segments[" + i + "]";
-            Segment s = attempt(path, () -> segment(spec, fluid));
-            if (s != null) {
-                segments.add(s);
+        boolean hazenWilliamsRun = HAZEN_WILLIAMS.equals(p.friction());
+        FrictionCorrelation friction =
+                hazenWilliamsRun ? FrictionMethods.byId("auto") : attempt("friction", () -> friction(p.friction()));
+        Double inletLevel = p.inletLevel().isEmpty()
+                ? null
+                : attempt("inletLevel", () -> Quantities.parse(p.inletLevel(), QuantityKind.LENGTH, "inletLevel"));
+        List<Element> elements = new ArrayList<>();
+        double level = inletLevel == null ? 0 : inletLevel;
+        int pipeIndex = 0;
+        for (int i = 0; i < p.elements().size(); i++) {
+            Project.ElementSpec spec = p.elements().get(i);
+            String path = elementPath(p, spec, i, pipeIndex);
+            if (spec instanceof Project.SegmentSpec seg) {
+                pipeIndex++;
+                final double here = level;
+                Segment s = attempt(path, () -> segment(seg, fluid, hazenWilliamsRun, inletLevel, here));
+                if (s != null) {
+                    elements.add(s);
+                    level += s.elevationChange();
+                }
+            } else if (spec instanceof Project.PumpSpec ps) {
+                String pumpPath = p.elements().stream().anyMatch(e -> e instanceof Project.DeviceSpec)
+                                || !ps.id().equals("pump")
+                        ? path
+                        : "pump";
+                PumpElement pump = attempt(pumpPath, () -> pumpElement(ps));
+                if (pump != null) {
+                    elements.add(pump);
+                }
+            } else if (spec instanceof Project.DeviceSpec d) {
+                Element e = attempt(path, () -> device(d, fluid));
+                if (e != null) {
+                    elements.add(e);
+                }
             }
         }
         double density = fluid == null ? 1000 : fluid.density();
@@ -79,13 +116,8 @@ public final class ProjectResolver {
         EndCondition delivery = attempt("ends.delivery", () -> end(p.ends().delivery()));
 
         DesignLimits limits = attempt("limits", () -> limits(p.limits()));
-        Optional<PumpCurve> pump = Optional.empty();
-        int pumpPosition = 0;
-        if (p.pump().isPresent()) {
-            Project.PumpSpec ps = p.pump().get();
-            pumpPosition = ps.position();
-            pump = Optional.ofNullable(attempt("pump", () -> pump(ps)));
-        }
+        SiteAtmosphere site = attempt("site", () -> site(p.site()));
+        PressureLimits pressureLimits = attempt("pressureLimits", () -> pressureLimits(p.pressureLimits()));
         List<SizeSelector.CandidateSize> candidates = new ArrayList<>();
         if (p.sizing().isPresent()) {
             List<SizeSelector.CandidateSize> found =
@@ -104,23 +136,20 @@ public final class ProjectResolver {
                     : problems.size() + " problems:\n  " + String.join("\n  ", problems);
             throw new InputException("", message);
         }
-        final int position = pumpPosition;
-        final Optional<PumpCurve> pumpCurve = pump;
         PipeRun run = attempt(
                 "",
-                () -> PipeRun.of(
+                () -> new PipeRun(
                         p.title(),
                         fluid,
                         friction,
-                        segments,
+                        elements,
                         source,
                         delivery,
-                        pumpCurve,
-                        position,
-                        PipeRun.STANDARD_ATMOSPHERE,
+                        site,
                         flow,
                         uncertainty,
-                        limits));
+                        limits,
+                        pressureLimits));
         if (!problems.isEmpty()) {
             throw new InputException("", problems.get(0));
         }
@@ -272,8 +301,10 @@ public final class ProjectResolver {
         return dot > 0 ? n.substring(0, dot) : n;
     }
 
-    private Segment segment(Project.SegmentSpec spec, FluidState fluid) {
-        Segment.Builder b = Segment.builder(spec.name());
+    private Segment segment(
+            Project.SegmentSpec spec, FluidState fluid, boolean hazenWilliamsRun, Double inletLevel, double level) {
+        Segment.Builder b = Segment.builder(spec.name()).id(spec.id());
+        Material catalogMaterial = null;
         b.length(InputException.requireNonNegative(
                 "length", Quantities.parse(spec.length(), QuantityKind.LENGTH, "length")));
         double diameter;
@@ -294,6 +325,7 @@ public final class ProjectResolver {
             } catch (InputException e) {
                 throw e.at("pipe.size");
             }
+            catalogMaterial = material;
             diameter = size.innerDiameter();
             roughness = material.roughness();
             low = material.roughnessLow();
@@ -370,7 +402,187 @@ public final class ProjectResolver {
         if (!spec.elevationChange().isEmpty()) {
             b.elevationChange(Quantities.parse(spec.elevationChange(), QuantityKind.LENGTH, "elevationChange"));
         }
+        if (!spec.outletLevel().isEmpty()) {
+            if (inletLevel == null) {
+                throw new InputException(
+                        "outletLevel",
+                        "an absolute outlet level needs the project's inletLevel (the run inlet's level)");
+            }
+            b.elevationChange(Quantities.parse(spec.outletLevel(), QuantityKind.LENGTH, "outletLevel") - level);
+        }
+        boolean hazenWilliams = hazenWilliamsRun || HAZEN_WILLIAMS.equals(spec.friction());
+        if (!spec.friction().isEmpty() && !hazenWilliams) {
+            try {
+                b.friction(friction(spec.friction()));
+            } catch (InputException e) {
+                throw new InputException("friction", e.problem());
+            }
+        }
+        if (hazenWilliams) {
+            if (!spec.hazenWilliamsC().isEmpty()) {
+                double c = Quantities.parse(spec.hazenWilliamsC(), QuantityKind.DIMENSIONLESS, "hazenWilliamsC");
+                try {
+                    b.hazenWilliams(new HazenWilliamsCoefficient(c, "given in the project file"));
+                } catch (InputException e) {
+                    throw new InputException("hazenWilliamsC", e.problem());
+                }
+            } else if (catalogMaterial != null
+                    && catalogMaterial.hazenWilliams().isPresent()) {
+                b.hazenWilliams(catalogMaterial.hazenWilliams().get());
+            } else {
+                throw new InputException(
+                        "hazenWilliamsC",
+                        "missing; Hazen–Williams needs a C for this pipe (give hazenWilliamsC, or a catalog material"
+                                + " with an hw_c value)");
+            }
+        } else if (!spec.hazenWilliamsC().isEmpty()) {
+            throw new InputException(
+                    "hazenWilliamsC",
+                    "given, but the pipe is computed by Darcy–Weisbach; set friction to hazen-williams");
+        }
+        if (!spec.highPointDistance().isEmpty() || !spec.highPointRise().isEmpty()) {
+            b.highPoint(
+                    InputException.requireNonNegative(
+                            "highPoint.distance",
+                            Quantities.parse(spec.highPointDistance(), QuantityKind.LENGTH, "highPoint.distance")),
+                    Quantities.parse(spec.highPointRise(), QuantityKind.LENGTH, "highPoint.rise"));
+        }
         return b.build();
+    }
+
+    /** Friction method id that selects Hazen–Williams (for water) instead of Darcy–Weisbach. */
+    public static final String HAZEN_WILLIAMS = "hazen-williams";
+
+    private static String elementPath(Project p, Project.ElementSpec spec, int index, int pipeIndex) {
+        boolean formatOneShape = p.elements().stream().noneMatch(e -> e instanceof Project.DeviceSpec);
+        if (formatOneShape && spec instanceof Project.SegmentSpec) {
+            // Keep the paths a format-1 file's author knows (segments[3].length).
+            return "segments[" + pipeIndex + "]";
+        }
+        return "elements[" + index + "] (" + spec.id() + ")";
+    }
+
+    private PumpElement pumpElement(Project.PumpSpec spec) {
+        PumpCurve curve = pump(spec);
+        double speed = spec.speedRatio().isEmpty()
+                ? 1.0
+                : Quantities.parse(spec.speedRatio(), QuantityKind.DIMENSIONLESS, "speedRatio");
+        try {
+            return new PumpElement(spec.id().isEmpty() ? "pump" : spec.id(), curve, speed);
+        } catch (InputException e) {
+            throw new InputException("speedRatio", e.problem());
+        }
+    }
+
+    private static Element device(Project.DeviceSpec d, FluidState fluid) {
+        switch (d.kind()) {
+            case "valve" -> {
+                return flowCoefficientValve(d, true);
+            }
+            case "component" -> {
+                double dp = Quantities.parse(d.value("ratedPressureDrop"), QuantityKind.PRESSURE, "ratedPressureDrop");
+                double q = Quantities.parse(d.value("ratedFlow"), QuantityKind.VOLUMETRIC_FLOW, "ratedFlow");
+                double n = d.value("exponent").isEmpty()
+                        ? RatedComponent.QUADRATIC
+                        : Quantities.parse(d.value("exponent"), QuantityKind.DIMENSIONLESS, "exponent");
+                return new RatedComponent(d.id(), d.name(), dp, q, n);
+            }
+            case "reducer" -> {
+                double in = Quantities.parse(d.value("inletDiameter"), QuantityKind.DIAMETER, "inletDiameter");
+                double out = Quantities.parse(d.value("outletDiameter"), QuantityKind.DIAMETER, "outletDiameter");
+                double angle = d.value("includedAngleDegrees").isEmpty()
+                        ? DiameterChange.SUDDEN
+                        : Math.toRadians(Quantities.parse(
+                                d.value("includedAngleDegrees"), QuantityKind.DIMENSIONLESS, "includedAngleDegrees"));
+                return new DiameterChange(d.id(), d.name(), in, out, angle);
+            }
+            case "check-valve" -> {
+                return new CheckValve(d.id(), d.name(), localLoss(d, true));
+            }
+            case "isolation" -> {
+                String status =
+                        d.value("status").isEmpty() ? "open" : d.value("status").strip();
+                if (!status.equals("open") && !status.equals("closed")) {
+                    throw new InputException("status", "expected open or closed, got \"" + status + "\"");
+                }
+                return new IsolationValve(d.id(), d.name(), status.equals("open"), localLoss(d, false));
+            }
+            default -> throw new InputException("kind", "unknown element kind \"" + d.kind() + "\"");
+        }
+    }
+
+    private static FlowCoefficientValve flowCoefficientValve(Project.DeviceSpec d, boolean required) {
+        boolean kv = !d.value("kv").isEmpty();
+        boolean cv = !d.value("cv").isEmpty();
+        if (kv && cv) {
+            throw new InputException("kv", "give kv or cv, not both");
+        }
+        if (!kv && !cv) {
+            if (required) {
+                throw new InputException("kv", "missing; a valve needs its flow coefficient kv (m³/h at 1 bar) or cv");
+            }
+            return null;
+        }
+        if (kv) {
+            return FlowCoefficientValve.ofKv(
+                    d.id(), d.name(), Quantities.parse(d.value("kv"), QuantityKind.DIMENSIONLESS, "kv"));
+        }
+        return FlowCoefficientValve.ofCv(
+                d.id(), d.name(), Quantities.parse(d.value("cv"), QuantityKind.DIMENSIONLESS, "cv"));
+    }
+
+    private static LocalLoss localLoss(Project.DeviceSpec d, boolean required) {
+        FlowCoefficientValve byCoefficient = flowCoefficientValve(d, false);
+        boolean k = !d.value("lossCoefficient").isEmpty();
+        if (byCoefficient != null && k) {
+            throw new InputException(
+                    "lossCoefficient", "give a loss coefficient with its diameter, or kv/cv, not both");
+        }
+        if (byCoefficient != null) {
+            return LocalLoss.ofFlowCoefficient(byCoefficient);
+        }
+        if (k) {
+            if (d.value("diameter").isEmpty()) {
+                throw new InputException(
+                        "diameter", "missing; a loss coefficient is referred to the velocity in a bore");
+            }
+            return LocalLoss.ofLossCoefficient(
+                    InputException.requireNonNegative(
+                            "lossCoefficient",
+                            Quantities.parse(
+                                    d.value("lossCoefficient"), QuantityKind.DIMENSIONLESS, "lossCoefficient")),
+                    Quantities.parse(d.value("diameter"), QuantityKind.DIAMETER, "diameter"));
+        }
+        if (required) {
+            throw new InputException(
+                    "lossCoefficient", "missing; give the open loss as lossCoefficient with diameter, or kv/cv");
+        }
+        return LocalLoss.NONE;
+    }
+
+    private static SiteAtmosphere site(Project.SiteSpec spec) {
+        if (!spec.altitude().isEmpty()) {
+            return SiteAtmosphere.atAltitude(Quantities.parse(spec.altitude(), QuantityKind.LENGTH, "altitude"));
+        }
+        if (!spec.barometricPressure().isEmpty()) {
+            try {
+                return SiteAtmosphere.ofPressure(
+                        Quantities.parse(spec.barometricPressure(), QuantityKind.PRESSURE, "barometricPressure"));
+            } catch (InputException e) {
+                throw new InputException("barometricPressure", e.problem());
+            }
+        }
+        return SiteAtmosphere.SEA_LEVEL;
+    }
+
+    private static PressureLimits pressureLimits(Project.PressureLimitsSpec spec) {
+        double min = spec.minimum().isEmpty()
+                ? Double.NEGATIVE_INFINITY
+                : Quantities.parse(spec.minimum(), QuantityKind.PRESSURE, "minimum");
+        double max = spec.maximum().isEmpty()
+                ? Double.POSITIVE_INFINITY
+                : Quantities.parse(spec.maximum(), QuantityKind.PRESSURE, "maximum");
+        return new PressureLimits(min, max);
     }
 
     /** "NPS 4" for the tables that use nominal pipe size, the bare nominal size otherwise. */

@@ -46,7 +46,8 @@ public final class HeadLossCalculator {
         double g = Gravity.STANDARD;
         DesignLimits limits = run.limits();
         List<Element> elements = run.elements();
-        double[] adjacentVelocityHead = adjacentVelocityHeads(elements, flow);
+        double[] upstreamVelocityHead = nearestVelocityHeads(elements, flow, true);
+        double[] downstreamVelocityHead = nearestVelocityHeads(elements, flow, false);
 
         List<SegmentResult> results = new ArrayList<>();
         List<ElementProfile> profiles = new ArrayList<>(elements.size());
@@ -115,8 +116,8 @@ public final class HeadLossCalculator {
                 pumpIndex = i;
                 lossesBeforePump = friction + minor;
                 elevationAtPump = elevation;
-                inletVelocityHead = adjacentVelocityHead[i];
-                outletVelocityHead = adjacentVelocityHead[i];
+                inletVelocityHead = upstreamVelocityHead[i];
+                outletVelocityHead = downstreamVelocityHead[i];
                 // Filled in once the head the run needs is known (below).
                 elementResult = pump.evaluate(flow, context);
             } else {
@@ -130,9 +131,14 @@ public final class HeadLossCalculator {
                     inletVelocityHead = velocityHead(flow, change.inletDiameter());
                     outletVelocityHead = velocityHead(flow, change.outletDiameter());
                 } else {
-                    inletVelocityHead = adjacentVelocityHead[i];
-                    outletVelocityHead = adjacentVelocityHead[i];
+                    inletVelocityHead = upstreamVelocityHead[i];
+                    outletVelocityHead = downstreamVelocityHead[i];
                 }
+            }
+            if (i == elements.size() - 1) {
+                // The delivery's velocity is neglected (a tank or header; the exit loss is listed as a fitting), so
+                // past the last element the whole energy grade is pressure and elevation.
+                outletVelocityHead = 0;
             }
             profiles.add(new ElementProfile(
                     element.id(),
@@ -302,28 +308,44 @@ public final class HeadLossCalculator {
         return out;
     }
 
-    /** For each element, the velocity head of the nearest pipe upstream, or downstream when none is upstream. */
-    private static double[] adjacentVelocityHeads(List<Element> elements, double flow) {
-        double[] out = new double[elements.size()];
-        double last = Double.NaN;
-        for (int i = 0; i < elements.size(); i++) {
+    /**
+     * For each element, the velocity head in the nearest bore on one side (upstream or downstream),
+     * or on the other side when there is none on that one; 0 in a run of devices alone.
+     */
+    private static double[] nearestVelocityHeads(List<Element> elements, double flow, boolean upstream) {
+        int n = elements.size();
+        double[] own = new double[n];
+        double[] fromBefore = new double[n];
+        double[] fromAfter = new double[n];
+        for (int i = 0; i < n; i++) {
+            own[i] = Double.NaN;
             if (elements.get(i) instanceof Segment s) {
-                last = velocityHead(flow, s.innerDiameter());
-            } else if (elements.get(i) instanceof DiameterChange d) {
-                last = velocityHead(flow, d.outletDiameter());
+                own[i] = velocityHead(flow, s.innerDiameter());
             }
-            out[i] = last;
         }
-        double next = 0;
-        for (int i = elements.size() - 1; i >= 0; i--) {
-            if (elements.get(i) instanceof Segment s) {
-                next = velocityHead(flow, s.innerDiameter());
-            } else if (elements.get(i) instanceof DiameterChange d) {
+        double last = Double.NaN;
+        for (int i = 0; i < n; i++) {
+            fromBefore[i] = last;
+            if (elements.get(i) instanceof DiameterChange d) {
+                last = velocityHead(flow, d.outletDiameter());
+            } else if (!Double.isNaN(own[i])) {
+                last = own[i];
+            }
+        }
+        double next = Double.NaN;
+        for (int i = n - 1; i >= 0; i--) {
+            fromAfter[i] = next;
+            if (elements.get(i) instanceof DiameterChange d) {
                 next = velocityHead(flow, d.inletDiameter());
+            } else if (!Double.isNaN(own[i])) {
+                next = own[i];
             }
-            if (Double.isNaN(out[i])) {
-                out[i] = next;
-            }
+        }
+        double[] out = new double[n];
+        for (int i = 0; i < n; i++) {
+            double first = upstream ? fromBefore[i] : fromAfter[i];
+            double second = upstream ? fromAfter[i] : fromBefore[i];
+            out[i] = !Double.isNaN(first) ? first : !Double.isNaN(second) ? second : 0.0;
         }
         return out;
     }

@@ -61,7 +61,7 @@ class MainWindowUiTest {
                         s.fittings(),
                         s.lossCoefficient(),
                         s.elevationChange()));
-        Project changed = new Project(
+        Project changed = Project.of(
                 p.title(),
                 p.titleBlock(),
                 p.fluid(),

@@ -60,7 +60,7 @@ class ResultsModelTest {
                             s.fittings(),
                             s.lossCoefficient(),
                             s.elevationChange()));
-            project = new org.headway.project.Project(
+            project = org.headway.project.Project.of(
                     project.title(),
                     project.titleBlock(),
                     project.fluid(),

@@ -37,7 +37,7 @@ public final class SaveLoopMain {
                     "",
                     ""));
         }
-        return new Project(
+        return Project.of(
                 "kill test",
                 Project.TitleBlock.EMPTY,
                 new Project.FluidSpec("water", "20 degC", "", "", "", ""),
