@@ -29,6 +29,13 @@ public final class HeadLossCalculator {
     static final String VAPOUR_BASIS =
             "a liquid cannot sustain an absolute pressure below its vapour pressure; common practice, no source";
 
+    /**
+     * Gauge pressures closer to zero than this (Pa, about 1 mm of water) are taken as atmospheric:
+     * a run discharging to an open tank closes its grade line on zero, and round-off or the flow
+     * solver's tolerance leaves a few pascals either side.
+     */
+    static final double GRADE_RESOLUTION = 10.0;
+
     private HeadLossCalculator() {}
 
     /**
@@ -401,7 +408,7 @@ public final class HeadLossCalculator {
         }
         if (!separated) {
             double lowest = Math.min(inlet, Math.min(outlet, high.orElse(Double.POSITIVE_INFINITY)));
-            if (lowest < 0 && !(element instanceof PumpElement)) {
+            if (lowest < -GRADE_RESOLUTION && !(element instanceof PumpElement)) {
                 cautions.add(Caution.warning(
                                 "sub-atmospheric",
                                 String.format(

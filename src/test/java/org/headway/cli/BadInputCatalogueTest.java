@@ -27,7 +27,7 @@ class BadInputCatalogueTest {
 
     @BeforeEach
     void demoProject() throws IOException {
-        try (var in = getClass().getResourceAsStream("/fluids-data/examples/gravity-spring-line.json")) {
+        try (var in = getClass().getResourceAsStream("/org/headway/project/format1/gravity-spring-line.json")) {
             project = new String(in.readAllBytes(), StandardCharsets.UTF_8);
         }
     }
