@@ -153,7 +153,7 @@ public final class PdfSheetWriter {
         List<String[]> fittings = new ArrayList<>();
         for (int i = 0; i < run.segments().size(); i++) {
             Segment s = run.segments().get(i);
-            SegmentResult sr = r.segments().get(i);
+            SegmentResult sr = r.segment(s.id()).orElseThrow();
             for (FittingUse use : s.fittings()) {
                 double k = sr.reynolds() > 0 ? use.fitting().lossCoefficient(sr.reynolds(), s.innerDiameter()) : 0;
                 fittings.add(new String[] {

@@ -141,7 +141,7 @@ public final class SheetCharts {
         elevation[0] = Quantities.fromSi(rs.isEmpty() ? 0 : rs.get(0).inletElevation(), hk, u);
         for (int i = 0; i < n; i++) {
             SegmentResult r = rs.get(i);
-            Segment s = sheet.run().segments().get(i);
+            Segment s = (Segment) sheet.run().element(r.id()).orElseThrow();
             distance[i + 1] = distance[i] + Quantities.fromSi(s.length(), lk, u);
             elevation[i + 1] = Quantities.fromSi(r.outletElevation(), hk, u);
             ein[i] = Quantities.fromSi(r.inletEnergyGrade(), hk, u);

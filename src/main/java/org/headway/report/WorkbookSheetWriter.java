@@ -83,7 +83,7 @@ public final class WorkbookSheetWriter {
             ws.value(row, 1, s.length());
             ws.value(row, 2, s.innerDiameter());
             ws.value(row, 3, s.roughness());
-            ws.value(row, 4, r.segments().get(i).totalLossCoefficient());
+            ws.value(row, 4, r.segment(s.id()).orElseThrow().totalLossCoefficient());
             ws.value(row, 5, s.elevationChange());
             ws.value(row, 6, SafeText.cell(s.pipeDescription()));
             ws.value(row, 7, SafeText.cell(s.roughnessSource()));
@@ -147,7 +147,7 @@ public final class WorkbookSheetWriter {
             int row = FIRST_RESULT_ROW + i;
             int inRow = FIRST_SEGMENT_ROW + i + 1; // 1-based row on Inputs
             int x = row + 1; // 1-based row here
-            SegmentResult sr = r.segments().get(i);
+            SegmentResult sr = r.segment(run.segments().get(i).id()).orElseThrow();
             ws.formula(row, 0, "Inputs!A" + inRow);
             ws.formula(row, 1, flow + "/(PI()*Inputs!C" + inRow + "^2/4)");
             ws.formula(row, 2, rho + "*B" + x + "*Inputs!C" + inRow + "/" + mu);
