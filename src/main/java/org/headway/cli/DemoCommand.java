@@ -21,6 +21,7 @@ import org.headway.report.CsvSheetWriter;
 import org.headway.report.HeadLossSheet;
 import org.headway.report.PdfSheetWriter;
 import org.headway.report.WorkbookSheetWriter;
+import org.headway.system.FlowSolver;
 import org.headway.system.HeadLossCalculator;
 import org.headway.system.OperatingPoint;
 import org.headway.system.RunResult;
@@ -38,6 +39,7 @@ import picocli.CommandLine.Spec;
             "Run the whole job on the bundled, invented demo project.",
             "Solves an invented orchard booster line, prints the results and writes its head-loss sheet",
             "(PDF, workbook, CSV) into reports/, replacing the demo's own earlier files, and checks an",
+            "invented coil branch with valves and rated components in flow mode, and checks an",
             "invented rig data set against the friction curves.",
             "The demo data are invented; do not use them for design."
         })
@@ -45,6 +47,9 @@ public final class DemoCommand implements Callable<Integer> {
 
     /** Classpath location of the demo project. */
     static final String DEMO_PROJECT = "/fluids-data/examples/demo-orchard-booster.json";
+
+    /** Classpath location of the demo coil branch (components between two headers). */
+    static final String DEMO_BRANCH = "/fluids-data/examples/coil-branch.json";
 
     /** Classpath location of the demo rig; its data file sits beside it. */
     static final String DEMO_RIG = "/fluids-data/examples/demo-rig.json";
@@ -110,7 +115,24 @@ public final class DemoCommand implements Callable<Integer> {
         out.println("   wrote " + csv);
         out.println("   input hash " + sheet.inputHash());
         out.println();
-        out.println("4. Rig data: " + DEMO_RIG.substring(1) + " (invented measurements)");
+        out.println("4. A coil branch between two headers: " + DEMO_BRANCH.substring(1));
+        out.println("   valves by Kv, rated coil and strainer, reducers; what flow does it take unbalanced?");
+        ResolvedProject branch =
+                ProjectResolver.resolve(ProjectFile.parse(resource(DEMO_BRANCH)), Catalog.bundled(), Path.of("."));
+        FlowSolver.Solution unbalanced = FlowSolver.solve(branch.run(), 0);
+        RunText.print(
+                out,
+                branch.run(),
+                unbalanced.result(),
+                UnitSystem.SI,
+                "flow",
+                unbalanced.message(),
+                List.of(),
+                null,
+                null,
+                List.of());
+        out.println();
+        out.println("5. Rig data: " + DEMO_RIG.substring(1) + " (invented measurements)");
         RigFile rig = RigFile.loadResource(DEMO_RIG);
         RigReport rigReport = rig.analyse(0, point -> {});
         RigCommand.printText(out, rigReport, rig.dataName(), UnitSystem.SI, 0, false);

@@ -95,9 +95,18 @@ final class RunText {
                         + ", " + run.site().basis() + ")");
         out.println();
         out.println("Friction loss:    " + q(r.totals().frictionHeadLoss(), QuantityKind.HEAD, u));
-        out.println("Fitting loss:     " + q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u));
+        double components = componentLoss(r);
+        out.println("Fitting loss:     " + q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u)
+                + (components != 0
+                        ? " (pipe fittings " + q(r.totals().minorHeadLoss() - components, QuantityKind.HEAD, u)
+                                + ", valves and components " + q(components, QuantityKind.HEAD, u) + ")"
+                        : ""));
         out.println("Static head:      " + q(r.totals().staticHead(), QuantityKind.HEAD, u));
-        out.println("Total head:       " + q(r.totals().totalHead(), QuantityKind.HEAD, u));
+        double scale = Math.abs(r.totals().staticHead())
+                + Math.abs(r.totals().frictionHeadLoss())
+                + Math.abs(r.totals().minorHeadLoss());
+        out.println(
+                "Total head:       " + q(Quantities.withoutNoise(r.totals().totalHead(), scale), QuantityKind.HEAD, u));
         out.println("Pressure drop:    " + q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u)
                 + " (friction and fittings)");
         r.npshAvailable().ifPresent(x -> out.println("NPSH available:   " + q(x, QuantityKind.HEAD, u)));
@@ -169,6 +178,17 @@ final class RunText {
 
     private static String n(double value) {
         return Quantities.formatNumber(value);
+    }
+
+    /** Loss of the elements that are neither pipes nor the pump (m), counted in the minor loss. */
+    static double componentLoss(RunResult r) {
+        double sum = 0;
+        for (ElementProfile e : r.elements()) {
+            if (!e.kind().equals("pipe") && !e.kind().equals("pump")) {
+                sum += e.result().headLoss();
+            }
+        }
+        return sum;
     }
 
     private static String clip(String s, int width) {

@@ -156,7 +156,7 @@ public final class SolveCommand implements Callable<Integer> {
                         RunJson.toJson(run, result, mode.name(), modeNote, curvePoints, operating, band, sizeChecks));
             case csv -> {
                 try {
-                    org.headway.report.CsvSheetWriter.write(result.segments(), out);
+                    org.headway.report.CsvSheetWriter.write(result, out);
                 } catch (java.io.IOException e) {
                     throw new java.io.UncheckedIOException(e);
                 }

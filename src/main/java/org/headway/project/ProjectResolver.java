@@ -69,7 +69,9 @@ public final class ProjectResolver {
     }
 
     private ResolvedProject run(Project p) {
-        FluidState fluid = attempt("fluid", () -> fluid(p.fluid()));
+        SiteAtmosphere site = attempt("site", () -> site(p.site()));
+        double airPressure = site == null ? PipeRun.STANDARD_ATMOSPHERE : site.pressure();
+        FluidState fluid = attempt("fluid", () -> fluid(p.fluid(), airPressure));
         double flow = orZero(attempt("flow", () -> Quantities.parse(p.flow(), QuantityKind.VOLUMETRIC_FLOW, "flow")));
         double uncertainty = p.flowUncertainty().isEmpty()
                 ? DEFAULT_FLOW_UNCERTAINTY
@@ -116,7 +118,6 @@ public final class ProjectResolver {
         EndCondition delivery = attempt("ends.delivery", () -> end(p.ends().delivery()));
 
         DesignLimits limits = attempt("limits", () -> limits(p.limits()));
-        SiteAtmosphere site = attempt("site", () -> site(p.site()));
         PressureLimits pressureLimits = attempt("pressureLimits", () -> pressureLimits(p.pressureLimits()));
         List<SizeSelector.CandidateSize> candidates = new ArrayList<>();
         if (p.sizing().isPresent()) {
@@ -199,10 +200,11 @@ public final class ProjectResolver {
         return value;
     }
 
-    private FluidState fluid(Project.FluidSpec spec) {
+    /** The fluid's state; without a pressure of its own it is evaluated at the site's air pressure. */
+    private FluidState fluid(Project.FluidSpec spec, double airPressure) {
         boolean hasOverrides = !spec.density().isEmpty() || !spec.viscosity().isEmpty();
         double pressure = spec.pressure().isEmpty()
-                ? PipeRun.STANDARD_ATMOSPHERE
+                ? airPressure
                 : Quantities.parse(spec.pressure(), QuantityKind.PRESSURE, "pressure");
         FluidState state;
         Fluid model = null;

@@ -8,6 +8,8 @@ import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.headway.project.AtomicFiles;
+import org.headway.system.ElementProfile;
+import org.headway.system.RunResult;
 import org.headway.system.SegmentResult;
 
 /** Writes the per-segment results as CSV: one header row with units, SI values, round-trippable numbers. */
@@ -26,7 +28,11 @@ public final class CsvSheetWriter {
         "loss_coefficient_total [-]",
         "minor_head_loss [m]",
         "outlet_energy_grade [m]",
-        "outlet_hydraulic_grade [m]"
+        "outlet_hydraulic_grade [m]",
+        "id",
+        "inlet_gauge_pressure [Pa]",
+        "outlet_gauge_pressure [Pa]",
+        "high_point_gauge_pressure [Pa]"
     };
 
     private CsvSheetWriter() {}
@@ -35,17 +41,22 @@ public final class CsvSheetWriter {
     public static void write(HeadLossSheet sheet, Path target, boolean overwrite) {
         AtomicFiles.write(target, overwrite, out -> {
             Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
-            write(sheet.result().segments(), w);
+            write(sheet.result(), w);
             w.flush();
         });
     }
 
-    /** Writes the table to a writer (used by the CLI for stdout too). */
-    public static void write(Iterable<SegmentResult> segments, Appendable w) throws java.io.IOException {
+    /**
+     * Writes the table to a writer (used by the CLI for stdout too). Columns after the grade lines
+     * were added with the element model: the pipe's id and the gauge pressures at its ends and high
+     * point (blank when no high point is given).
+     */
+    public static void write(RunResult result, Appendable w) throws java.io.IOException {
         CSVPrinter p = new CSVPrinter(
                 w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
         p.printRecord((Object[]) HEADER);
-        for (SegmentResult s : segments) {
+        for (SegmentResult s : result.segments()) {
+            ElementProfile ep = result.element(s.id()).orElseThrow();
             p.printRecord(
                     SafeText.cell(s.name()),
                     Double.toString(s.velocity()),
@@ -58,7 +69,13 @@ public final class CsvSheetWriter {
                     Double.toString(s.totalLossCoefficient()),
                     Double.toString(s.minorHeadLoss()),
                     Double.toString(s.outletEnergyGrade()),
-                    Double.toString(s.outletHydraulicGrade()));
+                    Double.toString(s.outletHydraulicGrade()),
+                    SafeText.cell(s.id()),
+                    Double.toString(ep.inletPressure()),
+                    Double.toString(ep.outletPressure()),
+                    ep.highPointPressure().isPresent()
+                            ? Double.toString(ep.highPointPressure().getAsDouble())
+                            : "");
         }
         p.flush();
     }

@@ -14,8 +14,11 @@ import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
 import org.headway.caution.Caution;
 import org.headway.project.AtomicFiles;
 import org.headway.project.Project;
+import org.headway.system.Element;
+import org.headway.system.ElementProfile;
 import org.headway.system.FittingUse;
 import org.headway.system.PipeRun;
+import org.headway.system.PumpElement;
 import org.headway.system.RunResult;
 import org.headway.system.Segment;
 import org.headway.system.SegmentResult;
@@ -88,7 +91,9 @@ public final class PdfSheetWriter {
         fluid.add(row("Fluid", f.fluid(), ""));
         fluid.add(row("Temperature", q(f.temperature(), QuantityKind.TEMPERATURE, u), "as given"));
         fluid.add(row(
-                "Pressure (absolute)", q(f.pressure(), QuantityKind.PRESSURE, u), "as given or standard atmosphere"));
+                "Pressure (absolute)",
+                q(f.pressure(), QuantityKind.PRESSURE, u),
+                "as given, else the site barometric pressure"));
         fluid.add(row("Density ρ", q(f.density(), QuantityKind.DENSITY, u), f.densitySource()));
         fluid.add(row(
                 "Dynamic viscosity μ",
@@ -115,11 +120,19 @@ public final class PdfSheetWriter {
                 "Delivery end",
                 end(run.delivery().level(), run.delivery().pressure(), u),
                 "level above pipe outlet; gauge pressure"));
+        fluid.add(row(
+                "Site atmosphere",
+                q(run.site().pressure(), QuantityKind.PRESSURE, u) + " absolute",
+                run.site().basis() + "; used for NPSH available and every absolute pressure"));
         if (run.pump().isPresent()) {
             var pump = run.pump().get();
+            var pumpElement = run.pumpElement().orElseThrow();
             fluid.add(row(
                     "Pump",
-                    pump.name() + ", upstream of segment " + (run.pumpPosition() + 1),
+                    pump.name() + " (element " + pumpElement.id() + ")"
+                            + (pumpElement.speedRatio() != 1.0
+                                    ? ", speed ratio " + Quantities.formatNumber(pumpElement.speedRatio())
+                                    : ""),
                     pump.points().size() + " points, quadratic fit R² = "
                             + String.format(Locale.ROOT, "%.5f", pump.rSquared())
                             + pump.npshRequired().stream()
@@ -179,6 +192,23 @@ public final class PdfSheetWriter {
                     SMALL);
         }
 
+        List<String[]> components = new ArrayList<>();
+        for (Element e : run.elements()) {
+            if (e instanceof Segment || e instanceof PumpElement) {
+                continue;
+            }
+            ElementProfile ep = r.element(e.id()).orElseThrow();
+            components.add(new String[] {e.id(), e.kind(), e.name(), ep.result().law()});
+        }
+        if (!components.isEmpty()) {
+            pdf.space(4);
+            pdf.table(
+                    new String[] {"Element", "Kind", "Name", "Law and source"},
+                    components,
+                    new float[] {0.12f, 0.1f, 0.2f, 0.58f},
+                    SMALL);
+        }
+
         // Results
         pdf.heading("Results at the design flow", 12);
         String h = Quantities.unitSymbol(QuantityKind.HEAD, u);
@@ -212,11 +242,60 @@ public final class PdfSheetWriter {
                 res,
                 new float[] {0.16f, 0.08f, 0.1f, 0.1f, 0.09f, 0.17f, 0.1f, 0.08f, 0.12f},
                 SMALL);
+        pdf.space(4);
+        pdf.paragraph(
+                "Pressures along the run (gauge; absolute = gauge + site barometric pressure "
+                        + q(run.site().pressure(), QuantityKind.PRESSURE, u) + ")",
+                pdf.bold,
+                BODY,
+                PdfLayout.MARGIN,
+                pdf.width());
+        String pu = Quantities.unitSymbol(QuantityKind.PRESSURE, u);
+        List<String[]> pressures = new ArrayList<>();
+        for (ElementProfile ep : r.elements()) {
+            pressures.add(new String[] {
+                ep.id(),
+                ep.kind(),
+                n(Quantities.fromSi(ep.result().headLoss(), QuantityKind.HEAD, u)),
+                n(Quantities.fromSi(ep.inletPressure(), QuantityKind.PRESSURE, u)),
+                n(Quantities.fromSi(ep.outletPressure(), QuantityKind.PRESSURE, u)),
+                ep.highPointPressure().isPresent()
+                        ? n(Quantities.fromSi(ep.highPointPressure().getAsDouble(), QuantityKind.PRESSURE, u))
+                        : "—",
+                n(Quantities.fromSi(ep.lowestPressure() + run.site().pressure(), QuantityKind.PRESSURE, u)),
+                ep.cautions().isEmpty() ? "" : "see cautions"
+            });
+        }
+        pdf.table(
+                new String[] {
+                    "Element",
+                    "Kind",
+                    "Head loss [" + h + "]",
+                    "p inlet [" + pu + "]",
+                    "p outlet [" + pu + "]",
+                    "p high point [" + pu + "]",
+                    "lowest p abs. [" + pu + "]",
+                    "Check"
+                },
+                pressures,
+                new float[] {0.13f, 0.1f, 0.11f, 0.12f, 0.12f, 0.14f, 0.15f, 0.13f},
+                SMALL);
         List<String[]> totals = new ArrayList<>();
         totals.add(row("Friction loss Σh_f", q(r.totals().frictionHeadLoss(), QuantityKind.HEAD, u), ""));
-        totals.add(row("Fitting loss Σh_m", q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u), ""));
+        totals.add(row(
+                "Fitting and component loss Σh_m",
+                q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u),
+                "pipe fittings plus valves, rated components and diameter changes"));
         totals.add(row("Static head", q(r.totals().staticHead(), QuantityKind.HEAD, u), "elevation and end heads"));
-        totals.add(row("Total head H", q(r.totals().totalHead(), QuantityKind.HEAD, u), "what the pump must supply"));
+        double scale = Math.abs(r.totals().staticHead())
+                + Math.abs(r.totals().frictionHeadLoss())
+                + Math.abs(r.totals().minorHeadLoss());
+        totals.add(row(
+                "Total head H",
+                q(Quantities.withoutNoise(r.totals().totalHead(), scale), QuantityKind.HEAD, u),
+                run.pump().isPresent()
+                        ? "what the pump must supply"
+                        : "what a pump would have to supply; negative: head the ends give beyond the losses"));
         totals.add(row("Pressure drop", q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u), "ρ g (Σh_f + Σh_m)"));
         r.npshAvailable()
                 .ifPresent(v -> totals.add(row("NPSH available", q(v, QuantityKind.HEAD, u), "at the pump inlet")));
@@ -266,7 +345,8 @@ public final class PdfSheetWriter {
                 "Steady, incompressible, isothermal flow of a Newtonian liquid filling every pipe. Elevations are"
                         + " measured from the run inlet. Velocity at the source and delivery ends is neglected; a"
                         + " discharge into a tank carries its exit loss as a fitting. Minor losses use the K of each"
-                        + " fitting referred to the velocity in its own segment. Fluid properties are evaluated once"
+                        + " fitting referred to the velocity in its own segment; valves, rated"
+                        + " components and diameter changes carry their own laws, whatever the pipe size. Fluid properties are evaluated once"
                         + " at the run temperature. Gravity is standard gravity.",
                 BODY);
 

@@ -8,8 +8,13 @@ import org.dhatim.fastexcel.Workbook;
 import org.dhatim.fastexcel.Worksheet;
 import org.headway.caution.Caution;
 import org.headway.project.AtomicFiles;
+import org.headway.system.Element;
+import org.headway.system.ElementProfile;
+import org.headway.system.FlowCoefficientValve;
 import org.headway.system.Gravity;
 import org.headway.system.PipeRun;
+import org.headway.system.PumpElement;
+import org.headway.system.RatedComponent;
 import org.headway.system.RunResult;
 import org.headway.system.Segment;
 import org.headway.system.SegmentResult;
@@ -27,6 +32,8 @@ public final class WorkbookSheetWriter {
     static final int FIRST_SEGMENT_ROW = 15;
     /** Row (0-based) of the first segment on the Results sheet. */
     static final int FIRST_RESULT_ROW = 4;
+    /** Row (0-based) of the first element on the Elements sheet. */
+    static final int FIRST_ELEMENT_ROW = 4;
 
     private WorkbookSheetWriter() {}
 
@@ -40,6 +47,7 @@ public final class WorkbookSheetWriter {
             Workbook wb = new Workbook(out, "Headway", "1.0");
             writeInputs(wb.newWorksheet("Inputs"), sheet);
             writeResults(wb.newWorksheet("Results"), sheet);
+            writeElements(wb.newWorksheet("Elements"), sheet);
             writeNotes(wb.newWorksheet("Methods and cautions"), sheet);
             wb.finish();
         });
@@ -60,6 +68,8 @@ public final class WorkbookSheetWriter {
         label(ws, 10, "source gauge pressure [Pa]", run.source().pressure());
         label(ws, 11, "delivery level above pipe outlet [m]", run.delivery().level());
         label(ws, 12, "delivery gauge pressure [Pa]", run.delivery().pressure());
+        label(ws, 13, "site barometric pressure [Pa]", run.site().pressure());
+        ws.value(13, 2, SafeText.cell(run.site().basis()));
         int h = FIRST_SEGMENT_ROW - 1;
         String[] header = {
             "segment",
@@ -180,8 +190,9 @@ public final class WorkbookSheetWriter {
         totalRow(
                 ws,
                 t + 2,
-                "minor loss Σh_m [m]",
-                "SUM(H" + first + ":H" + last + ")",
+                "minor loss Σh_m [m] (fittings + components)",
+                "SUM(H" + first + ":H" + last + ")+SUM(Elements!H" + (FIRST_ELEMENT_ROW + 1) + ":Elements!H"
+                        + (FIRST_ELEMENT_ROW + Math.max(1, run.elements().size())) + ")",
                 r.totals().minorHeadLoss());
         totalRow(
                 ws,
@@ -204,6 +215,88 @@ public final class WorkbookSheetWriter {
                 r.totals().pressureDrop());
         ws.width(0, 34);
         for (int c = 1; c < 9; c++) {
+            ws.width(c, 22);
+        }
+    }
+
+    /**
+     * One row per element in run order: its law, Headway's head loss, a live check formula where the
+     * law is closed-form (valve by Kv, rated component), the component loss counted in Σh_m and the
+     * gauge and absolute pressures at its ends.
+     */
+    private static void writeElements(Worksheet ws, HeadLossSheet sheet) throws IOException {
+        PipeRun run = sheet.run();
+        RunResult r = sheet.result();
+        ws.value(0, 0, "Elements in run order — pressures gauge unless marked absolute (SI units)");
+        ws.style(0, 0).bold().fontSize(13).set();
+        ws.value(
+                1,
+                0,
+                "Column H is the loss of valves, rated components and diameter changes, counted in Σh_m on"
+                        + " the Results sheet; pipes and the pump count there through their own rows.");
+        String[] header = {
+            "element id",
+            "kind",
+            "name",
+            "law",
+            "flow Q [m³/s]",
+            "head loss [m] (Headway)",
+            "head loss [m] (check formula)",
+            "component loss in Σh_m [m]",
+            "inlet gauge pressure [Pa]",
+            "outlet gauge pressure [Pa]",
+            "lowest absolute pressure [Pa]"
+        };
+        int h = FIRST_ELEMENT_ROW - 1;
+        for (int c = 0; c < header.length; c++) {
+            ws.value(h, c, header[c]);
+            ws.style(h, c).bold().set();
+        }
+        String g = in(5);
+        String rho = in(6);
+        String flow = in(8);
+        String baro = in(13);
+        for (int i = 0; i < run.elements().size(); i++) {
+            Element e = run.elements().get(i);
+            ElementProfile ep = r.element(e.id()).orElseThrow();
+            int row = FIRST_ELEMENT_ROW + i;
+            int x = row + 1;
+            ws.value(row, 0, SafeText.cell(e.id()));
+            ws.value(row, 1, e.kind());
+            ws.value(row, 2, SafeText.cell(e.name()));
+            ws.value(row, 3, SafeText.cell(ep.result().law()));
+            ws.formula(row, 4, flow);
+            ws.value(row, 5, ep.result().headLoss());
+            if (e instanceof FlowCoefficientValve v) {
+                ws.formula(
+                        row,
+                        6,
+                        "(ABS(E" + x + ")*3600/" + v.flowCoefficient() + ")^2*100000/(1000*" + g + ")*SIGN(E" + x
+                                + ")");
+            } else if (e instanceof RatedComponent c) {
+                ws.formula(
+                        row,
+                        6,
+                        c.ratedPressureDrop() + "*(ABS(E" + x + ")/" + c.ratedFlow() + ")^" + c.exponent() + "/(" + rho
+                                + "*" + g + ")*SIGN(E" + x + ")");
+            } else {
+                ws.value(row, 6, "see Results or law");
+            }
+            boolean component = !(e instanceof Segment) && !(e instanceof PumpElement);
+            if (component) {
+                ws.formula(row, 7, "F" + x);
+            } else {
+                ws.value(row, 7, 0.0);
+            }
+            ws.value(row, 8, ep.inletPressure());
+            ws.value(row, 9, ep.outletPressure());
+            ws.formula(row, 10, "MIN(I" + x + ",J" + x + ")+" + baro);
+        }
+        ws.width(0, 16);
+        ws.width(1, 12);
+        ws.width(2, 24);
+        ws.width(3, 60);
+        for (int c = 4; c < header.length; c++) {
             ws.width(c, 22);
         }
     }

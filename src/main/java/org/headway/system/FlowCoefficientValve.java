@@ -113,8 +113,10 @@ public record FlowCoefficientValve(String id, String name, double flowCoefficien
                 flow,
                 h,
                 rho * Gravity.STANDARD * h,
-                givenAs + " (Kv " + trim(flowCoefficient)
-                        + " m³/h at 1 bar): Δp = (ρ/ρ₀)(Q/Kv)² × 1 bar, IEC 60534-2-1",
+                (givenAs.startsWith("Kv")
+                                ? givenAs + " m³/h at 1 bar"
+                                : givenAs + " US gpm at 1 psi (Kv " + trim(flowCoefficient) + " m³/h at 1 bar)")
+                        + ": Δp = (ρ/ρ₀)(Q/Kv)² × 1 bar, IEC 60534-2-1",
                 List.of());
     }
 }

@@ -67,6 +67,7 @@ public final class HeadLossCalculator {
         double elevation = 0;
         double friction = 0;
         double minor = 0;
+        double componentLoss = 0;
         double staticHead = run.staticHead();
         double lossesBeforePump = 0;
         double elevationAtPump = 0;
@@ -133,6 +134,7 @@ public final class HeadLossCalculator {
                 energy -= loss;
                 elevation += element.rise();
                 minor += loss;
+                componentLoss += loss;
                 cautions.addAll(elementResult.cautions());
                 if (element instanceof DiameterChange change) {
                     inletVelocityHead = velocityHead(flow, change.inletDiameter());
@@ -209,14 +211,16 @@ public final class HeadLossCalculator {
         RunTotals totals = new RunTotals(
                 friction, minor, staticHead, totalHead, rho * g * (friction + minor), rho * g * totalHead);
 
-        if (flow > 0 && minor > friction && minor > 0) {
+        // Components carry their own ratings; the scatter this caution is about is that of tabulated K values.
+        double fittingLoss = minor - componentLoss;
+        if (flow > 0 && fittingLoss > friction && fittingLoss > 0) {
             cautions.add(Caution.note(
                     "minor-losses-dominate",
                     String.format(
                             Locale.ROOT,
                             "fitting losses (%.3g m) exceed pipe friction (%.3g m); published K values scatter"
                                     + " more than friction factors, so the total is less certain",
-                            minor,
+                            fittingLoss,
                             friction),
                     "common practice, no source"));
         }
@@ -230,6 +234,19 @@ public final class HeadLossCalculator {
                             "no pump is given for this run; at this flow it needs %.3g m of head that the ends alone"
                                     + " do not supply",
                             totalHead),
+                    "energy balance"));
+        }
+        if (pumpIndex < 0 && totalHead < -resolution && flow > 0) {
+            cautions.add(Caution.note(
+                    "head-surplus",
+                    String.format(
+                            Locale.ROOT,
+                            "the ends supply %.3g m (%.3g kPa) more head than the run loses at this flow, so the"
+                                    + " pressures along it end above the delivery's; unless a balancing or control"
+                                    + " valve takes that up, the run carries more than this flow (the flow mode finds"
+                                    + " how much)",
+                            -totalHead,
+                            -rho * g * totalHead / 1000.0),
                     "energy balance"));
         }
 

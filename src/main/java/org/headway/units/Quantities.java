@@ -336,6 +336,19 @@ public final class Quantities {
     }
 
     /**
+     * A result that is the difference of larger numbers, with the rounding noise of that difference
+     * removed: 0 when |value| is below 10⁻⁹ of the scale it was computed from (a total head of
+     * −1.4·10⁻¹⁴ m beside a 12 m static head is zero, not a number to print).
+     *
+     * @param value the computed value
+     * @param scale the size of the terms it was computed from
+     * @return the value, or 0 when it is rounding noise
+     */
+    public static double withoutNoise(double value, double scale) {
+        return Math.abs(value) <= 1e-9 * Math.abs(scale) ? 0.0 : value;
+    }
+
+    /**
      * The unit a kind is shown in.
      *
      * @param kind the quantity kind

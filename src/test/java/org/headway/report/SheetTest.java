@@ -9,6 +9,7 @@ import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
@@ -152,6 +153,86 @@ class SheetTest {
             formulas += check(eval, results.getRow(t + 4).getCell(2), r.totals().pressureDrop());
             assertEquals(5 * r.segments().size() + 5, formulas);
         }
+    }
+
+    private static String resource(String path) throws Exception {
+        try (InputStream in = SheetTest.class.getResourceAsStream(path)) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+    }
+
+    /**
+     * The coil branch carries a valve by Kv, two rated components, two reducers and isolation
+     * valves. The Elements sheet's check formulas are the defining laws written independently of the
+     * engine (Kv: IEC 60534-2-1 turbulent liquid sizing equation; rated component: the power law of
+     * a maker's rating, common practice, no source), and Σh_m on the Results sheet must now count the
+     * components too.
+     */
+    @Test
+    void workbookElementsSheetChecksComponentLawsAndCountsThemInTheMinorLoss(@TempDir Path dir) throws Exception {
+        HeadLossSheet s = sheet(resource("/fluids-data/examples/coil-branch.json"));
+        Path xlsx = dir.resolve("branch.xlsx");
+        WorkbookSheetWriter.write(s, xlsx, false);
+        RunResult r = s.result();
+        try (XSSFWorkbook wb = new XSSFWorkbook(xlsx.toFile())) {
+            FormulaEvaluator eval = wb.getCreationHelper().createFormulaEvaluator();
+            Sheet elements = wb.getSheet("Elements");
+            int checked = 0;
+            double components = 0;
+            for (int i = 0; i < r.elements().size(); i++) {
+                Row row = elements.getRow(WorkbookSheetWriter.FIRST_ELEMENT_ROW + i);
+                var ep = r.elements().get(i);
+                assertEquals(ep.id(), row.getCell(0).getStringCellValue());
+                if (ep.kind().equals("valve") || ep.kind().equals("component")) {
+                    checked += check(eval, row.getCell(6), ep.result().headLoss());
+                }
+                if (!ep.kind().equals("pipe")) {
+                    components += ep.result().headLoss();
+                }
+                double lowestAbsolute = eval.evaluate(row.getCell(10)).getNumberValue();
+                assertEquals(
+                        Math.min(ep.inletPressure(), ep.outletPressure())
+                                + s.run().site().pressure(),
+                        lowestAbsolute,
+                        1e-9 * lowestAbsolute);
+            }
+            assertEquals(3, checked, "one valve and two rated components");
+            assertTrue(components > 0);
+            Sheet results = wb.getSheet("Results");
+            int t = WorkbookSheetWriter.FIRST_RESULT_ROW + r.segments().size() + 2;
+            check(eval, results.getRow(t + 1).getCell(2), r.totals().minorHeadLoss());
+            check(eval, results.getRow(t + 3).getCell(2), r.totals().totalHead());
+        }
+    }
+
+    @Test
+    void pdfAndCsvShowElementsPressuresAndTheSiteAtmosphere(@TempDir Path dir) throws Exception {
+        HeadLossSheet s = sheet(resource("/fluids-data/examples/coil-branch.json"));
+        Path pdf = dir.resolve("branch.pdf");
+        PdfSheetWriter.write(s, pdf, false, UnitSystem.SI);
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            String flat = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertTrue(flat.contains("Pressures along the run"), "pressure table missing");
+            assertTrue(flat.contains("Site atmosphere"));
+            assertTrue(flat.contains("standard atmosphere at 240"), "site basis missing");
+            for (var ep : s.result().elements()) {
+                assertTrue(flat.contains(ep.id()), "element id missing: " + ep.id());
+            }
+            assertTrue(flat.contains("IEC 60534-2-1"), "the Kv law's standard is cited");
+        }
+        Path csv = dir.resolve("branch.csv");
+        CsvSheetWriter.write(s, csv, false);
+        List<String> lines = Files.readAllLines(csv);
+        assertTrue(lines.get(0)
+                .endsWith(",id,inlet_gauge_pressure [Pa],outlet_gauge_pressure [Pa],"
+                        + "high_point_gauge_pressure [Pa]"));
+        assertEquals(1 + s.result().segments().size(), lines.size());
+        var first = s.result().element("branch-flow").orElseThrow();
+        String row = lines.stream()
+                .filter(l -> l.contains(",branch-flow,"))
+                .findFirst()
+                .orElseThrow();
+        assertTrue(row.contains("," + first.inletPressure() + "," + first.outletPressure() + ","), row);
     }
 
     private static int check(FormulaEvaluator eval, Cell cell, double expected) {
