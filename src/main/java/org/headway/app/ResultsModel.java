@@ -17,6 +17,7 @@ import javafx.collections.ObservableList;
 import org.headway.caution.Caution;
 import org.headway.caution.Severity;
 import org.headway.report.HeadLossSheet;
+import org.headway.system.ElementProfile;
 import org.headway.system.OperatingPoint;
 import org.headway.system.RunResult;
 import org.headway.system.RunTotals;
@@ -46,6 +47,20 @@ public final class ResultsModel {
             String minorLoss,
             String totalLoss) {}
 
+    /**
+     * One row of the element table: every element in run order with its loss and the gauge pressures
+     * at its ends, formatted with units.
+     */
+    public record ElementRow(
+            String id,
+            String kind,
+            String name,
+            String headLoss,
+            String inletPressure,
+            String outletPressure,
+            String lowestAbsolutePressure,
+            String law) {}
+
     /** One line of the totals. */
     public record TotalRow(String label, String value) {}
 
@@ -74,6 +89,7 @@ public final class ResultsModel {
     private final String version;
 
     private final ObservableList<SegmentRow> rows = FXCollections.observableArrayList();
+    private final ObservableList<ElementRow> elementRows = FXCollections.observableArrayList();
     private final ObservableList<TotalRow> totals = FXCollections.observableArrayList();
     private final ObservableList<CautionItem> cautions = FXCollections.observableArrayList();
     private final StringProperty problem = new SimpleStringProperty("");
@@ -136,11 +152,30 @@ public final class ResultsModel {
                     Quantities.format(s.headLoss(), QuantityKind.HEAD, u)));
         }
         rows.setAll(newRows);
+        elementRows.setAll(elementRows(sheet, u));
         totals.setAll(totalRows(sheet, u));
         cautions.setAll(cautionItems(sheet));
         gradeChart.set(o.grades());
         systemChart.set(o.system());
         frictionChart.set(o.friction());
+    }
+
+    static List<ElementRow> elementRows(HeadLossSheet sheet, UnitSystem u) {
+        double air = sheet.run().site().pressure();
+        List<ElementRow> list = new ArrayList<>();
+        for (ElementProfile e : sheet.result().elements()) {
+            double scale = Math.abs(e.inletPressure()) + Math.abs(e.outletPressure());
+            list.add(new ElementRow(
+                    e.id(),
+                    e.kind(),
+                    e.name(),
+                    Quantities.format(e.result().headLoss(), QuantityKind.HEAD, u),
+                    Quantities.format(Quantities.withoutNoise(e.inletPressure(), scale), QuantityKind.PRESSURE, u),
+                    Quantities.format(Quantities.withoutNoise(e.outletPressure(), scale), QuantityKind.PRESSURE, u),
+                    Quantities.format(e.lowestPressure() + air, QuantityKind.PRESSURE, u),
+                    e.result().law()));
+        }
+        return list;
     }
 
     static List<TotalRow> totalRows(HeadLossSheet sheet, UnitSystem u) {
@@ -152,8 +187,15 @@ public final class ResultsModel {
         list.add(new TotalRow("Fittings loss", Quantities.format(t.minorHeadLoss(), QuantityKind.HEAD, u)));
         list.add(new TotalRow("Total head loss", Quantities.format(t.headLoss(), QuantityKind.HEAD, u)));
         list.add(new TotalRow("Static head", Quantities.format(t.staticHead(), QuantityKind.HEAD, u)));
-        list.add(new TotalRow("Head required", Quantities.format(t.totalHead(), QuantityKind.HEAD, u)));
+        double scale = Math.abs(t.staticHead()) + Math.abs(t.frictionHeadLoss()) + Math.abs(t.minorHeadLoss());
+        list.add(new TotalRow(
+                "Head required",
+                Quantities.format(Quantities.withoutNoise(t.totalHead(), scale), QuantityKind.HEAD, u)));
         list.add(new TotalRow("Pressure drop", Quantities.format(t.pressureDrop(), QuantityKind.PRESSURE, u)));
+        list.add(new TotalRow(
+                "Site air pressure",
+                Quantities.format(sheet.run().site().pressure(), QuantityKind.PRESSURE, u) + " ("
+                        + sheet.run().site().basis() + ")"));
         r.npshAvailable()
                 .ifPresent(n -> list.add(new TotalRow("NPSH available", Quantities.format(n, QuantityKind.HEAD, u))));
         UncertaintyBand band = sheet.band();
@@ -211,6 +253,10 @@ public final class ResultsModel {
 
     public ObservableList<SegmentRow> rows() {
         return rows;
+    }
+
+    public ObservableList<ElementRow> elementRows() {
+        return elementRows;
     }
 
     public ObservableList<TotalRow> totals() {

@@ -47,8 +47,45 @@ final class ResultsView extends VBox {
                 .add(column("ΣK", 46, "sum of fitting loss coefficients", ResultsModel.SegmentRow::lossCoefficient));
         table.getColumns().add(column("h_m", 88, "fittings loss h_m = ΣK V²/(2g)", ResultsModel.SegmentRow::minorLoss));
         table.getColumns().add(column("h_f + h_m", 88, "segment head loss", ResultsModel.SegmentRow::totalLoss));
-        table.setPrefHeight(220);
+        table.setPrefHeight(170);
         table.setPlaceholder(new Label("No results yet"));
+
+        Label elementsHeading = new Label("Elements and pressures (gauge; lowest absolute adds the site air pressure)");
+        elementsHeading.getStyleClass().add("heading");
+        TableView<ResultsModel.ElementRow> elements = new TableView<>(model.elementRows());
+        elements.setId("elements-table");
+        elements.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+        elements.getColumns()
+                .add(ResultsView.<ResultsModel.ElementRow>column("Id", 96, "element id", ResultsModel.ElementRow::id));
+        elements.getColumns()
+                .add(ResultsView.<ResultsModel.ElementRow>column(
+                        "Kind", 70, "element kind", ResultsModel.ElementRow::kind));
+        elements.getColumns()
+                .add(ResultsView.<ResultsModel.ElementRow>column(
+                        "Head loss",
+                        80,
+                        "head lost across the element (negative: a pump's gain)",
+                        ResultsModel.ElementRow::headLoss));
+        elements.getColumns()
+                .add(ResultsView.<ResultsModel.ElementRow>column(
+                        "p in", 80, "gauge pressure at the element's inlet", ResultsModel.ElementRow::inletPressure));
+        elements.getColumns()
+                .add(ResultsView.<ResultsModel.ElementRow>column(
+                        "p out",
+                        80,
+                        "gauge pressure at the element's outlet",
+                        ResultsModel.ElementRow::outletPressure));
+        elements.getColumns()
+                .add(ResultsView.<ResultsModel.ElementRow>column(
+                        "p min abs.",
+                        88,
+                        "lowest absolute pressure along the element (ends and high point)",
+                        ResultsModel.ElementRow::lowestAbsolutePressure));
+        elements.getColumns()
+                .add(ResultsView.<ResultsModel.ElementRow>column(
+                        "Law", 220, "the element's law and its source", ResultsModel.ElementRow::law));
+        elements.setPrefHeight(200);
+        elements.setPlaceholder(new Label("No results yet"));
 
         Label heading = new Label("Run totals");
         heading.getStyleClass().add("heading");
@@ -62,7 +99,7 @@ final class ResultsView extends VBox {
         computing.getStyleClass().add("hint");
         computing.visibleProperty().bind(model.computingProperty());
 
-        getChildren().addAll(problem, table, heading, totals, computing);
+        getChildren().addAll(problem, table, elementsHeading, elements, heading, totals, computing);
     }
 
     private void fillTotals(ResultsModel model) {
@@ -95,9 +132,9 @@ final class ResultsView extends VBox {
         }
     }
 
-    private static TableColumn<ResultsModel.SegmentRow, String> column(
-            String title, double width, String tip, Function<ResultsModel.SegmentRow, String> value) {
-        TableColumn<ResultsModel.SegmentRow, String> c = new TableColumn<>();
+    private static <R> TableColumn<R, String> column(
+            String title, double width, String tip, Function<R, String> value) {
+        TableColumn<R, String> c = new TableColumn<>();
         Label header = new Label(title);
         header.setTooltip(new javafx.scene.control.Tooltip(tip));
         c.setGraphic(header);

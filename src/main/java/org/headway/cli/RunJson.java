@@ -95,6 +95,12 @@ final class RunJson {
         totals.put("pressure_drop_pa", result.totals().pressureDrop());
         totals.put("pump_pressure_rise_pa", result.totals().pumpPressureRise());
         result.npshAvailable().ifPresent(v -> totals.put("npsh_available_m", v));
+        run.pumpElement()
+                .flatMap(pe -> {
+                    var v = pe.npshRequiredAt(result.flow());
+                    return v.isPresent() ? java.util.Optional.of(v.getAsDouble()) : java.util.Optional.empty();
+                })
+                .ifPresent(v -> totals.put("npsh_required_m", v));
         if (operating != null) {
             ObjectNode op = root.putObject("operating_point");
             op.put("found", operating.found());

@@ -110,6 +110,10 @@ final class RunText {
         out.println("Pressure drop:    " + q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u)
                 + " (friction and fittings)");
         r.npshAvailable().ifPresent(x -> out.println("NPSH available:   " + q(x, QuantityKind.HEAD, u)));
+        run.pumpElement()
+                .ifPresent(pe -> pe.npshRequiredAt(r.flow())
+                        .ifPresent(x -> out.println("NPSH required:    " + q(x, QuantityKind.HEAD, u)
+                                + (pe.curve().npshCurve().isEmpty() ? "" : " (maker's NPSH curve at this flow)"))));
         if (band != null && band.flowUncertainty() + 0 >= 0) {
             out.println("Head-loss band:   " + q(band.headLoss().nominal(), QuantityKind.HEAD, u) + " (low "
                     + q(band.headLoss().low(), QuantityKind.HEAD, u) + ", high "

@@ -425,7 +425,17 @@ public record Project(
     }
 
     /** A pump point as text. */
-    public record PumpPointSpec(String flow, String head) {}
+    public record PumpPointSpec(String flow, String head, String npshRequired) {
+
+        public PumpPointSpec {
+            npshRequired = npshRequired == null ? "" : npshRequired;
+        }
+
+        /** A point without NPSH required. */
+        public PumpPointSpec(String flow, String head) {
+            this(flow, head, "");
+        }
+    }
 
     /** Design limits as text, each optional. */
     public record LimitsSpec(

@@ -353,8 +353,9 @@ public final class ProjectFile {
         ArrayNode pts = p.array("points", true);
         for (int i = 0; i < pts.size(); i++) {
             Obj pt = new Obj(pts.get(i), p.path + ".points[" + i + "]");
-            pt.allow("flow", "head");
-            points.add(new Project.PumpPointSpec(pt.quantityRequired("flow"), pt.quantityRequired("head")));
+            pt.allow("flow", "head", "npshRequired");
+            points.add(new Project.PumpPointSpec(
+                    pt.quantityRequired("flow"), pt.quantityRequired("head"), pt.quantity("npshRequired")));
         }
         return points;
     }
@@ -503,6 +504,7 @@ public final class ProjectFile {
                     ObjectNode ptn = pts.addObject();
                     ptn.put("flow", pt.flow());
                     ptn.put("head", pt.head());
+                    putIf(ptn, "npshRequired", pt.npshRequired());
                 }
                 putIf(n, "npshRequired", pump.npshRequired());
                 putIf(n, "speedRatio", pump.speedRatio());

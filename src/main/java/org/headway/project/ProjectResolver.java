@@ -637,8 +637,24 @@ public final class ProjectResolver {
         OptionalDouble npshr = spec.npshRequired().isEmpty()
                 ? OptionalDouble.empty()
                 : OptionalDouble.of(Quantities.parse(spec.npshRequired(), QuantityKind.HEAD, "npshRequired"));
+        List<PumpCurve.Point> npshCurve = new ArrayList<>();
+        for (int i = 0; i < spec.points().size(); i++) {
+            Project.PumpPointSpec pt = spec.points().get(i);
+            if (!pt.npshRequired().isEmpty()) {
+                npshCurve.add(new PumpCurve.Point(
+                        points.get(i).flow(),
+                        Quantities.parse(pt.npshRequired(), QuantityKind.HEAD, "points[" + i + "].npshRequired")));
+            }
+        }
+        if (!npshCurve.isEmpty() && npshr.isPresent()) {
+            throw new InputException(
+                    "npshRequired",
+                    "given both for the pump and for its points; give one value for the duty or a curve on the"
+                            + " points, not both");
+        }
         try {
-            return PumpCurve.fit(spec.name(), points, npshr);
+            PumpCurve curve = PumpCurve.fit(spec.name(), points, npshr);
+            return npshCurve.isEmpty() ? curve : curve.withNpshCurve(npshCurve);
         } catch (InputException e) {
             String where = e.where().startsWith("pump.") ? e.where().substring(5) : e.where();
             throw new InputException(where, e.problem());

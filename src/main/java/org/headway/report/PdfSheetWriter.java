@@ -135,8 +135,13 @@ public final class PdfSheetWriter {
                                     : ""),
                     pump.points().size() + " points, quadratic fit R² = "
                             + String.format(Locale.ROOT, "%.5f", pump.rSquared())
-                            + pump.npshRequired().stream()
-                                    .mapToObj(v -> ", NPSH required " + q(v, QuantityKind.HEAD, u))
+                            + pumpElement.npshRequiredAt(r.flow()).stream()
+                                    .mapToObj(v -> ", NPSH required " + q(v, QuantityKind.HEAD, u)
+                                            + (pump.npshCurve().isEmpty()
+                                                    ? ""
+                                                    : " at " + q(r.flow(), QuantityKind.VOLUMETRIC_FLOW, u)
+                                                            + " from the maker's NPSH curve ("
+                                                            + pump.npshCurve().size() + " points)"))
                                     .findFirst()
                                     .orElse("")));
         }

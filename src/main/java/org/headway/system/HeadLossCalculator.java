@@ -261,7 +261,20 @@ public final class HeadLossCalculator {
                         - elevationAtPump
                         + (run.atmosphericPressure() - fluid.vapourPressure().getAsDouble()) / (rho * g);
                 npsh = OptionalDouble.of(value);
-                OptionalDouble requiredGiven = pump.npshRequired();
+                OptionalDouble requiredGiven = pump.npshRequiredAt(flow);
+                if (pump.curve().npshRequiredOutsideCurve(flow / pump.speedRatio())) {
+                    cautions.add(Caution.warning(
+                                    "npsh-required-extrapolated",
+                                    String.format(
+                                            Locale.ROOT,
+                                            "flow %.4g L/s lies outside the maker's NPSH-required points; the"
+                                                    + " nearest end value %.3g m is used, and NPSH required usually"
+                                                    + " rises steeply beyond the last point",
+                                            flow * 1000.0,
+                                            requiredGiven.orElse(0.0)),
+                                    "common practice, no source")
+                            .about(pump.id()));
+                }
                 double required = requiredGiven.orElse(0.0);
                 double margin = limits.npshMargin();
                 if (value < required + margin) {

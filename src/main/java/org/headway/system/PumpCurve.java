@@ -29,6 +29,7 @@ public final class PumpCurve {
     private final double[] coefficients;
     private final double rSquared;
     private final OptionalDouble npshRequired;
+    private final List<Point> npshCurve;
     private final String name;
 
     private PumpCurve(String name, List<Point> points, double[] coefficients, double rSquared, OptionalDouble npshr) {
@@ -37,6 +38,85 @@ public final class PumpCurve {
         this.coefficients = coefficients;
         this.rSquared = rSquared;
         this.npshRequired = npshr;
+        this.npshCurve = List.of();
+    }
+
+    private PumpCurve(PumpCurve base, List<Point> npshCurve) {
+        this.name = base.name;
+        this.points = base.points;
+        this.coefficients = base.coefficients;
+        this.rSquared = base.rSquared;
+        this.npshRequired = base.npshRequired;
+        this.npshCurve = List.copyOf(npshCurve);
+    }
+
+    /**
+     * The same head curve with the maker's NPSH-required curve: NPSH required against flow, read
+     * between the points by straight lines (the maker's curve is smooth and rising; between
+     * published points a straight line is the reading an engineer makes from the chart, common
+     * practice, no source). Outside the points the end value is held and {@link
+     * #npshRequiredOutsideCurve} says so.
+     *
+     * @param npshPoints (flow, NPSH required) pairs, at least two, flows strictly ascending, values
+     *     ≥ 0 (m³/s, m)
+     */
+    public PumpCurve withNpshCurve(List<Point> npshPoints) {
+        if (npshPoints.size() < 2) {
+            throw new InputException(
+                    "pump.npshRequired", "an NPSH-required curve needs at least two points, got " + npshPoints.size());
+        }
+        for (int i = 0; i < npshPoints.size(); i++) {
+            Point pt = npshPoints.get(i);
+            InputException.requireFinite("pump.points[" + i + "].npshRequired", pt.head());
+            InputException.requireNonNegative("pump.points[" + i + "].npshRequired", pt.head());
+            if (i > 0 && !(pt.flow() > npshPoints.get(i - 1).flow())) {
+                throw new InputException(
+                        "pump.points[" + i + "].flow", "NPSH-required points must have strictly ascending flows");
+            }
+        }
+        return new PumpCurve(this, npshPoints);
+    }
+
+    /** The NPSH-required curve as (flow, NPSH required) points; empty when only one value is given. */
+    public List<Point> npshCurve() {
+        return npshCurve;
+    }
+
+    /**
+     * NPSH required at a flow at the curve's own speed: read from the curve when there is one, else
+     * the single value given.
+     *
+     * @param flow volumetric flow (m³/s)
+     * @return NPSH required (m), empty when unknown
+     */
+    public OptionalDouble npshRequiredAt(double flow) {
+        if (npshCurve.isEmpty()) {
+            return npshRequired;
+        }
+        Point first = npshCurve.get(0);
+        Point last = npshCurve.get(npshCurve.size() - 1);
+        if (flow <= first.flow()) {
+            return OptionalDouble.of(first.head());
+        }
+        if (flow >= last.flow()) {
+            return OptionalDouble.of(last.head());
+        }
+        for (int i = 1; i < npshCurve.size(); i++) {
+            Point b = npshCurve.get(i);
+            if (flow <= b.flow()) {
+                Point a = npshCurve.get(i - 1);
+                double t = (flow - a.flow()) / (b.flow() - a.flow());
+                return OptionalDouble.of(a.head() + t * (b.head() - a.head()));
+            }
+        }
+        return OptionalDouble.of(last.head());
+    }
+
+    /** Whether a flow lies outside the NPSH-required curve's points (the end value was held). */
+    public boolean npshRequiredOutsideCurve(double flow) {
+        return !npshCurve.isEmpty()
+                && (flow < npshCurve.get(0).flow() * (1 - 1e-12)
+                        || flow > npshCurve.get(npshCurve.size() - 1).flow() * (1 + 1e-12));
     }
 
     /**

@@ -79,7 +79,22 @@ public record PumpElement(String id, PumpCurve curve, double speedRatio) impleme
         return speedRatio * slope;
     }
 
-    /** NPSH required at the running speed (m), if the maker gave it. */
+    /**
+     * NPSH required at a flow at the running speed (m), if the maker gave it: by the affinity laws
+     * NPSHr_s(Q) = s² NPSHr(Q/s) (the usual scaling for a speed change, e.g. Karassik et al., Pump
+     * Handbook, 4th ed., 2008, §2.3; from memory).
+     *
+     * @param flow volumetric flow (m³/s)
+     */
+    public OptionalDouble npshRequiredAt(double flow) {
+        OptionalDouble atCurveSpeed = curve.npshRequiredAt(flow / speedRatio);
+        if (atCurveSpeed.isEmpty()) {
+            return atCurveSpeed;
+        }
+        return OptionalDouble.of(speedRatio * speedRatio * atCurveSpeed.getAsDouble());
+    }
+
+    /** NPSH required at the running speed (m), if the maker gave one value for the duty. */
     public OptionalDouble npshRequired() {
         if (curve.npshRequired().isEmpty()) {
             return OptionalDouble.empty();
