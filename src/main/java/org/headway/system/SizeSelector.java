@@ -3,6 +3,7 @@ package org.headway.system;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import org.headway.caution.InputException;
 
@@ -77,27 +78,31 @@ public final class SizeSelector {
             RunResult r = HeadLossCalculator.solve(trial, trial.designFlow());
             double vmax = 0;
             double lossPer100 = 0;
-            for (int i = 0; i < r.segments().size(); i++) {
-                SegmentResult sr = r.segments().get(i);
+            for (SegmentResult sr : r.segments()) {
                 vmax = Math.max(vmax, sr.velocity());
-                double length = trial.segments().get(i).length();
+                double length = ((Segment) trial.element(sr.id()).orElseThrow()).length();
                 if (length > 0) {
                     lossPer100 = Math.max(lossPer100, sr.majorHeadLoss() / length * 100);
                 }
             }
             List<String> reasons = new ArrayList<>();
             if (vmax > limits.maximumVelocity()) {
-                reasons.add(String.format("velocity %.3g m/s above %.3g m/s", vmax, limits.maximumVelocity()));
+                reasons.add(
+                        String.format(Locale.ROOT, "velocity %.3g m/s above %.3g m/s", vmax, limits.maximumVelocity()));
             }
             if (lossPer100 > limits.maximumFrictionLossPer100m()) {
                 reasons.add(String.format(
+                        Locale.ROOT,
                         "friction loss %.3g m per 100 m above %.3g m",
-                        lossPer100, limits.maximumFrictionLossPer100m()));
+                        lossPer100,
+                        limits.maximumFrictionLossPer100m()));
             }
             if (r.totals().totalHead() > limits.headBudget()) {
                 reasons.add(String.format(
+                        Locale.ROOT,
                         "total head %.4g m above the budget of %.4g m",
-                        r.totals().totalHead(), limits.headBudget()));
+                        r.totals().totalHead(),
+                        limits.headBudget()));
             }
             boolean ok = reasons.isEmpty();
             checks.add(new SizeCheck(size, vmax, lossPer100, r.totals().totalHead(), ok, reasons));
