@@ -357,15 +357,14 @@ public final class ProjectEditor {
                 case SOURCE_LEVEL, DELIVERY_LEVEL ->
                     t.isEmpty() ? "" : QuantityText.accept(t, QuantityKind.LENGTH, u, "level", QuantityText.Sign.ANY);
                 case SOURCE_PRESSURE, DELIVERY_PRESSURE ->
-                    t.isEmpty()
-                            ? ""
-                            : QuantityText.accept(t, QuantityKind.PRESSURE, u, "gauge pressure", QuantityText.Sign.ANY);
+                    t.isEmpty() ? "" : QuantityText.acceptPressureReading(t, u, "gauge pressure");
                 case MAXIMUM_VELOCITY ->
                     t.isEmpty()
                             ? ""
                             : QuantityText.accept(
                                     t, QuantityKind.VELOCITY, u, "maximum velocity", QuantityText.Sign.POSITIVE);
-                case MAXIMUM_FRICTION_LOSS, HEAD_BUDGET ->
+                case MAXIMUM_FRICTION_LOSS -> t.isEmpty() ? "" : QuantityText.acceptGradient(t, u, "limit");
+                case HEAD_BUDGET ->
                     t.isEmpty()
                             ? ""
                             : QuantityText.accept(t, QuantityKind.HEAD, u, "limit", QuantityText.Sign.POSITIVE);

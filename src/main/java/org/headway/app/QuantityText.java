@@ -58,4 +58,41 @@ final class QuantityText {
         }
         return text;
     }
+
+    /**
+     * Checks a pressure reading as typed into a gauge field (an end pressure): gauge ({@code 3
+     * barg}), absolute ({@code 1.2 bara}, converted by the project with its site's barometric
+     * pressure) or plain; a bare number is read in the shown pressure unit.
+     *
+     * @return the text to store
+     * @throws InputException naming {@code where} when the text is not a pressure
+     */
+    static String acceptPressureReading(String typed, UnitSystem system, String where) {
+        String text = typed == null ? "" : typed.strip();
+        if (BARE_NUMBER.matcher(text).matches()) {
+            text = text + " " + Quantities.unitSymbol(QuantityKind.PRESSURE, system);
+        }
+        Quantities.parsePressure(text, where);
+        return text;
+    }
+
+    /**
+     * Checks a friction-loss gradient as typed ({@code 4 m per 100 m}, {@code 4 ft per 100 ft},
+     * {@code 0.04 m/m}, {@code 400 Pa/m}); a bare number is read in the shown system, as m per 100 m
+     * or ft per 100 ft (the same ratio), and stored with that written out.
+     *
+     * @return the text to store
+     * @throws InputException naming {@code where} when the text is not a positive gradient
+     */
+    static String acceptGradient(String typed, UnitSystem system, String where) {
+        String text = typed == null ? "" : typed.strip();
+        if (BARE_NUMBER.matcher(text).matches()) {
+            text = text + (system == UnitSystem.US_CUSTOMARY ? " ft per 100 ft" : " m per 100 m");
+        }
+        double value = Quantities.parseGradient(text, where).value();
+        if (!(value > 0)) {
+            throw new InputException(where, "must be greater than zero, got \"" + text + "\"");
+        }
+        return text;
+    }
 }

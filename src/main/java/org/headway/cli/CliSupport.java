@@ -23,15 +23,20 @@ final class CliSupport {
         return Quantities.parse(text, kind, option);
     }
 
-    /** Parses {@code QMIN:QMAX:N} into {min, max, n} in SI. */
-    static double[] curveRange(String text) {
+    /**
+     * Parses {@code QMIN:QMAX:N} into {min, max, n} in SI; a flow may be given by mass ({@code 0
+     * kg/h:36000 kg/h:13}) and is then divided by the run's fluid density.
+     *
+     * @param density the run's fluid density at its state (kg/m³)
+     */
+    static double[] curveRange(String text, double density) {
         String[] parts = text.split(":");
         if (parts.length != 3) {
             throw new InputException(
                     "--curve", "expected QMIN:QMAX:N such as \"0 L/s:20 L/s:11\", got \"" + text + "\"");
         }
-        double min = Quantities.parse(parts[0].strip(), QuantityKind.VOLUMETRIC_FLOW, "--curve QMIN");
-        double max = Quantities.parse(parts[1].strip(), QuantityKind.VOLUMETRIC_FLOW, "--curve QMAX");
+        double min = Quantities.parseFlow(parts[0].strip(), "--curve QMIN").volumetric(density, "--curve QMIN");
+        double max = Quantities.parseFlow(parts[1].strip(), "--curve QMAX").volumetric(density, "--curve QMAX");
         int n;
         try {
             n = Integer.parseInt(parts[2].strip());

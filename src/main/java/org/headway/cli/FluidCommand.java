@@ -8,9 +8,11 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.util.concurrent.Callable;
 import org.headway.caution.Caution;
+import org.headway.caution.InputException;
 import org.headway.fluid.Fluid;
 import org.headway.fluid.FluidState;
 import org.headway.fluid.Fluids;
+import org.headway.units.PressureReading;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
 import org.headway.units.UnitSystem;
@@ -98,7 +100,15 @@ public final class FluidCommand implements Callable<Integer> {
         }
         Fluid fluid = Fluids.byId(fluidId);
         double t = Quantities.parse(temperature, QuantityKind.TEMPERATURE, "--temperature");
-        double p = Quantities.parse(pressure, QuantityKind.PRESSURE, "--pressure");
+        // The state pressure is absolute; without a site there is no barometric pressure to add to a gauge reading.
+        PressureReading reading = Quantities.parsePressure(pressure, "--pressure");
+        if (reading.reference() == PressureReading.Reference.GAUGE) {
+            throw new InputException(
+                    "--pressure",
+                    "\"" + pressure.strip() + "\" is a gauge reading, but the fluid's pressure is absolute; give it in"
+                            + " kPa, bara or psia (a project converts gauge readings with its site's barometric pressure)");
+        }
+        double p = reading.pascals();
         FluidState state = fluid.state(t, p);
         if (format == Layout.json) {
             out.println(json(state));

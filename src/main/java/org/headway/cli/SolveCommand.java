@@ -141,7 +141,7 @@ public final class SolveCommand implements Callable<Integer> {
         }
         List<SystemCurve.Point> curvePoints = List.of();
         if (curve != null) {
-            double[] range = CliSupport.curveRange(curve);
+            double[] range = CliSupport.curveRange(curve, run.fluid().density());
             curvePoints = SystemCurve.compute(run, range[0], range[1], (int) range[2]);
         } else if (resolved.curve().isPresent()) {
             ResolvedProject.CurveRange c = resolved.curve().get();

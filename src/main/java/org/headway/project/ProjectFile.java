@@ -21,6 +21,8 @@ import java.util.List;
 import java.util.Optional;
 import java.util.Set;
 import org.headway.caution.InputException;
+import org.headway.units.Quantities;
+import org.headway.units.QuantityKind;
 
 /**
  * Reads and writes project files: JSON of our own schema, format {@value Project#FORMAT}, version
@@ -192,7 +194,9 @@ public final class ProjectFile {
             limits = new Project.LimitsSpec(
                     l.quantity("minimumVelocity"),
                     l.quantity("maximumVelocity"),
-                    l.quantity("maximumFrictionLossPer100m"),
+                    version == 1
+                            ? formatOneFrictionLimit(l.quantity("maximumFrictionLossPer100m"))
+                            : l.quantity("maximumFrictionLossPer100m"),
                     l.quantity("headBudget"),
                     l.quantity("npshMargin"));
         }
@@ -346,6 +350,30 @@ public final class ProjectFile {
                 site,
                 pressureLimits,
                 top.quantity("inletLevel"));
+    }
+
+    /**
+     * Format 1 read {@code maximumFrictionLossPer100m} as a head lost per 100 m of pipe, so {@code
+     * "5 m"} meant 5 m per 100 m and {@code "4 ft"} 4 ft per 100 m. Format 2 wants the gradient
+     * written out and refuses a head alone; a format-1 head migrates to the text that keeps its
+     * meaning ({@code "4 ft per 100 m"}). A bare number (m per 100 m in both) and anything that does
+     * not read as a head are left as written, for the resolver to judge.
+     */
+    static String formatOneFrictionLimit(String text) {
+        if (text.isBlank()) {
+            return text;
+        }
+        try {
+            Quantities.parseGradient(text, "maximumFrictionLossPer100m");
+            return text;
+        } catch (InputException notAGradient) {
+            try {
+                Quantities.parse(text, QuantityKind.HEAD, "maximumFrictionLossPer100m");
+            } catch (InputException notAHead) {
+                return text;
+            }
+            return text.strip() + " per 100 m";
+        }
     }
 
     private static List<Project.PumpPointSpec> pumpPoints(Obj p) {

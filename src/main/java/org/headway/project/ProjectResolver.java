@@ -26,6 +26,7 @@ import org.headway.system.EndCondition;
 import org.headway.system.FittingUse;
 import org.headway.system.FlowCoefficientValve;
 import org.headway.system.GivenLossCoefficient;
+import org.headway.system.Gravity;
 import org.headway.system.IsolationValve;
 import org.headway.system.LocalLoss;
 import org.headway.system.PipeRun;
@@ -36,6 +37,7 @@ import org.headway.system.RatedComponent;
 import org.headway.system.Segment;
 import org.headway.system.SiteAtmosphere;
 import org.headway.system.SizeSelector;
+import org.headway.units.PressureReading;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
 
@@ -43,6 +45,27 @@ import org.headway.units.QuantityKind;
  * Turns a {@link Project} into a {@link ResolvedProject}: parses every quantity, looks up fluids,
  * materials, sizes and fittings, and applies the engineer's overrides. Every problem found is
  * reported with its JSON path, all of them at once.
+ *
+ * <p>Readings that need the project's own state are converted here:
+ *
+ * <ul>
+ *   <li>Pressures marked gauge or absolute ({@code barg}, {@code psia}, {@code kPa(g)}). End
+ *       pressures and {@code pressureLimits} are gauge by convention: a gauge or plain reading is
+ *       taken as it is, an absolute one less the site's barometric pressure. The fluid's {@code
+ *       pressure} is absolute: a gauge reading gets the barometric pressure added. A {@code
+ *       vapourPressure} or {@code site.barometricPressure} is absolute by its nature and refuses a
+ *       gauge reading (a vapour pressure in gauge would be negative for cold water; the
+ *       atmosphere's own gauge pressure is zero). A device's {@code ratedPressureDrop} is a
+ *       difference and refuses both markers.
+ *   <li>Mass flows ({@code kg/h}, {@code kg/s}, {@code lb/h}, {@code t/h}) for the design flow,
+ *       the {@code curve} range, pump curve points and a component's {@code ratedFlow}, divided by
+ *       the fluid's density at its resolved state; when the fluid cannot be resolved there is no
+ *       density and a mass flow is refused.
+ *   <li>The friction-loss limit {@code maximumFrictionLossPer100m}, written as a gradient ({@code 4
+ *       m per 100 m}, {@code 4 ft per 100 ft}, {@code 0.04 m/m}) or a bare number of m per 100 m; a
+ *       pressure per length ({@code 400 Pa/m}, {@code 1.2 psi/100ft}) is divided by ρ g with the
+ *       fluid's density and standard gravity.
+ * </ul>
  */
 public final class ProjectResolver {
 
@@ -69,10 +92,12 @@ public final class ProjectResolver {
     }
 
     private ResolvedProject run(Project p) {
-        SiteAtmosphere site = attempt("site", () -> site(p.site()));
-        double airPressure = site == null ? PipeRun.STANDARD_ATMOSPHERE : site.pressure();
-        FluidState fluid = attempt("fluid", () -> fluid(p.fluid(), airPressure));
-        double flow = orZero(attempt("flow", () -> Quantities.parse(p.flow(), QuantityKind.VOLUMETRIC_FLOW, "flow")));
+        // Gauge and absolute readings are converted with the site's barometric pressure; a bad site
+        // is reported once, where the site itself is resolved below.
+        double barometric = siteForReadings(p.site()).pressure();
+        FluidState fluid = attempt("fluid", () -> fluid(p.fluid(), barometric));
+        double knownDensity = fluid == null ? Double.NaN : fluid.density();
+        double flow = orZero(attempt("flow", () -> flow(p.flow(), knownDensity, "flow")));
         double uncertainty = p.flowUncertainty().isEmpty()
                 ? DEFAULT_FLOW_UNCERTAINTY
                 : orZero(attempt("flowUncertainty", () -> ratio(p.flowUncertainty())));
@@ -102,7 +127,7 @@ public final class ProjectResolver {
                                 || !ps.id().equals("pump")
                         ? path
                         : "pump";
-                PumpElement pump = attempt(pumpPath, () -> pumpElement(ps));
+                PumpElement pump = attempt(pumpPath, () -> pumpElement(ps, knownDensity));
                 if (pump != null) {
                     elements.add(pump);
                 }
@@ -114,11 +139,12 @@ public final class ProjectResolver {
             }
         }
         double density = fluid == null ? 1000 : fluid.density();
-        EndCondition source = attempt("ends.source", () -> end(p.ends().source()));
-        EndCondition delivery = attempt("ends.delivery", () -> end(p.ends().delivery()));
+        EndCondition source = attempt("ends.source", () -> end(p.ends().source(), barometric));
+        EndCondition delivery = attempt("ends.delivery", () -> end(p.ends().delivery(), barometric));
 
-        DesignLimits limits = attempt("limits", () -> limits(p.limits()));
-        PressureLimits pressureLimits = attempt("pressureLimits", () -> pressureLimits(p.pressureLimits()));
+        DesignLimits limits = attempt("limits", () -> limits(p.limits(), knownDensity));
+        SiteAtmosphere site = attempt("site", () -> site(p.site()));
+        PressureLimits pressureLimits = attempt("pressureLimits", () -> pressureLimits(p.pressureLimits(), barometric));
         List<SizeSelector.CandidateSize> candidates = new ArrayList<>();
         if (p.sizing().isPresent()) {
             List<SizeSelector.CandidateSize> found =
@@ -129,7 +155,7 @@ public final class ProjectResolver {
         }
         Optional<ResolvedProject.CurveRange> curve = Optional.empty();
         if (p.curve().isPresent()) {
-            curve = Optional.ofNullable(attempt("curve", () -> curve(p.curve().get())));
+            curve = Optional.ofNullable(attempt("curve", () -> curve(p.curve().get(), knownDensity)));
         }
         if (!problems.isEmpty()) {
             String message = problems.size() == 1
@@ -200,12 +226,50 @@ public final class ProjectResolver {
         return value;
     }
 
-    /** The fluid's state; without a pressure of its own it is evaluated at the site's air pressure. */
-    private FluidState fluid(Project.FluidSpec spec, double airPressure) {
+    /**
+     * A flow as typed, by volume or by mass, in m³/s.
+     *
+     * @param density the fluid's density at its state (kg/m³), NaN when the fluid is unknown
+     */
+    private static double flow(String text, double density, String where) {
+        return Quantities.parseFlow(text, where).volumetric(density, where);
+    }
+
+    /** The site's atmosphere for converting readings; sea level when the site itself is in error. */
+    private static SiteAtmosphere siteForReadings(Project.SiteSpec spec) {
+        try {
+            return site(spec);
+        } catch (InputException e) {
+            return SiteAtmosphere.SEA_LEVEL;
+        }
+    }
+
+    /**
+     * A pressure that is absolute by its nature (vapour pressure, barometric pressure): a plain or
+     * absolute reading is taken as it is, a gauge reading is refused.
+     */
+    private static double absoluteOnly(String text, String where, String what) {
+        PressureReading reading = Quantities.parsePressure(text, where);
+        if (reading.reference() == PressureReading.Reference.GAUGE) {
+            throw new InputException(
+                    where,
+                    "\"" + text.strip() + "\" is a gauge reading, but " + what + " is an absolute pressure (measured"
+                            + " from vacuum); give its absolute value, e.g. in kPa, kPa(a), bara or psia");
+        }
+        return reading.pascals();
+    }
+
+    /**
+     * The fluid's state; without a pressure of its own it is evaluated at the site's air pressure.
+     *
+     * @param barometric the site's barometric pressure (Pa)
+     */
+    private FluidState fluid(Project.FluidSpec spec, double barometric) {
         boolean hasOverrides = !spec.density().isEmpty() || !spec.viscosity().isEmpty();
+        // The fluid's state pressure is absolute; a gauge reading is above the site's atmosphere.
         double pressure = spec.pressure().isEmpty()
-                ? airPressure
-                : Quantities.parse(spec.pressure(), QuantityKind.PRESSURE, "pressure");
+                ? barometric
+                : Quantities.parsePressure(spec.pressure(), "pressure").asAbsolute(barometric);
         FluidState state;
         Fluid model = null;
         try {
@@ -239,7 +303,7 @@ public final class ProjectResolver {
             OptionalDouble vapour = !spec.vapourPressure().isEmpty()
                     ? OptionalDouble.of(InputException.requireNonNegative(
                             "vapourPressure",
-                            Quantities.parse(spec.vapourPressure(), QuantityKind.PRESSURE, "vapourPressure")))
+                            absoluteOnly(spec.vapourPressure(), "vapourPressure", "a vapour pressure")))
                     : state == null ? OptionalDouble.empty() : state.vapourPressure();
             String given = "given in the project file";
             List<Caution> cautions = state == null ? List.of() : state.cautions();
@@ -464,8 +528,8 @@ public final class ProjectResolver {
         return "elements[" + index + "] (" + spec.id() + ")";
     }
 
-    private PumpElement pumpElement(Project.PumpSpec spec) {
-        PumpCurve curve = pump(spec);
+    private PumpElement pumpElement(Project.PumpSpec spec, double density) {
+        PumpCurve curve = pump(spec, density);
         double speed = spec.speedRatio().isEmpty()
                 ? 1.0
                 : Quantities.parse(spec.speedRatio(), QuantityKind.DIMENSIONLESS, "speedRatio");
@@ -483,7 +547,7 @@ public final class ProjectResolver {
             }
             case "component" -> {
                 double dp = Quantities.parse(d.value("ratedPressureDrop"), QuantityKind.PRESSURE, "ratedPressureDrop");
-                double q = Quantities.parse(d.value("ratedFlow"), QuantityKind.VOLUMETRIC_FLOW, "ratedFlow");
+                double q = flow(d.value("ratedFlow"), fluid == null ? Double.NaN : fluid.density(), "ratedFlow");
                 double n = d.value("exponent").isEmpty()
                         ? RatedComponent.QUADRATIC
                         : Quantities.parse(d.value("exponent"), QuantityKind.DIMENSIONLESS, "exponent");
@@ -568,8 +632,8 @@ public final class ProjectResolver {
         }
         if (!spec.barometricPressure().isEmpty()) {
             try {
-                return SiteAtmosphere.ofPressure(
-                        Quantities.parse(spec.barometricPressure(), QuantityKind.PRESSURE, "barometricPressure"));
+                return SiteAtmosphere.ofPressure(absoluteOnly(
+                        spec.barometricPressure(), "barometricPressure", "the site's barometric pressure"));
             } catch (InputException e) {
                 throw new InputException("barometricPressure", e.problem());
             }
@@ -577,13 +641,14 @@ public final class ProjectResolver {
         return SiteAtmosphere.SEA_LEVEL;
     }
 
-    private static PressureLimits pressureLimits(Project.PressureLimitsSpec spec) {
+    /** Gauge limits: a gauge or plain reading as it is, an absolute one less the barometric pressure. */
+    private static PressureLimits pressureLimits(Project.PressureLimitsSpec spec, double barometric) {
         double min = spec.minimum().isEmpty()
                 ? Double.NEGATIVE_INFINITY
-                : Quantities.parse(spec.minimum(), QuantityKind.PRESSURE, "minimum");
+                : Quantities.parsePressure(spec.minimum(), "minimum").asGauge(barometric);
         double max = spec.maximum().isEmpty()
                 ? Double.POSITIVE_INFINITY
-                : Quantities.parse(spec.maximum(), QuantityKind.PRESSURE, "maximum");
+                : Quantities.parsePressure(spec.maximum(), "maximum").asGauge(barometric);
         return new PressureLimits(min, max);
     }
 
@@ -597,14 +662,16 @@ public final class ProjectResolver {
         return schedule.matches("\\d+S?") ? "Sch " + schedule : schedule;
     }
 
-    private static EndCondition end(Project.EndSpec spec) {
+    /** An end's gauge pressure: a gauge or plain reading as it is, an absolute one less the barometric. */
+    private static EndCondition end(Project.EndSpec spec, double barometric) {
         double level = spec.level().isEmpty() ? 0 : Quantities.parse(spec.level(), QuantityKind.LENGTH, "level");
-        double pressure =
-                spec.pressure().isEmpty() ? 0 : Quantities.parse(spec.pressure(), QuantityKind.PRESSURE, "pressure");
+        double pressure = spec.pressure().isEmpty()
+                ? 0
+                : Quantities.parsePressure(spec.pressure(), "pressure").asGauge(barometric);
         return new EndCondition(level, pressure);
     }
 
-    private static DesignLimits limits(Project.LimitsSpec spec) {
+    private static DesignLimits limits(Project.LimitsSpec spec, double density) {
         DesignLimits d = DesignLimits.USUAL;
         return new DesignLimits(
                 spec.minimumVelocity().isEmpty()
@@ -615,8 +682,8 @@ public final class ProjectResolver {
                         : Quantities.parse(spec.maximumVelocity(), QuantityKind.VELOCITY, "maximumVelocity"),
                 spec.maximumFrictionLossPer100m().isEmpty()
                         ? d.maximumFrictionLossPer100m()
-                        : Quantities.parse(
-                                spec.maximumFrictionLossPer100m(), QuantityKind.HEAD, "maximumFrictionLossPer100m"),
+                        : Quantities.parseGradient(spec.maximumFrictionLossPer100m(), "maximumFrictionLossPer100m")
+                                .headPer100m(density, Gravity.STANDARD, "maximumFrictionLossPer100m"),
                 spec.headBudget().isEmpty()
                         ? d.headBudget()
                         : Quantities.parse(spec.headBudget(), QuantityKind.HEAD, "headBudget"),
@@ -625,13 +692,13 @@ public final class ProjectResolver {
                         : Quantities.parse(spec.npshMargin(), QuantityKind.HEAD, "npshMargin"));
     }
 
-    private static PumpCurve pump(Project.PumpSpec spec) {
+    private static PumpCurve pump(Project.PumpSpec spec, double density) {
         List<PumpCurve.Point> points = new ArrayList<>();
         for (int i = 0; i < spec.points().size(); i++) {
             Project.PumpPointSpec pt = spec.points().get(i);
             String path = "points[" + i + "]";
             points.add(new PumpCurve.Point(
-                    Quantities.parse(pt.flow(), QuantityKind.VOLUMETRIC_FLOW, path + ".flow"),
+                    flow(pt.flow(), density, path + ".flow"),
                     Quantities.parse(pt.head(), QuantityKind.HEAD, path + ".head")));
         }
         OptionalDouble npshr = spec.npshRequired().isEmpty()
@@ -681,11 +748,9 @@ public final class ProjectResolver {
         return list;
     }
 
-    private static ResolvedProject.CurveRange curve(Project.CurveSpec spec) {
-        double min = spec.minimumFlow().isEmpty()
-                ? 0
-                : Quantities.parse(spec.minimumFlow(), QuantityKind.VOLUMETRIC_FLOW, "minimumFlow");
-        double max = Quantities.parse(spec.maximumFlow(), QuantityKind.VOLUMETRIC_FLOW, "maximumFlow");
+    private static ResolvedProject.CurveRange curve(Project.CurveSpec spec, double density) {
+        double min = spec.minimumFlow().isEmpty() ? 0 : flow(spec.minimumFlow(), density, "minimumFlow");
+        double max = flow(spec.maximumFlow(), density, "maximumFlow");
         if (max <= min) {
             throw new InputException("maximumFlow", "must exceed the minimum flow");
         }

@@ -32,7 +32,8 @@ import tech.units.indriya.unit.Units;
  * classes the JVM happened to load first. SI symbols with metric prefixes ({@code mm}, {@code
  * kPa}, {@code MPa}, {@code mPa·s}), products with {@code ·} or {@code *}, quotients with {@code
  * /}, and powers written {@code m³}, {@code m^3} or {@code m3} are understood as the unit library
- * defines them.
+ * defines them. Units are read left to right: {@code a/b/c} is {@code (a/b)/c}, so {@code m/s/s} is
+ * m/s² and {@code L/s/s} a volumetric flow per second; parentheses group as written.
  *
  * <p>Alias table (our own; US customary units are the US survey-independent international ones):
  *
@@ -45,16 +46,36 @@ import tech.units.indriya.unit.Units;
  *   <tr><td>{@code L}, {@code l}</td><td>litre, 0.001 m³</td></tr>
  *   <tr><td>{@code gal}</td><td>US liquid gallon, 3.785411784 L</td></tr>
  *   <tr><td>{@code gpm}</td><td>US gallon per minute</td></tr>
- *   <tr><td>{@code min}, {@code h}</td><td>minute, hour</td></tr>
+ *   <tr><td>{@code min}, {@code h}, {@code hr}</td><td>minute, hour</td></tr>
+ *   <tr><td>{@code t}</td><td>tonne, 1000 kg (for mass flows such as {@code t/h})</td></tr>
  *   <tr><td>{@code bar}, {@code mbar}</td><td>100 kPa, 100 Pa</td></tr>
  *   <tr><td>{@code psi}</td><td>pound-force per square inch, 6894.757293168 Pa</td></tr>
  *   <tr><td>{@code atm}</td><td>standard atmosphere, 101.325 kPa</td></tr>
+ *   <tr><td>{@code mH2O}, {@code mmH2O}</td><td>conventional metre (millimetre) of water, 9806.65 Pa
+ *       (9.80665 Pa): the pressure of that height of water of density 1000 kg/m³ under standard
+ *       gravity 9.80665 m/s²</td></tr>
+ *   <tr><td>{@code ftH2O}, {@code inH2O}</td><td>conventional foot (inch) of water, 0.3048 × 9806.65
+ *       = 2989.06692 Pa (0.0254 × 9806.65 = 249.08891 Pa); not the slightly smaller foot of water
+ *       at 39.2 °F (about 2988.98 Pa)</td></tr>
+ *   <tr><td>{@code barg}, {@code psig}, {@code kPag}, {@code kPa(g)}, {@code bar(g)}, … {@code
+ *       gauge}</td><td>a gauge reading; any pressure unit with {@code (g)}, or {@code g} glued to
+ *       {@code bar}, {@code psi} or {@code Pa}; only where a field takes readings ({@link
+ *       #parsePressure})</td></tr>
+ *   <tr><td>{@code bara}, {@code psia}, {@code kPaa}, {@code kPa(a)}, … {@code abs}</td><td>an
+ *       absolute reading, likewise</td></tr>
  *   <tr><td>{@code °C}, {@code degC}</td><td>degree Celsius</td></tr>
  *   <tr><td>{@code °F}, {@code degF}</td><td>degree Fahrenheit</td></tr>
  *   <tr><td>{@code lb}</td><td>pound (mass), 0.45359237 kg</td></tr>
  *   <tr><td>{@code cP}</td><td>centipoise, 1 mPa·s</td></tr>
  *   <tr><td>{@code cSt}</td><td>centistokes, 1 mm²/s</td></tr>
  * </table>
+ *
+ * <p>Written H2O or H₂O, with or without a space ({@code m H2O}). A plain {@code kPa}, {@code bar},
+ * {@code psi} or {@code mH2O} is a pressure that says neither gauge nor absolute; {@link #parse}
+ * refuses a gauge or absolute marker (the field would have to guess), {@link #parsePressure} keeps
+ * it in a {@link PressureReading}. Mass flows ({@code kg/h}, {@code kg/s}, {@code lb/h}, {@code
+ * t/h}) are read by {@link #parseFlow} into a {@link FlowReading}; friction-loss gradients ({@code 4
+ * m per 100 m}, {@code 4 ft/100ft}, {@code 0.04 m/m}, {@code 400 Pa/m}) by {@link #parseGradient}.
  *
  * <p>Refused as ambiguous: a lone {@code F} (farad, or Fahrenheit?) and a lone {@code C} (coulomb,
  * or Celsius?); write {@code °F}/{@code degF} or {@code °C}/{@code degC}.
@@ -79,8 +100,8 @@ public final class Quantities {
     private static final Pattern NUMBER_THEN_UNIT =
             Pattern.compile("^([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(.*)$");
     private static final Pattern NON_FINITE = Pattern.compile("(?i)^[+-]?(nan|inf|infinity|∞)\\b.*");
-    /** A letter followed by a bare 2 or 3 that is not part of a longer number: m3 → m³. */
-    private static final Pattern PLAIN_POWER = Pattern.compile("(?<=[A-Za-z])([23])(?![0-9.])");
+    /** A letter followed by a bare 2 or 3 that is not part of a longer number: m3 → m^3 (not the 2 of H2O). */
+    private static final Pattern PLAIN_POWER = Pattern.compile("(?<=[A-Za-z])(?<!H)([23])(?![0-9.])");
     /** A power of two or more digits: no unit needs one, and the unit library recurses on it. */
     private static final Pattern LARGE_POWER = Pattern.compile("\\^\\s*[+-]?\\d{2,}");
 
@@ -105,6 +126,33 @@ public final class Quantities {
             Units.METRE.pow(2).divide(Units.SECOND).divide(1_000_000);
     private static final Unit<?> GPM = US_GALLON.divide(Units.MINUTE);
     private static final Unit<?> MICROMETRE = Units.METRE.divide(1_000_000);
+    private static final Unit<?> TONNE = Units.KILOGRAM.multiply(1000);
+    /** Conventional metre of water: 1000 kg/m³ × 9.80665 m/s² × 1 m = 9806.65 Pa, exactly. */
+    private static final Unit<?> METRE_OF_WATER = Units.PASCAL.multiply(980_665).divide(100);
+
+    private static final Unit<?> MILLIMETRE_OF_WATER =
+            Units.PASCAL.multiply(980_665).divide(100_000);
+    /** Conventional foot of water: 0.3048 × 9806.65 Pa = 2989.06692 Pa, exactly. */
+    private static final Unit<?> FOOT_OF_WATER =
+            Units.PASCAL.multiply(298_906_692).divide(100_000);
+    /** Conventional inch of water: 0.0254 × 9806.65 Pa = 249.08891 Pa, exactly. */
+    private static final Unit<?> INCH_OF_WATER =
+            Units.PASCAL.multiply(24_908_891).divide(100_000);
+
+    private static final Unit<?> MASS_FLOW = Units.KILOGRAM.divide(Units.SECOND);
+    private static final Unit<?> PRESSURE_GRADIENT = Units.PASCAL.divide(Units.METRE);
+
+    /** A pressure unit and a gauge/absolute marker in brackets: {@code kPa(g)}, {@code bar (a)}. */
+    private static final Pattern MARKER_IN_BRACKETS =
+            Pattern.compile("^(.+?)\\s*\\(\\s*(?i:(g|gauge)|(a|abs|absolute))\\s*\\)$");
+    /** A marker glued to bar, psi or Pa: {@code barg}, {@code psia}, {@code kPag}, {@code MPaa}. */
+    private static final Pattern MARKER_GLUED = Pattern.compile("^(.*(?:bar|psi|Pa))(?:(g)|(a))$");
+    /** A marker as a word: {@code kPa gauge}, {@code psi abs}. */
+    private static final Pattern MARKER_WORD = Pattern.compile("^(.+?)\\s+(?i:(gauge)|(abs|absolute))$");
+    /** Head (or pressure) and the length of pipe it is lost over: {@code 4 m per 100 m}. */
+    private static final Pattern PER = Pattern.compile("(?i)\\s+per\\s+");
+    /** Head over a numbered length: {@code 4 m/100m}, {@code 1.2 psi/100 ft}. */
+    private static final Pattern OVER_NUMBERED_LENGTH = Pattern.compile("^(.*?)/\\s*([0-9.].*)$");
 
     /** Each kind's SI unit in the core. */
     private static final Map<QuantityKind, Unit<?>> SI_UNITS = new EnumMap<>(QuantityKind.class);
@@ -175,10 +223,16 @@ public final class Quantities {
         f.alias(GPM, "gpm");
         f.alias(Units.MINUTE, "min");
         f.alias(Units.HOUR, "h");
+        f.alias(Units.HOUR, "hr");
+        f.alias(TONNE, "t");
         f.alias(BAR, "bar");
         f.alias(MILLIBAR, "mbar");
         f.alias(PSI, "psi");
         f.alias(ATMOSPHERE, "atm");
+        f.alias(METRE_OF_WATER, "mH2O");
+        f.alias(MILLIMETRE_OF_WATER, "mmH2O");
+        f.alias(FOOT_OF_WATER, "ftH2O");
+        f.alias(INCH_OF_WATER, "inH2O");
         f.alias(Units.CELSIUS, "°C");
         f.alias(Units.CELSIUS, "degC");
         f.alias(FAHRENHEIT, "°F");
@@ -203,7 +257,9 @@ public final class Quantities {
     }
 
     /**
-     * Parses typed text to an SI value, naming {@code where} in any error.
+     * Parses typed text to an SI value, naming {@code where} in any error. A pressure marked gauge
+     * or absolute ({@code barg}, {@code psia}, {@code kPa(g)}) is refused: only {@link
+     * #parsePressure} keeps that distinction, for fields that know what to do with it.
      *
      * @param text e.g. {@code 12 L/s}
      * @param kind what the text must be
@@ -212,8 +268,225 @@ public final class Quantities {
      */
     public static double parse(String text, QuantityKind kind, String where) {
         Objects.requireNonNull(kind, "kind");
+        Typed typed = split(text, kind.dimensionName(), example(kind), where);
+        if (typed.unitText.isEmpty()) {
+            return typed.number;
+        }
+        Marked marked = marked(typed.unitText);
+        Unit<?> si = SI_UNITS.get(kind);
+        Unit<?> base = marked == null ? null : unitOrNull(marked.base);
+        if (base != null) {
+            if (base.isCompatible(Units.PASCAL)) {
+                if (kind == QuantityKind.PRESSURE) {
+                    throw new InputException(
+                            where,
+                            "\"" + abbreviate(typed.whole) + "\" is marked as " + marked.describe()
+                                    + " pressure, which this field does not take; write it as a plain pressure in"
+                                    + " the field's own convention, e.g. " + typed.numberText + " " + marked.base);
+                }
+                throw wrongDimension(kind.dimensionName(), typed, base, where);
+            }
+        }
+        Unit<?> unit = parseUnit(typed.unitText, typed.whole, kind.dimensionName(), example(kind), where);
+        if (!unit.isCompatible(si)) {
+            throw wrongDimension(kind.dimensionName(), typed, unit, where);
+        }
+        return finite(convert(unit, si, typed.number), typed, where);
+    }
+
+    /**
+     * Parses a pressure reading: gauge ({@code 3 barg}, {@code 45 psig}, {@code 250 kPag}, {@code 250
+     * kPa(g)}, {@code 2.5 bar(g)}, {@code 40 kPa gauge}), absolute ({@code 1.2 bara}, {@code 14.7
+     * psia}, {@code 80 kPa(a)}, {@code 80 kPa abs}) or neither (a plain {@code kPa}, {@code bar},
+     * {@code psi}, {@code mH2O}, or a bare number of Pa). No atmosphere is added or taken away here;
+     * {@link PressureReading#asGauge} and {@link PressureReading#asAbsolute} do that with the
+     * caller's barometric pressure.
+     *
+     * @param text the typed pressure
+     * @param where the field, for messages
+     * @return the pressure in Pa and what it is measured from
+     * @throws InputException naming {@code where} and the text when it is not a pressure
+     */
+    public static PressureReading parsePressure(String text, String where) {
+        String expected = QuantityKind.PRESSURE.dimensionName();
+        String example = "250 kPa, 2.4 barg or 35 psia";
+        Typed typed = split(text, expected, example, where);
+        if (typed.unitText.isEmpty()) {
+            return new PressureReading(typed.number, PressureReading.Reference.UNSPECIFIED);
+        }
+        Marked marked = marked(typed.unitText);
+        String unitText = marked == null ? typed.unitText : marked.base;
+        Unit<?> unit = parseUnit(unitText, typed.whole, expected, example, where);
+        if (!unit.isCompatible(Units.PASCAL)) {
+            throw wrongDimension(expected, typed, unit, where);
+        }
+        double pascals = finite(convert(unit, Units.PASCAL, typed.number), typed, where);
+        return new PressureReading(pascals, marked == null ? PressureReading.Reference.UNSPECIFIED : marked.reference);
+    }
+
+    /**
+     * Parses a flow given by volume ({@code 12 L/s}, {@code 43 m3/h}, {@code 190 gpm}, a bare number
+     * of m³/s) or by mass ({@code 4300 kg/h}, {@code 1.2 kg/s}, {@code 9500 lb/h}, {@code 43 t/h}).
+     *
+     * @param text the typed flow
+     * @param where the field, for messages
+     * @return the flow in m³/s or kg/s, saying which
+     * @throws InputException naming {@code where} and the text when it is neither
+     */
+    public static FlowReading parseFlow(String text, String where) {
+        String expected = QuantityKind.VOLUMETRIC_FLOW.dimensionName();
+        String example = example(QuantityKind.VOLUMETRIC_FLOW) + ", or by mass 4300 kg/h";
+        Typed typed = split(text, expected, example, where);
+        if (typed.unitText.isEmpty()) {
+            return new FlowReading(typed.number, FlowReading.Basis.VOLUMETRIC, typed.whole);
+        }
+        Unit<?> unit = parseUnit(typed.unitText, typed.whole, expected, example, where);
+        Unit<?> volumetric = SI_UNITS.get(QuantityKind.VOLUMETRIC_FLOW);
+        if (unit.isCompatible(volumetric)) {
+            return new FlowReading(
+                    finite(convert(unit, volumetric, typed.number), typed, where),
+                    FlowReading.Basis.VOLUMETRIC,
+                    typed.whole);
+        }
+        if (unit.isCompatible(MASS_FLOW)) {
+            return new FlowReading(
+                    finite(convert(unit, MASS_FLOW, typed.number), typed, where), FlowReading.Basis.MASS, typed.whole);
+        }
+        throw new InputException(
+                where,
+                expected + " expected (or a mass flow such as 4300 kg/h), got \"" + abbreviate(typed.whole) + "\" ("
+                        + dimensionNameOf(unit) + ")");
+    }
+
+    /**
+     * Parses a friction-loss gradient, the head (or pressure) lost per length of pipe:
+     *
+     * <ul>
+     *   <li>a bare number: m of head per 100 m of pipe ({@code 4});
+     *   <li>a head or pressure, {@code per} or {@code /}, and a length: {@code 4 m per 100 m},
+     *       {@code 4 ft per 100 ft}, {@code 4 m/100m}, {@code 1.2 psi/100ft}, {@code 40 mm per m};
+     *   <li>a ratio of lengths: {@code 0.04 m/m}, {@code 40 mm/m};
+     *   <li>a pressure per length: {@code 400 Pa/m}, {@code 0.4 kPa/m}.
+     * </ul>
+     *
+     * <p>A head or pressure alone ({@code 4 ft}, {@code 4 m}, {@code 40 kPa}) is refused: it says
+     * nothing of the length it is lost over.
+     *
+     * @param text the typed gradient
+     * @param where the field, for messages
+     * @return m per 100 m, or Pa per m for a gradient typed as a pressure per length
+     * @throws InputException naming {@code where} and the text, with the spellings above
+     */
+    public static FrictionGradient parseGradient(String text, String where) {
+        String expected = "friction-loss gradient";
+        String example = "4 m per 100 m, 4 ft per 100 ft or 400 Pa/m";
         if (text == null || text.isBlank()) {
-            throw new InputException(where, kind.dimensionName() + " expected, got an empty value");
+            throw new InputException(where, expected + " expected, got an empty value");
+        }
+        String whole = text.strip();
+        String[] perParts = PER.split(whole, -1);
+        if (perParts.length > 2) {
+            throw new InputException(
+                    where,
+                    expected + " expected with one \"per\", got \"" + abbreviate(whole) + "\" (e.g. " + example + ")");
+        }
+        if (perParts.length == 2) {
+            return lostOver(perParts[0], perParts[1], whole, where);
+        }
+        Matcher over = OVER_NUMBERED_LENGTH.matcher(whole);
+        if (over.matches() && NUMBER_THEN_UNIT.matcher(over.group(1).strip()).matches()) {
+            return lostOver(over.group(1), over.group(2), whole, where);
+        }
+        Typed typed = split(whole, expected, example, where);
+        if (typed.unitText.isEmpty()) {
+            return new FrictionGradient(typed.number, FrictionGradient.Basis.HEAD_PER_100_M, whole);
+        }
+        Unit<?> unit = parseUnit(typed.unitText, whole, expected, example, where);
+        if (unit.isCompatible(AbstractUnit.ONE)) {
+            double ratio = finite(convert(unit, AbstractUnit.ONE, typed.number), typed, where);
+            return new FrictionGradient(100.0 * ratio, FrictionGradient.Basis.HEAD_PER_100_M, whole);
+        }
+        if (unit.isCompatible(PRESSURE_GRADIENT)) {
+            return new FrictionGradient(
+                    finite(convert(unit, PRESSURE_GRADIENT, typed.number), typed, where),
+                    FrictionGradient.Basis.PRESSURE_PER_METRE,
+                    whole);
+        }
+        if (unit.isCompatible(Units.METRE)) {
+            String unitText = typed.unitText;
+            String perSame = whole + " per 100 " + unitText;
+            String suggestion =
+                    unitText.equals("m") ? "\"" + perSame + "\"" : "\"" + perSame + "\" or \"" + whole + " per 100 m\"";
+            throw new InputException(
+                    where,
+                    "\"" + abbreviate(whole) + "\" is a head alone, not a head per length of pipe; write " + suggestion
+                            + " (a bare number is m per 100 m)");
+        }
+        if (unit.isCompatible(Units.PASCAL)) {
+            throw new InputException(
+                    where,
+                    "\"" + abbreviate(whole)
+                            + "\" is a pressure alone, not a pressure per length of pipe; write e.g. \"" + whole
+                            + " per 100 m\" or a value in Pa/m");
+        }
+        throw wrongDimension(expected, typed, unit, where);
+    }
+
+    /** {@code head per length}: numerator a head (m) or a pressure (Pa), denominator a length. */
+    private static FrictionGradient lostOver(String lostText, String lengthText, String whole, String where) {
+        String expected = "friction-loss gradient";
+        String example = "4 m per 100 m, 4 ft per 100 ft or 1.2 psi per 100 ft";
+        Typed lost = split(lostText, expected, example, where);
+        if (lost.unitText.isEmpty()) {
+            throw new InputException(
+                    where,
+                    "the loss in \"" + abbreviate(whole) + "\" needs its unit, e.g. " + lost.whole + " m per 100 m");
+        }
+        Unit<?> unit = parseUnit(lost.unitText, whole, expected, example, where);
+        String length = lengthText.strip();
+        if (!length.isEmpty() && !Character.isDigit(length.charAt(0)) && length.charAt(0) != '.') {
+            length = "1 " + length;
+        }
+        Typed over = split(length, "length of pipe", "100 m or 100 ft", where);
+        if (over.unitText.isEmpty()) {
+            throw new InputException(
+                    where,
+                    "the length of pipe in \"" + abbreviate(whole) + "\" needs its unit, e.g. per 100 m or per 100 ft");
+        }
+        Unit<?> lengthUnit = parseUnit(over.unitText, whole, "length of pipe", "100 m or 100 ft", where);
+        if (!lengthUnit.isCompatible(Units.METRE)) {
+            throw new InputException(
+                    where,
+                    "the length of pipe in \"" + abbreviate(whole) + "\" must be a length, got \"" + over.whole + "\" ("
+                            + dimensionNameOf(lengthUnit) + ")");
+        }
+        double metres = finite(convert(lengthUnit, Units.METRE, over.number), over, where);
+        if (!(metres > 0)) {
+            throw new InputException(
+                    where, "the length of pipe in \"" + abbreviate(whole) + "\" must be greater than zero");
+        }
+        if (unit.isCompatible(Units.METRE)) {
+            double head = finite(convert(unit, Units.METRE, lost.number), lost, where);
+            return new FrictionGradient(
+                    finite(head * 100.0 / metres, lost, where), FrictionGradient.Basis.HEAD_PER_100_M, whole);
+        }
+        if (unit.isCompatible(Units.PASCAL)) {
+            double pascals = finite(convert(unit, Units.PASCAL, lost.number), lost, where);
+            return new FrictionGradient(
+                    finite(pascals / metres, lost, where), FrictionGradient.Basis.PRESSURE_PER_METRE, whole);
+        }
+        throw new InputException(
+                where,
+                "the loss in \"" + abbreviate(whole) + "\" must be a head or a pressure, got \"" + lost.whole + "\" ("
+                        + dimensionNameOf(unit) + ")");
+    }
+
+    /** The number and unit text of typed input, checked for emptiness and finiteness. */
+    private record Typed(double number, String numberText, String unitText, String whole) {}
+
+    private static Typed split(String text, String expected, String example, String where) {
+        if (text == null || text.isBlank()) {
+            throw new InputException(where, expected + " expected, got an empty value");
         }
         String trimmed = text.strip();
         if (NON_FINITE.matcher(trimmed).matches()) {
@@ -223,33 +496,58 @@ public final class Quantities {
         if (!matcher.matches()) {
             throw new InputException(
                     where,
-                    kind.dimensionName() + " expected as a number and unit (e.g. " + example(kind) + "), got \""
-                            + abbreviate(trimmed) + "\"");
+                    expected + " expected as a number and unit (e.g. " + example + "), got \"" + abbreviate(trimmed)
+                            + "\"");
         }
         double number = Double.parseDouble(matcher.group(1));
         if (!Double.isFinite(number)) {
             throw new InputException(where, "number out of range in \"" + abbreviate(trimmed) + "\"");
         }
-        String unitText = matcher.group(2).strip();
-        if (unitText.isEmpty()) {
-            return number;
-        }
-        Unit<?> unit = parseUnit(unitText, trimmed, kind, where);
-        Unit<?> si = SI_UNITS.get(kind);
-        if (!unit.isCompatible(si)) {
-            throw new InputException(
-                    where,
-                    kind.dimensionName() + " expected, got \"" + abbreviate(trimmed) + "\" (" + dimensionNameOf(unit)
-                            + ")");
-        }
-        double value = convert(unit, si, number);
+        return new Typed(number, matcher.group(1), matcher.group(2).strip(), trimmed);
+    }
+
+    private static double finite(double value, Typed typed, String where) {
         if (!Double.isFinite(value)) {
-            throw new InputException(where, "value out of range in \"" + abbreviate(trimmed) + "\"");
+            throw new InputException(where, "value out of range in \"" + abbreviate(typed.whole) + "\"");
         }
         return value;
     }
 
-    private static Unit<?> parseUnit(String unitText, String whole, QuantityKind kind, String where) {
+    private static InputException wrongDimension(String expected, Typed typed, Unit<?> unit, String where) {
+        return new InputException(
+                where, expected + " expected, got \"" + abbreviate(typed.whole) + "\" (" + dimensionNameOf(unit) + ")");
+    }
+
+    /** The unit, or null when the text is not one (the caller then reports the whole unit text). */
+    private static Unit<?> unitOrNull(String unitText) {
+        try {
+            return parseUnit(unitText, unitText, "unit", "", "");
+        } catch (InputException e) {
+            return null;
+        }
+    }
+
+    /** A unit text with a gauge or absolute marker taken off. */
+    private record Marked(String base, PressureReading.Reference reference) {
+        String describe() {
+            return reference == PressureReading.Reference.GAUGE ? "a gauge" : "an absolute";
+        }
+    }
+
+    /** The unit without its gauge/absolute marker, or null when it carries none. */
+    private static Marked marked(String unitText) {
+        for (Pattern p : List.of(MARKER_IN_BRACKETS, MARKER_GLUED, MARKER_WORD)) {
+            Matcher m = p.matcher(unitText);
+            if (m.matches()) {
+                return new Marked(
+                        m.group(1).strip(),
+                        m.group(2) != null ? PressureReading.Reference.GAUGE : PressureReading.Reference.ABSOLUTE);
+            }
+        }
+        return null;
+    }
+
+    private static Unit<?> parseUnit(String unitText, String whole, String expected, String example, String where) {
         if (unitText.length() > MAX_UNIT_LENGTH) {
             throw new InputException(
                     where,
@@ -270,21 +568,127 @@ public final class Quantities {
                     "unit \"" + unitText + "\" in \"" + abbreviate(whole) + "\" has a power of more than one digit;"
                             + " units use powers such as ^2 or ^3");
         }
+        String compact = BRACKETED_EXPONENT
+                .matcher(unitText.replace(" ", "").replace("H₂O", "H2O").replace("**", "^"))
+                .replaceAll("^$1");
+        // Powers are handed to the unit library as ^2 and ^3: it reads a lone "mm²" as milli-(m²),
+        // 10⁻³ m², but "mm^2" as (mm)², 10⁻⁶ m².
         String normalised = PLAIN_POWER
-                .matcher(unitText.replace(" ", ""))
-                .replaceAll(r -> r.group(1).equals("2") ? "²" : "³");
+                .matcher(compact)
+                .replaceAll("^$1")
+                .replace("²", "^2")
+                .replace("³", "^3");
         try {
-            return FORMAT.parse(normalised);
-        } catch (MeasurementException | IllegalArgumentException | IndexOutOfBoundsException e) {
+            return new LeftToRight(normalised).unit();
+        } catch (MeasurementException | IllegalArgumentException | IndexOutOfBoundsException | ArithmeticException e) {
             throw new InputException(
                     where,
-                    kind.dimensionName() + " expected, got \"" + abbreviate(whole) + "\": unknown unit \"" + unitText
-                            + "\" (e.g. " + example(kind) + ")",
+                    expected + " expected, got \"" + abbreviate(whole) + "\": unknown unit \"" + unitText + "\" (e.g. "
+                            + example + ")",
                     e);
         }
     }
 
-    private static String abbreviate(String text) {
+    /**
+     * Reads a unit expression left to right, so that {@code a/b/c} is {@code (a/b)/c} and {@code
+     * a/b*c} is {@code (a/b)·c}. ISO 80000-1 and the SI Brochure ask for brackets rather than a
+     * second solidus, so no standard says how to read one; left to right is how calculators and
+     * programming languages read it, and how {@link DimensionParser} does. The unit library alone
+     * would read {@code a/b/c} as {@code a/(b/c)}, which made {@code m/s/s} a length. Each symbol with
+     * its power ({@code m³}, {@code s^-1}) is handed to the unit library; products and quotients are
+     * formed here. Input is at most {@link #MAX_UNIT_LENGTH} characters, so the recursion on
+     * parentheses is shallow.
+     */
+    private static final class LeftToRight {
+        private final String text;
+        private int pos;
+
+        LeftToRight(String text) {
+            this.text = text;
+        }
+
+        Unit<?> unit() {
+            Unit<?> u = product();
+            if (pos < text.length()) {
+                throw new IllegalArgumentException("unexpected '" + text.charAt(pos) + "'");
+            }
+            return u;
+        }
+
+        private Unit<?> product() {
+            Unit<?> result = factor();
+            while (pos < text.length()) {
+                char c = text.charAt(pos);
+                if (c == '/') {
+                    pos++;
+                    result = result.divide(factor());
+                } else if (c == '*' || c == '·') {
+                    pos++;
+                    result = result.multiply(factor());
+                } else {
+                    break;
+                }
+            }
+            return result;
+        }
+
+        private Unit<?> factor() {
+            if (pos < text.length() && text.charAt(pos) == '(') {
+                pos++;
+                Unit<?> inner = product();
+                if (pos >= text.length() || text.charAt(pos) != ')') {
+                    throw new IllegalArgumentException("expected ')'");
+                }
+                pos++;
+                return power(inner);
+            }
+            int start = pos;
+            while (pos < text.length() && "/*·()".indexOf(text.charAt(pos)) < 0) {
+                pos++;
+            }
+            String symbol = text.substring(start, pos);
+            if (symbol.isEmpty()) {
+                throw new IllegalArgumentException("a unit symbol is missing at " + (start + 1));
+            }
+            if (symbol.equals("1")) {
+                return AbstractUnit.ONE;
+            }
+            return FORMAT.parse(symbol);
+        }
+
+        /** A power after a bracket: {@code (m/s)^2}, {@code (m/s)²}. */
+        private Unit<?> power(Unit<?> base) {
+            if (pos >= text.length()) {
+                return base;
+            }
+            char c = text.charAt(pos);
+            int exponent;
+            if (c == '^') {
+                Matcher m = BRACKET_POWER.matcher(text).region(pos, text.length());
+                if (!m.lookingAt()) {
+                    throw new IllegalArgumentException("expected a one-digit power after '^'");
+                }
+                exponent = Integer.parseInt(m.group(1));
+                pos = m.end();
+            } else if (c == '²' || c == '³') {
+                exponent = c == '²' ? 2 : 3;
+                pos++;
+            } else {
+                return base;
+            }
+            if (exponent == 0) {
+                return AbstractUnit.ONE;
+            }
+            Unit<?> raised = base.pow(Math.abs(exponent));
+            return exponent < 0 ? raised.inverse() : raised;
+        }
+    }
+
+    private static final Pattern BRACKET_POWER = Pattern.compile("\\^([+-]?\\d)");
+    /** {@code ^(-1)} written for {@code ^-1}. */
+    private static final Pattern BRACKETED_EXPONENT = Pattern.compile("\\^\\(([+-]?\\d)\\)");
+
+    static String abbreviate(String text) {
         return text.length() <= 60 ? text : text.substring(0, 60) + "…";
     }
 
@@ -301,22 +705,50 @@ public final class Quantities {
         }
     }
 
-    private static String dimensionNameOf(Unit<?> unit) {
-        for (QuantityKind k : List.of(
-                QuantityKind.LENGTH,
-                QuantityKind.VOLUMETRIC_FLOW,
-                QuantityKind.VELOCITY,
-                QuantityKind.PRESSURE,
-                QuantityKind.TEMPERATURE,
-                QuantityKind.DENSITY,
-                QuantityKind.DYNAMIC_VISCOSITY,
-                QuantityKind.KINEMATIC_VISCOSITY,
-                QuantityKind.DIMENSIONLESS)) {
-            if (unit.isCompatible(SI_UNITS.get(k))) {
+    /** Kinds named in messages, in the order they are tried. */
+    private static final List<QuantityKind> NAMED_KINDS = List.of(
+            QuantityKind.LENGTH,
+            QuantityKind.VOLUMETRIC_FLOW,
+            QuantityKind.VELOCITY,
+            QuantityKind.PRESSURE,
+            QuantityKind.TEMPERATURE,
+            QuantityKind.DENSITY,
+            QuantityKind.DYNAMIC_VISCOSITY,
+            QuantityKind.KINEMATIC_VISCOSITY,
+            QuantityKind.DIMENSIONLESS);
+
+    /** The plain name of a unit's dimension, or null when it is none we name. */
+    private static String kindName(Unit<?> unit, boolean withDimensionless) {
+        for (QuantityKind k : NAMED_KINDS) {
+            if ((withDimensionless || k != QuantityKind.DIMENSIONLESS) && unit.isCompatible(SI_UNITS.get(k))) {
                 return k.dimensionName();
             }
         }
-        return "dimension " + unit.getDimension();
+        if (unit.isCompatible(MASS_FLOW)) {
+            return "mass flow";
+        }
+        return withDimensionless && unit.isCompatible(Units.HERTZ) ? "frequency" : null;
+    }
+
+    /**
+     * What a unit measures, for messages: a kind ({@code volumetric flow}), a kind per second or per
+     * metre ({@code volumetric flow per second, dimension [L]³/[T]²}), or the bare dimension.
+     */
+    private static String dimensionNameOf(Unit<?> unit) {
+        String exact = kindName(unit, true);
+        if (exact != null) {
+            return exact;
+        }
+        String dimension = "dimension " + unit.getDimension();
+        String perSecond = kindName(unit.multiply(Units.SECOND), false);
+        if (perSecond != null) {
+            return perSecond + " per second, " + dimension;
+        }
+        String perMetre = kindName(unit.multiply(Units.METRE), false);
+        if (perMetre != null) {
+            return perMetre + " per metre, " + dimension;
+        }
+        return dimension;
     }
 
     private static String example(QuantityKind kind) {
@@ -378,7 +810,7 @@ public final class Quantities {
 
     private static synchronized UnitConverter displayConverter(QuantityKind kind, String symbol) {
         return DISPLAY_TO_SI.computeIfAbsent(kind.name() + "|" + symbol, key -> {
-            Unit<?> unit = parseUnit(symbol, symbol, kind, "display unit");
+            Unit<?> unit = parseUnit(symbol, symbol, kind.dimensionName(), example(kind), "display unit");
             return converter(unit, SI_UNITS.get(kind));
         });
     }

@@ -237,6 +237,11 @@ class ProjectEditorTest {
     void endsAndLimitsAreEditedAndCleared() {
         assertTrue(editor.setRunField(ProjectEditor.RunField.DELIVERY_PRESSURE, "35"));
         assertEquals("35 kPa", editor.project().ends().delivery().pressure());
+        // an end pressure may be a gauge or absolute reading; the project converts it with the site
+        assertTrue(editor.setRunField(ProjectEditor.RunField.DELIVERY_PRESSURE, "1.5 bara"));
+        assertEquals("1.5 bara", editor.project().ends().delivery().pressure());
+        assertFalse(editor.setRunField(ProjectEditor.RunField.DELIVERY_PRESSURE, "1.5 m(g)"));
+        assertTrue(editor.setRunField(ProjectEditor.RunField.DELIVERY_PRESSURE, "35"));
         assertEquals("2 m", editor.project().ends().source().level(), "the other end is untouched");
         assertFalse(editor.setRunField(ProjectEditor.RunField.MAXIMUM_VELOCITY, "-1 m/s"));
         String message = editor.messages().get("limits.maximumVelocity");
@@ -244,7 +249,17 @@ class ProjectEditorTest {
         assertFalse(editor.setRunField(ProjectEditor.RunField.HEAD_BUDGET, "55 kPa"));
         assertTrue(editor.setRunField(ProjectEditor.RunField.HEAD_BUDGET, ""));
         assertEquals("", editor.project().limits().headBudget());
-        assertEquals("5 m", editor.runField(ProjectEditor.RunField.MAXIMUM_FRICTION_LOSS));
+        assertEquals("5 m per 100 m", editor.runField(ProjectEditor.RunField.MAXIMUM_FRICTION_LOSS));
+        // The friction limit is a gradient: a bare number is written out in the shown system, a head alone refused.
+        assertTrue(editor.setRunField(ProjectEditor.RunField.MAXIMUM_FRICTION_LOSS, "4"));
+        assertEquals("4 m per 100 m", editor.project().limits().maximumFrictionLossPer100m());
+        assertFalse(editor.setRunField(ProjectEditor.RunField.MAXIMUM_FRICTION_LOSS, "4 ft"));
+        assertTrue(
+                editor.messages().get("limits.maximumFrictionLossPer100m").contains("write \"4 ft per 100 ft\""),
+                editor.messages().get("limits.maximumFrictionLossPer100m"));
+        editor.unitSystemProperty().set(UnitSystem.US_CUSTOMARY);
+        assertTrue(editor.setRunField(ProjectEditor.RunField.MAXIMUM_FRICTION_LOSS, "4"));
+        assertEquals("4 ft per 100 ft", editor.project().limits().maximumFrictionLossPer100m());
     }
 
     @Test

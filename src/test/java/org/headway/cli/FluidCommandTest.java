@@ -93,6 +93,22 @@ class FluidCommandTest {
     }
 
     @Test
+    void thePressureIsAbsoluteAndAGaugeReadingIsRefused() {
+        // Water boils at 120 °C below 198.67 kPa (IAPWS-IF97 Region 4, from memory): 2 bara keeps it liquid.
+        assertEquals(
+                0, run("fluid", "water", "-t", "120degC", "--pressure", "2 bara", "--format", "json"), err.toString());
+        StringWriter fresh = new StringWriter();
+        CommandLine cl = HeadwayCommand.commandLine();
+        cl.setOut(new PrintWriter(new StringWriter()));
+        cl.setErr(new PrintWriter(fresh));
+        assertEquals(2, cl.execute("fluid", "water", "-t", "120degC", "--pressure", "1 barg"));
+        assertEquals(
+                "headway: --pressure: \"1 barg\" is a gauge reading, but the fluid's pressure is absolute; give it in"
+                        + " kPa, bara or psia (a project converts gauge readings with its site's barometric pressure)",
+                fresh.toString().strip());
+    }
+
+    @Test
     void unknownFluidAndMissingTemperatureExitWithTwo() {
         assertEquals(2, run("fluid", "mercury", "-t", "20degC"));
         assertTrue(
