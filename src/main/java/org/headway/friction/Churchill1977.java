@@ -101,4 +101,13 @@ public final class Churchill1977 implements FrictionCorrelation {
         }
         return FrictionChecks.requireUsable(displayName(), f, reynolds, relativeRoughness);
     }
+
+    /**
+     * True: as Re → 0 the (8/Re)¹² term dominates the sum and f → 8 · 8/Re = 64/Re, the laminar law,
+     * so a pipe's head loss is proportional to flow as the flow tends to zero.
+     */
+    @Override
+    public boolean laminarAtLowReynolds() {
+        return true;
+    }
 }

@@ -32,7 +32,11 @@ public record DiameterChange(String id, String name, double inletDiameter, doubl
         InputException.requirePositive(id + ".inlet_diameter", inletDiameter);
         InputException.requirePositive(id + ".outlet_diameter", outletDiameter);
         if (inletDiameter > Segment.MAX_DIAMETER || outletDiameter > Segment.MAX_DIAMETER) {
-            throw new InputException(id, "a bore beyond " + Segment.MAX_DIAMETER + " m; check the unit");
+            throw new InputException(
+                    id + (inletDiameter > Segment.MAX_DIAMETER ? ".inlet_diameter" : ".outlet_diameter"),
+                    "a bore of " + (inletDiameter > Segment.MAX_DIAMETER ? inletDiameter : outletDiameter)
+                            + " m is beyond the plausible limit of "
+                            + Segment.MAX_DIAMETER + " m; check the unit");
         }
         if (!(includedAngle > 0 && includedAngle <= SUDDEN)) {
             throw new InputException(

@@ -8,9 +8,10 @@ import org.headway.caution.InputException;
  *
  * <p>Sign convention: {@link #headLoss} is the head lost from inlet to outlet for a flow Q in the
  * element's positive direction (inlet → outlet); it is an odd function of Q for elements that
- * allow reverse flow, so that reverse flow loses head in the reverse direction. A pump's head loss
- * is negative (it adds head). Elevation is not part of the law: the ends' elevations are the
- * system's business ({@link #rise()}).
+ * allow reverse flow, so that reverse flow loses head in the reverse direction (a diameter change
+ * meets the opposite change in reverse, so its law is odd only with its bores swapped). A pump's
+ * head loss is negative (it adds head). Elevation is not part of the law: the ends' elevations are
+ * the system's business ({@link #rise()}).
  *
  * <p>{@link #headLossSlope} is the exact derivative dh/dQ of that law (analytic; a pipe's includes
  * the slope of its friction factor with Reynolds number). At Q = 0 it is the limit of the slope as

@@ -65,6 +65,12 @@ public record FlowCoefficientValve(String id, String name, double flowCoefficien
     /** A valve by C_v (US gal/min at 1 psi). */
     public static FlowCoefficientValve ofCv(String id, String name, double cv) {
         InputException.requirePositive(id + ".cv", cv);
+        if (cv * KV_PER_CV > MAX_FLOW_COEFFICIENT) {
+            throw new InputException(
+                    id + ".cv",
+                    "flow coefficient Cv " + cv + " (US gal/min at 1 psi) is beyond the plausible limit of "
+                            + trim(MAX_FLOW_COEFFICIENT / KV_PER_CV) + "; check the number and whether it is Kv or Cv");
+        }
         return new FlowCoefficientValve(id, name, cv * KV_PER_CV, "Cv " + trim(cv));
     }
 

@@ -401,8 +401,13 @@ public final class HeadLossCalculator {
         if (element instanceof Segment s && s.highPoint().isPresent()) {
             Segment.HighPoint point = s.highPoint().get();
             double share = s.length() == 0 ? 0 : point.distance() / s.length();
-            // Friction and fittings taken as spread evenly along the pipe: the grade falls linearly.
-            double grade = p.inletHydraulicGrade() + share * (p.outletHydraulicGrade() - p.inletHydraulicGrade());
+            // Friction and fittings taken as spread evenly along the pipe: the energy grade falls linearly, and
+            // inside the pipe the velocity head is the pipe's own (inlet energy minus hydraulic grade). The outlet's
+            // hydraulic grade is not interpolated to: past the last element it is set to the energy grade (the
+            // delivery's velocity is neglected), which would lift the grade at the high point by share × V²/(2g).
+            double velocityHead = p.inletEnergyGrade() - p.inletHydraulicGrade();
+            double energyGrade = p.inletEnergyGrade() + share * (p.outletEnergyGrade() - p.inletEnergyGrade());
+            double grade = energyGrade - velocityHead;
             high = OptionalDouble.of(rho * g * (grade - (p.inletElevation() + point.rise())));
         }
         List<Caution> cautions = new ArrayList<>();

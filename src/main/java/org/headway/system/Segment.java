@@ -106,14 +106,15 @@ public record Segment(
         frictionOverride = frictionOverride == null ? Optional.empty() : frictionOverride;
         hazenWilliams = hazenWilliams == null ? Optional.empty() : hazenWilliams;
         highPoint = highPoint == null ? Optional.empty() : highPoint;
+        InputException.requireNonNegative("length", length);
+        InputException.requirePositive("inner diameter", innerDiameter);
+        requireAtMost("length", length, MAX_LENGTH, "m");
+        // After the length's own checks, so that a bad length is reported as the length.
         if (highPoint.isPresent() && highPoint.get().distance() > length) {
             throw new InputException(
                     "high point distance",
                     "the high point lies " + highPoint.get().distance() + " m along a pipe of " + length + " m");
         }
-        InputException.requireNonNegative("length", length);
-        InputException.requirePositive("inner diameter", innerDiameter);
-        requireAtMost("length", length, MAX_LENGTH, "m");
         requireAtMost("inner diameter", innerDiameter, MAX_DIAMETER, "m");
         requireAtMost("elevation change", Math.abs(elevationChange), MAX_ELEVATION_CHANGE, "m");
         requireAtMost("loss coefficient", extraLossCoefficient, MAX_LOSS_COEFFICIENT, "");
