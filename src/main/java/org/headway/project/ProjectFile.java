@@ -196,7 +196,7 @@ public final class ProjectFile {
                     l.quantity("maximumVelocity"),
                     version == 1
                             ? formatOneFrictionLimit(l.quantity("maximumFrictionLossPer100m"))
-                            : l.quantity("maximumFrictionLossPer100m"),
+                            : metresPer100m(l.quantity("maximumFrictionLossPer100m")),
                     l.quantity("headBudget"),
                     l.quantity("npshMargin"));
         }
@@ -374,6 +374,19 @@ public final class ProjectFile {
             }
             return text.strip() + " per 100 m";
         }
+    }
+
+    /**
+     * Format-2 files saved before the gradient was written out hold a limit such as {@code "4 m"},
+     * which Headway has always read as 4 m per 100 m and which metric practice reads the same way;
+     * it keeps that meaning. A head in any other unit alone ({@code "4 ft"}: per 100 ft or per 100
+     * m?) is left for the resolver to refuse with the way to write it.
+     */
+    static String metresPer100m(String text) {
+        if (text.strip().matches("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?\\s*m")) {
+            return text.strip() + " per 100 m";
+        }
+        return text;
     }
 
     private static List<Project.PumpPointSpec> pumpPoints(Obj p) {

@@ -269,6 +269,17 @@ class UnitsInProjectsTest {
     }
 
     @Test
+    void aFormatTwoLimitInMetresAloneKeepsTheMeaningHeadwayGaveIt() {
+        // Saved by the first format-2 Headway: "4 m" meant 4 m per 100 m (metric practice reads it the same way).
+        Project p = ProjectFile.parse(project("6 L/s", "0 kPa", "50 kPa", "4 m"));
+        assertEquals("4 m per 100 m", p.limits().maximumFrictionLossPer100m());
+        assertEquals(
+                4.0,
+                resolve(project("6 L/s", "0 kPa", "50 kPa", "4 m")).limits().maximumFrictionLossPer100m(),
+                0);
+    }
+
+    @Test
     void aFormatOneHeadKeepsTheMeaningItHadThere() {
         // Format 1 read the limit as a head per 100 m of pipe: "4 ft" was 1.2192 m per 100 m (0.3048 m/ft).
         String formatOne = ProjectFileTest.VALID.replace(
