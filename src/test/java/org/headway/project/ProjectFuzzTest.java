@@ -68,11 +68,24 @@ class ProjectFuzzTest {
 
     @Test
     void everyInputGivesAResultOrALocatedError() throws Exception {
+        fuzz("/fluids-data/examples/demo-orchard-booster.json", SEED);
+    }
+
+    /**
+     * The element-model inputs: valves by Kv, rated components, reducers, isolation valves, site
+     * altitude and pressure limits, mutated the same way.
+     */
+    @Test
+    void elementModelInputsGiveAResultOrALocatedError() throws Exception {
+        fuzz("/fluids-data/examples/coil-branch.json", SEED + 1);
+    }
+
+    private void fuzz(String base, long seed) throws Exception {
         String demo;
-        try (InputStream in = getClass().getResourceAsStream("/fluids-data/examples/demo-orchard-booster.json")) {
+        try (InputStream in = getClass().getResourceAsStream(base)) {
             demo = new String(in.readAllBytes(), StandardCharsets.UTF_8);
         }
-        Random random = new Random(SEED);
+        Random random = new Random(seed);
         int rejected = 0;
         int solved = 0;
         for (int i = 0; i < INPUTS; i++) {
@@ -88,15 +101,15 @@ class ProjectFuzzTest {
                 assertFalse(e.getMessage() == null || e.getMessage().isBlank(), "empty message, case " + i);
                 assertTrue(
                         !e.where().isEmpty() || e.getMessage().contains(":"),
-                        "case " + i + " (seed " + SEED + "): message names no place: " + e.getMessage());
+                        "case " + i + " (seed " + seed + "): message names no place: " + e.getMessage());
             } catch (RuntimeException | StackOverflowError e) {
-                fail("case " + i + " (seed " + SEED + ") threw " + e + " for input:\n" + abbreviate(input), e);
+                fail("case " + i + " (seed " + seed + ") threw " + e + " for input:\n" + abbreviate(input), e);
             }
             long ms = (System.nanoTime() - start) / 1_000_000;
             assertTrue(ms < PER_INPUT_BUDGET_MS, "case " + i + " took " + ms + " ms");
         }
-        System.out.println("project JSON fuzz: " + INPUTS + " inputs, " + rejected + " rejected with a located error, "
-                + solved + " solved");
+        System.out.println("project JSON fuzz of " + base + ": " + INPUTS + " inputs, " + rejected
+                + " rejected with a located error, " + solved + " solved");
         assertTrue(solved > 0 && rejected > 0, "the generator must exercise both outcomes");
     }
 
