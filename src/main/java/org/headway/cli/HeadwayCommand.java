@@ -18,6 +18,7 @@ import picocli.CommandLine.Command;
             CommandLine.HelpCommand.class,
             DemoCommand.class,
             SolveCommand.class,
+            NetworkCommand.class,
             SheetCommand.class,
             FrictionCommand.class,
             FluidCommand.class,

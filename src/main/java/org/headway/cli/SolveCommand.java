@@ -104,7 +104,24 @@ public final class SolveCommand implements Callable<Integer> {
     public Integer call() {
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
-        ResolvedProject resolved = resolve(ProjectFile.load(project), catalog);
+        org.headway.project.Project loaded = ProjectFile.load(project);
+        if (loaded.isNetwork()) {
+            org.headway.network.Network network;
+            try {
+                network = ProjectResolver.resolveNetwork(
+                        loaded, catalog, project.toAbsolutePath().getParent());
+            } catch (InputException e) {
+                throw new InputException(SheetCommand.fileName(project), e.getMessage(), e);
+            }
+            if (mode != Mode.headloss) {
+                throw new InputException(
+                        "--mode",
+                        "a network is solved for its demands and fixed heads; --mode " + mode + " is for runs");
+            }
+            return NetworkCommand.solveAndPrint(
+                    spec, network, NetworkCommand.Format.valueOf(format.name()), system, null, false);
+        }
+        ResolvedProject resolved = resolve(loaded, catalog);
         PipeRun run = resolved.run();
         PrintWriter out = spec.commandLine().getOut();
 

@@ -38,7 +38,8 @@ public record Project(
         Optional<CurveSpec> curve,
         SiteSpec site,
         PressureLimitsSpec pressureLimits,
-        String inletLevel) {
+        String inletLevel,
+        Optional<NetworkSpec> network) {
 
     /** Format name written into every project file. */
     public static final String FORMAT = "headway-project";
@@ -50,6 +51,46 @@ public record Project(
         site = site == null ? SiteSpec.SEA_LEVEL : site;
         pressureLimits = pressureLimits == null ? PressureLimitsSpec.NONE : pressureLimits;
         inletLevel = inletLevel == null ? "" : inletLevel;
+        network = network == null ? Optional.empty() : network;
+    }
+
+    /** A series-run project of format 2 (no network). */
+    public Project(
+            String title,
+            TitleBlock titleBlock,
+            FluidSpec fluid,
+            String flow,
+            String flowUncertainty,
+            String friction,
+            List<ElementSpec> elements,
+            EndsSpec ends,
+            LimitsSpec limits,
+            Optional<SizingSpec> sizing,
+            Optional<CurveSpec> curve,
+            SiteSpec site,
+            PressureLimitsSpec pressureLimits,
+            String inletLevel) {
+        this(
+                title,
+                titleBlock,
+                fluid,
+                flow,
+                flowUncertainty,
+                friction,
+                elements,
+                ends,
+                limits,
+                sizing,
+                curve,
+                site,
+                pressureLimits,
+                inletLevel,
+                Optional.empty());
+    }
+
+    /** Whether this project holds a network (nodes and links) rather than a series run. */
+    public boolean isNetwork() {
+        return network.isPresent();
     }
 
     /**
@@ -220,6 +261,64 @@ public record Project(
         /** A field's text, empty when not given. */
         public String value(String key) {
             return values.getOrDefault(key, "");
+        }
+    }
+
+    /**
+     * A network node as typed.
+     *
+     * @param id stable id
+     * @param name optional name
+     * @param elevation elevation (a length)
+     * @param demand demand out of the network (a flow; blank = 0)
+     * @param fixedHead head of a fixed-head node (a length on the elevations' datum), or blank
+     * @param fixedPressure gauge pressure held at a fixed-pressure node (its head is elevation plus
+     *     pressure over ρg), or blank
+     * @param reference whether the node is a closed loop's pressure reference (with fixedHead or
+     *     fixedPressure)
+     * @param x drawing position, optional
+     * @param y drawing position, optional
+     */
+    public record NodeSpec(
+            String id,
+            String name,
+            String elevation,
+            String demand,
+            String fixedHead,
+            String fixedPressure,
+            boolean reference,
+            String x,
+            String y) {
+        public NodeSpec {
+            name = name == null ? "" : name;
+            elevation = elevation == null ? "" : elevation;
+            demand = demand == null ? "" : demand;
+            fixedHead = fixedHead == null ? "" : fixedHead;
+            fixedPressure = fixedPressure == null ? "" : fixedPressure;
+            x = x == null ? "" : x;
+            y = y == null ? "" : y;
+        }
+    }
+
+    /**
+     * A network link as typed: an element between two nodes.
+     *
+     * @param from upstream node id for positive flow
+     * @param to downstream node id
+     * @param element the element
+     * @param designFlow the flow the link should carry (used by balancing), or blank
+     */
+    public record LinkSpec(String from, String to, ElementSpec element, String designFlow) {
+        public LinkSpec {
+            designFlow = designFlow == null ? "" : designFlow;
+        }
+    }
+
+    /** A network as typed: nodes and links. */
+    public record NetworkSpec(List<NodeSpec> nodes, List<LinkSpec> links) {
+        public NetworkSpec {
+            nodes = List.copyOf(nodes);
+            links = List.copyOf(links);
         }
     }
 

@@ -157,7 +157,9 @@ public final class ProjectFile {
                     "curve",
                     "site",
                     "pressureLimits",
-                    "inletLevel");
+                    "inletLevel",
+                    "nodes",
+                    "links");
         }
         Project.TitleBlock titleBlock = Project.TitleBlock.EMPTY;
         if (top.has("reference")) {
@@ -254,10 +256,11 @@ public final class ProjectFile {
                     sizing,
                     curve);
         }
+        boolean isNetwork = top.has("nodes") || top.has("links");
         List<Project.ElementSpec> elements = new ArrayList<>();
-        ArrayNode list = top.array("elements", true);
+        ArrayNode list = isNetwork && !top.has("elements") ? null : top.array("elements", true);
         java.util.Set<String> ids = new java.util.HashSet<>();
-        for (int i = 0; i < list.size(); i++) {
+        for (int i = 0; list != null && i < list.size(); i++) {
             Obj e = new Obj(list.get(i), "elements[" + i + "]");
             String kind = e.has("kind") ? e.text("kind", true) : "pipe";
             String id = e.text("id", true);
@@ -268,58 +271,9 @@ public final class ProjectFile {
                 throw new InputException(
                         e.path + ".id", "the id \"" + id + "\" is used by an earlier element; ids must be unique");
             }
-            switch (kind) {
-                case "pipe" -> {
-                    e.allow(
-                            "id",
-                            "kind",
-                            "name",
-                            "length",
-                            "pipe",
-                            "innerDiameter",
-                            "roughness",
-                            "fittings",
-                            "lossCoefficient",
-                            "elevationChange",
-                            "outletLevel",
-                            "friction",
-                            "hazenWilliamsC",
-                            "highPoint");
-                    elements.add(segment(e, id, true).withId(id));
-                }
-                case "pump" -> {
-                    e.allow("id", "kind", "name", "points", "npshRequired", "speedRatio");
-                    elements.add(new Project.PumpSpec(
-                            id,
-                            e.has("name") ? e.text("name", true) : id,
-                            0,
-                            pumpPoints(e),
-                            e.quantity("npshRequired"),
-                            e.quantity("speedRatio")));
-                }
-                default -> {
-                    List<String> fields = Project.DeviceSpec.FIELDS.get(kind);
-                    if (fields == null) {
-                        throw new InputException(
-                                e.path + ".kind",
-                                "unknown element kind \"" + kind + "\"; expected pipe, pump, "
-                                        + String.join(
-                                                ", ", new java.util.TreeSet<>(Project.DeviceSpec.FIELDS.keySet())));
-                    }
-                    List<String> allowed = new ArrayList<>(List.of("id", "kind", "name"));
-                    allowed.addAll(fields);
-                    e.allow(allowed.toArray(new String[0]));
-                    java.util.Map<String, String> values = new java.util.LinkedHashMap<>();
-                    for (String key : fields) {
-                        String v = e.quantity(key);
-                        if (!v.isEmpty()) {
-                            values.put(key, v);
-                        }
-                    }
-                    elements.add(new Project.DeviceSpec(kind, id, e.has("name") ? e.text("name", true) : "", values));
-                }
-            }
+            elements.add(element(e, id, kind, List.of()));
         }
+        Optional<Project.NetworkSpec> network = isNetwork ? Optional.of(network(top)) : Optional.empty();
         Project.SiteSpec site = Project.SiteSpec.SEA_LEVEL;
         if (top.has("site")) {
             Obj z = top.object("site");
@@ -339,7 +293,7 @@ public final class ProjectFile {
                 top.text("title", false),
                 titleBlock,
                 fluid,
-                top.quantityRequired("flow"),
+                isNetwork ? top.quantity("flow") : top.quantityRequired("flow"),
                 top.quantity("flowUncertainty"),
                 friction,
                 elements,
@@ -349,7 +303,157 @@ public final class ProjectFile {
                 curve,
                 site,
                 pressureLimits,
-                top.quantity("inletLevel"));
+                top.quantity("inletLevel"),
+                network);
+    }
+
+    private static void writeElementFields(ObjectNode n, Project.ElementSpec element) {
+        if (element instanceof Project.SegmentSpec s) {
+            n.put("name", s.name());
+            n.put("length", s.length());
+            s.pipe().ifPresent(pipe -> {
+                ObjectNode pn = n.putObject("pipe");
+                pn.put("material", pipe.material());
+                pn.put("size", pipe.size());
+                putIf(pn, "schedule", pipe.schedule());
+            });
+            putIf(n, "innerDiameter", s.innerDiameter());
+            putIf(n, "roughness", s.roughness());
+            if (!s.fittings().isEmpty()) {
+                ArrayNode fits = n.putArray("fittings");
+                for (Project.FittingSpec fit : s.fittings()) {
+                    ObjectNode fn = fits.addObject();
+                    fn.put("kind", fit.kind());
+                    fn.put("count", fit.count());
+                    putIf(fn, "lossCoefficient", fit.lossCoefficient());
+                }
+            }
+            putIf(n, "lossCoefficient", s.lossCoefficient());
+            putIf(n, "elevationChange", s.elevationChange());
+            putIf(n, "outletLevel", s.outletLevel());
+            putIf(n, "friction", s.friction());
+            putIf(n, "hazenWilliamsC", s.hazenWilliamsC());
+            if (!s.highPointDistance().isEmpty() || !s.highPointRise().isEmpty()) {
+                ObjectNode h = n.putObject("highPoint");
+                putIf(h, "distance", s.highPointDistance());
+                putIf(h, "rise", s.highPointRise());
+            }
+        } else if (element instanceof Project.PumpSpec pump) {
+            n.put("name", pump.name());
+            ArrayNode pts = n.putArray("points");
+            for (Project.PumpPointSpec pt : pump.points()) {
+                ObjectNode ptn = pts.addObject();
+                ptn.put("flow", pt.flow());
+                ptn.put("head", pt.head());
+                putIf(ptn, "npshRequired", pt.npshRequired());
+            }
+            putIf(n, "npshRequired", pump.npshRequired());
+            putIf(n, "speedRatio", pump.speedRatio());
+        } else if (element instanceof Project.DeviceSpec d) {
+            putIf(n, "name", d.name());
+            d.values().forEach((k, v) -> putIf(n, k, v));
+        }
+    }
+
+    /** One element as written, of any kind; {@code extra} names keys the caller reads itself. */
+    private static Project.ElementSpec element(Obj e, String id, String kind, List<String> extra) {
+        List<String> common = new ArrayList<>(List.of("id", "kind", "name"));
+        common.addAll(extra);
+        switch (kind) {
+            case "pipe" -> {
+                List<String> keys = new ArrayList<>(common);
+                keys.addAll(List.of(
+                        "length",
+                        "pipe",
+                        "innerDiameter",
+                        "roughness",
+                        "fittings",
+                        "lossCoefficient",
+                        "elevationChange",
+                        "outletLevel",
+                        "friction",
+                        "hazenWilliamsC",
+                        "highPoint"));
+                e.allow(keys.toArray(new String[0]));
+                return segment(e, id, true).withId(id);
+            }
+            case "pump" -> {
+                List<String> keys = new ArrayList<>(common);
+                keys.addAll(List.of("points", "npshRequired", "speedRatio"));
+                e.allow(keys.toArray(new String[0]));
+                return new Project.PumpSpec(
+                        id,
+                        e.has("name") ? e.text("name", true) : id,
+                        0,
+                        pumpPoints(e),
+                        e.quantity("npshRequired"),
+                        e.quantity("speedRatio"));
+            }
+            default -> {
+                List<String> fields = Project.DeviceSpec.FIELDS.get(kind);
+                if (fields == null) {
+                    throw new InputException(
+                            e.path + ".kind",
+                            "unknown element kind \"" + kind + "\"; expected pipe, pump, "
+                                    + String.join(", ", new java.util.TreeSet<>(Project.DeviceSpec.FIELDS.keySet())));
+                }
+                List<String> allowed = new ArrayList<>(common);
+                allowed.addAll(fields);
+                e.allow(allowed.toArray(new String[0]));
+                java.util.Map<String, String> values = new java.util.LinkedHashMap<>();
+                for (String key : fields) {
+                    String v = e.quantity(key);
+                    if (!v.isEmpty()) {
+                        values.put(key, v);
+                    }
+                }
+                return new Project.DeviceSpec(kind, id, e.has("name") ? e.text("name", true) : "", values);
+            }
+        }
+    }
+
+    /** The top-level {@code nodes} and {@code links} of a network project. */
+    private static Project.NetworkSpec network(Obj top) {
+        List<Project.NodeSpec> nodes = new ArrayList<>();
+        ArrayNode nl = top.array("nodes", true);
+        java.util.Set<String> nodeIds = new java.util.HashSet<>();
+        for (int i = 0; i < nl.size(); i++) {
+            Obj n = new Obj(nl.get(i), "nodes[" + i + "]");
+            n.allow("id", "name", "elevation", "demand", "fixedHead", "fixedPressure", "reference", "x", "y");
+            String id = n.text("id", true);
+            if (id.isBlank() || !nodeIds.add(id)) {
+                throw new InputException(
+                        n.path + ".id",
+                        id.isBlank() ? "a node needs a non-blank id" : "node id \"" + id + "\" is used twice");
+            }
+            nodes.add(new Project.NodeSpec(
+                    id,
+                    n.text("name", false),
+                    n.quantity("elevation"),
+                    n.quantity("demand"),
+                    n.quantity("fixedHead"),
+                    n.quantity("fixedPressure"),
+                    n.has("reference") && n.bool("reference"),
+                    n.quantity("x"),
+                    n.quantity("y")));
+        }
+        List<Project.LinkSpec> links = new ArrayList<>();
+        ArrayNode ll = top.array("links", true);
+        java.util.Set<String> linkIds = new java.util.HashSet<>();
+        for (int i = 0; i < ll.size(); i++) {
+            Obj e = new Obj(ll.get(i), "links[" + i + "]");
+            String kind = e.has("kind") ? e.text("kind", true) : "pipe";
+            String id = e.text("id", true);
+            if (id.isBlank() || !linkIds.add(id)) {
+                throw new InputException(
+                        e.path + ".id",
+                        id.isBlank() ? "a link needs a non-blank id" : "link id \"" + id + "\" is used twice");
+            }
+            Project.ElementSpec element = element(e, id, kind, List.of("from", "to", "designFlow"));
+            links.add(
+                    new Project.LinkSpec(e.text("from", true), e.text("to", true), element, e.quantity("designFlow")));
+        }
+        return new Project.NetworkSpec(nodes, links);
     }
 
     /**
@@ -489,7 +593,11 @@ public final class ProjectFile {
         putIf(f, "density", p.fluid().density());
         putIf(f, "viscosity", p.fluid().viscosity());
         putIf(f, "vapourPressure", p.fluid().vapourPressure());
-        root.put("flow", p.flow());
+        if (p.isNetwork()) {
+            putIf(root, "flow", p.flow());
+        } else {
+            root.put("flow", p.flow());
+        }
         putIf(root, "flowUncertainty", p.flowUncertainty());
         root.put("friction", p.friction());
         putIf(root, "inletLevel", p.inletLevel());
@@ -503,55 +611,41 @@ public final class ProjectFile {
             putIf(z, "minimum", p.pressureLimits().minimum());
             putIf(z, "maximum", p.pressureLimits().maximum());
         }
-        ArrayNode list = root.putArray("elements");
-        for (Project.ElementSpec element : p.elements()) {
-            ObjectNode n = list.addObject();
-            n.put("id", element.id());
-            n.put("kind", element.kind());
-            if (element instanceof Project.SegmentSpec s) {
-                n.put("name", s.name());
-                n.put("length", s.length());
-                s.pipe().ifPresent(pipe -> {
-                    ObjectNode pn = n.putObject("pipe");
-                    pn.put("material", pipe.material());
-                    pn.put("size", pipe.size());
-                    putIf(pn, "schedule", pipe.schedule());
-                });
-                putIf(n, "innerDiameter", s.innerDiameter());
-                putIf(n, "roughness", s.roughness());
-                if (!s.fittings().isEmpty()) {
-                    ArrayNode fits = n.putArray("fittings");
-                    for (Project.FittingSpec fit : s.fittings()) {
-                        ObjectNode fn = fits.addObject();
-                        fn.put("kind", fit.kind());
-                        fn.put("count", fit.count());
-                        putIf(fn, "lossCoefficient", fit.lossCoefficient());
-                    }
+        if (!p.isNetwork() || !p.elements().isEmpty()) {
+            ArrayNode list = root.putArray("elements");
+            for (Project.ElementSpec element : p.elements()) {
+                ObjectNode n = list.addObject();
+                n.put("id", element.id());
+                n.put("kind", element.kind());
+                writeElementFields(n, element);
+            }
+        }
+        if (p.network().isPresent()) {
+            Project.NetworkSpec net = p.network().get();
+            ArrayNode nodes = root.putArray("nodes");
+            for (Project.NodeSpec node : net.nodes()) {
+                ObjectNode n = nodes.addObject();
+                n.put("id", node.id());
+                putIf(n, "name", node.name());
+                putIf(n, "elevation", node.elevation());
+                putIf(n, "demand", node.demand());
+                putIf(n, "fixedHead", node.fixedHead());
+                putIf(n, "fixedPressure", node.fixedPressure());
+                if (node.reference()) {
+                    n.put("reference", true);
                 }
-                putIf(n, "lossCoefficient", s.lossCoefficient());
-                putIf(n, "elevationChange", s.elevationChange());
-                putIf(n, "outletLevel", s.outletLevel());
-                putIf(n, "friction", s.friction());
-                putIf(n, "hazenWilliamsC", s.hazenWilliamsC());
-                if (!s.highPointDistance().isEmpty() || !s.highPointRise().isEmpty()) {
-                    ObjectNode h = n.putObject("highPoint");
-                    putIf(h, "distance", s.highPointDistance());
-                    putIf(h, "rise", s.highPointRise());
-                }
-            } else if (element instanceof Project.PumpSpec pump) {
-                n.put("name", pump.name());
-                ArrayNode pts = n.putArray("points");
-                for (Project.PumpPointSpec pt : pump.points()) {
-                    ObjectNode ptn = pts.addObject();
-                    ptn.put("flow", pt.flow());
-                    ptn.put("head", pt.head());
-                    putIf(ptn, "npshRequired", pt.npshRequired());
-                }
-                putIf(n, "npshRequired", pump.npshRequired());
-                putIf(n, "speedRatio", pump.speedRatio());
-            } else if (element instanceof Project.DeviceSpec d) {
-                putIf(n, "name", d.name());
-                d.values().forEach((k, v) -> putIf(n, k, v));
+                putIf(n, "x", node.x());
+                putIf(n, "y", node.y());
+            }
+            ArrayNode links = root.putArray("links");
+            for (Project.LinkSpec link : net.links()) {
+                ObjectNode n = links.addObject();
+                n.put("id", link.element().id());
+                n.put("kind", link.element().kind());
+                n.put("from", link.from());
+                n.put("to", link.to());
+                writeElementFields(n, link.element());
+                putIf(n, "designFlow", link.designFlow());
             }
         }
         if (!p.ends().equals(Project.EndsSpec.OPEN)) {
@@ -649,6 +743,14 @@ public final class ProjectFile {
                 throw new InputException(at(key), "must not be empty");
             }
             return v.asText();
+        }
+
+        boolean bool(String key) {
+            JsonNode v = node.get(key);
+            if (v == null || !v.isBoolean()) {
+                throw new InputException(at(key), "expected true or false, got " + (v == null ? "nothing" : kind(v)));
+            }
+            return v.asBoolean();
         }
 
         String textOrNumber(String key, boolean required) {

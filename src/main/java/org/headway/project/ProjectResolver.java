@@ -91,6 +91,108 @@ public final class ProjectResolver {
         return new ProjectResolver(catalog, baseFolder).run(project);
     }
 
+    /**
+     * Resolves a network project's nodes and links. Heads: a node's {@code fixedHead} is a level on
+     * the elevations' datum; a {@code fixedPressure} (gauge) is held at the node's elevation, head z +
+     * p/(ρ g). Each link's element is resolved as in a series run; a pipe's elevation change is not
+     * used (node elevations are).
+     *
+     * @throws InputException listing every problem with its JSON path
+     */
+    public static org.headway.network.Network resolveNetwork(Project project, Catalog catalog, Path baseFolder) {
+        if (project.network().isEmpty()) {
+            throw new InputException("nodes", "this project is a series run, not a network (no nodes and links)");
+        }
+        return new ProjectResolver(catalog, baseFolder).network(project);
+    }
+
+    private org.headway.network.Network network(Project p) {
+        double barometric = siteForReadings(p.site()).pressure();
+        FluidState fluid = attempt("fluid", () -> fluid(p.fluid(), barometric));
+        boolean hazenWilliamsRun = HAZEN_WILLIAMS.equals(p.friction());
+        FrictionCorrelation friction =
+                hazenWilliamsRun ? FrictionMethods.byId("auto") : attempt("friction", () -> friction(p.friction()));
+        SiteAtmosphere site = attempt("site", () -> site(p.site()));
+        Project.NetworkSpec spec = p.network().orElseThrow();
+        double density = fluid == null ? Double.NaN : fluid.density();
+        List<org.headway.network.Node> nodes = new ArrayList<>();
+        for (int i = 0; i < spec.nodes().size(); i++) {
+            Project.NodeSpec n = spec.nodes().get(i);
+            org.headway.network.Node node = attempt("nodes[" + i + "] (" + n.id() + ")", () -> node(n, density));
+            if (node != null) {
+                nodes.add(node);
+            }
+        }
+        List<org.headway.network.Link> links = new ArrayList<>();
+        for (int i = 0; i < spec.links().size(); i++) {
+            Project.LinkSpec l = spec.links().get(i);
+            String path = "links[" + i + "] (" + l.element().id() + ")";
+            Element e = null;
+            if (l.element() instanceof Project.SegmentSpec seg) {
+                e = attempt(path, () -> segment(seg, fluid, hazenWilliamsRun, null, 0));
+            } else if (l.element() instanceof Project.PumpSpec ps) {
+                e = attempt(path, () -> pumpElement(ps, density));
+            } else if (l.element() instanceof Project.DeviceSpec d) {
+                e = attempt(path, () -> device(d, fluid));
+            }
+            if (e != null) {
+                Element element = e;
+                org.headway.network.Link link =
+                        attempt(path, () -> new org.headway.network.Link(element, l.from(), l.to()));
+                if (link != null) {
+                    links.add(link);
+                }
+            }
+        }
+        if (!problems.isEmpty()) {
+            String message = problems.size() == 1
+                    ? problems.get(0)
+                    : problems.size() + " problems:\n  " + String.join("\n  ", problems);
+            throw new InputException("", message);
+        }
+        return new org.headway.network.Network(
+                p.title(), new org.headway.system.FlowContext(fluid, friction), nodes, links, site);
+    }
+
+    private static org.headway.network.Node node(Project.NodeSpec n, double density) {
+        double z = n.elevation().isEmpty() ? 0 : Quantities.parse(n.elevation(), QuantityKind.LENGTH, "elevation");
+        double x = n.x().isEmpty() ? Double.NaN : Quantities.parse(n.x(), QuantityKind.LENGTH, "x");
+        double y = n.y().isEmpty() ? Double.NaN : Quantities.parse(n.y(), QuantityKind.LENGTH, "y");
+        OptionalDouble head = OptionalDouble.empty();
+        if (!n.fixedHead().isEmpty() && !n.fixedPressure().isEmpty()) {
+            throw new InputException("fixedHead", "give a fixed head or a fixed pressure, not both");
+        }
+        if (!n.fixedHead().isEmpty()) {
+            head = OptionalDouble.of(Quantities.parse(n.fixedHead(), QuantityKind.HEAD, "fixedHead"));
+        } else if (!n.fixedPressure().isEmpty()) {
+            if (Double.isNaN(density)) {
+                throw new InputException("fixedPressure", "needs the fluid's density, which could not be found");
+            }
+            double pa = Quantities.parse(n.fixedPressure(), QuantityKind.PRESSURE, "fixedPressure");
+            head = OptionalDouble.of(z + pa / (density * Gravity.STANDARD));
+        }
+        if (n.reference() && head.isEmpty()) {
+            throw new InputException("reference", "a pressure reference needs a fixedHead or fixedPressure");
+        }
+        if (n.elevation().isEmpty() && head.isPresent() && n.fixedPressure().isEmpty()) {
+            // A reservoir or tank given by its level alone: the level is its free surface, at gauge zero.
+            z = head.getAsDouble();
+        }
+        double demand = n.demand().isEmpty() ? 0 : flow(n.demand(), density, "demand");
+        org.headway.network.Node.Kind kind = n.reference()
+                ? org.headway.network.Node.Kind.REFERENCE
+                : head.isPresent() ? org.headway.network.Node.Kind.FIXED_HEAD : org.headway.network.Node.Kind.JUNCTION;
+        return new org.headway.network.Node(
+                n.id(),
+                n.name(),
+                kind,
+                z,
+                demand == 0 ? List.of() : List.of(new org.headway.network.Node.Demand("demand", demand)),
+                head,
+                Double.isNaN(x) ? OptionalDouble.empty() : OptionalDouble.of(x),
+                Double.isNaN(y) ? OptionalDouble.empty() : OptionalDouble.of(y));
+    }
+
     private ResolvedProject run(Project p) {
         // Gauge and absolute readings are converted with the site's barometric pressure; a bad site
         // is reported once, where the site itself is resolved below.

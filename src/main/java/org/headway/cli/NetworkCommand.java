@@ -1,0 +1,195 @@
+package org.headway.cli;
+
+import java.io.IOException;
+import java.io.OutputStreamWriter;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import org.headway.caution.InputException;
+import org.headway.network.Network;
+import org.headway.network.NetworkResult;
+import org.headway.network.NetworkSolver;
+import org.headway.pipe.Catalog;
+import org.headway.project.AtomicFiles;
+import org.headway.project.LineList;
+import org.headway.project.Project;
+import org.headway.project.ProjectFile;
+import org.headway.project.ProjectResolver;
+import org.headway.units.UnitSystem;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code headway network}: a branched or looped network from a line list (nodes and links CSV). */
+@Command(
+        name = "network",
+        mixinStandardHelpOptions = true,
+        description = {
+            "Solve a branched or looped network from its line list: heads and pressures at the nodes,",
+            "flows and losses in the links (global gradient algorithm, Todini & Pilati 1988).",
+            "Column names may carry units in brackets, e.g. \"diameter [mm]\", \"demand [L/s]\"; without",
+            "them cells are SI or carry their own unit. Exit status 1 when the solve does not converge.",
+            "Results are estimates for design review against local codes by a qualified engineer."
+        })
+public final class NetworkCommand implements Callable<Integer> {
+
+    /** Output formats. */
+    enum Format {
+        text,
+        json,
+        csv
+    }
+
+    @Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Option(names = "--nodes", required = true, paramLabel = "NODES.csv", description = "Node list CSV.")
+    Path nodes;
+
+    @Option(names = "--links", required = true, paramLabel = "LINKS.csv", description = "Link list CSV.")
+    Path links;
+
+    @Option(names = "--fluid", defaultValue = "water", description = "Fluid id (default ${DEFAULT-VALUE}).")
+    String fluid;
+
+    @Option(
+            names = "--temperature",
+            defaultValue = "15 degC",
+            paramLabel = "T",
+            description = "Fluid temperature with its unit (default ${DEFAULT-VALUE}).")
+    String temperature;
+
+    @Option(
+            names = "--friction",
+            defaultValue = "auto",
+            description = "Friction method for pipes: auto, colebrook, hazen-williams, … (default ${DEFAULT-VALUE}).")
+    String friction;
+
+    @Option(names = "--title", defaultValue = "", description = "Title for the output and a saved project.")
+    String title;
+
+    @Option(names = "--format", defaultValue = "text", description = "text, json or csv (default ${DEFAULT-VALUE}).")
+    Format format;
+
+    @Option(
+            names = "--output",
+            paramLabel = "DIR",
+            description = "Also write network.json, network-nodes.csv and network-links.csv into DIR.")
+    Path output;
+
+    @Option(
+            names = "--save",
+            paramLabel = "PROJECT.json",
+            description = "Save the network as a Headway project (format 2, nodes and links).")
+    Path save;
+
+    @Option(names = "--force", description = "Replace existing files written by --save and --output.")
+    boolean force;
+
+    @Option(
+            names = "--units",
+            defaultValue = "si",
+            description = "Text output units: si or us (default ${DEFAULT-VALUE}).")
+    String units;
+
+    @Option(
+            names = "--catalog",
+            paramLabel = "DIR",
+            description = "Folder of catalog files to add to the bundled ones.")
+    Path catalogFolder;
+
+    @Override
+    public Integer call() {
+        UnitSystem system = CliSupport.unitSystem(units);
+        Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
+        Project.NetworkSpec spec = LineList.read(nodes, links, catalog, friction.equals("hazen-williams"));
+        Project project = new Project(
+                title,
+                Project.TitleBlock.EMPTY,
+                new Project.FluidSpec(fluid, temperature, "", "", "", ""),
+                "",
+                "",
+                friction,
+                java.util.List.of(),
+                Project.EndsSpec.OPEN,
+                Project.LimitsSpec.NONE,
+                Optional.empty(),
+                Optional.empty(),
+                Project.SiteSpec.SEA_LEVEL,
+                Project.PressureLimitsSpec.NONE,
+                "",
+                Optional.of(spec));
+        Network network;
+        try {
+            network = ProjectResolver.resolveNetwork(
+                    project, catalog, nodes.toAbsolutePath().getParent());
+        } catch (InputException e) {
+            throw new InputException(
+                    "line list " + nodes.getFileName() + " / " + links.getFileName(), e.getMessage(), e);
+        }
+        if (save != null) {
+            if (!force && Files.exists(save)) {
+                throw new InputException(save.toString(), "already exists; give --force to replace it");
+            }
+            ProjectFile.save(project, save);
+        }
+        return solveAndPrint(spec(), network, format, system, output, force);
+    }
+
+    private picocli.CommandLine.Model.CommandSpec spec() {
+        return spec;
+    }
+
+    /** Solves and writes the result; shared with {@code solve} for network projects. */
+    static int solveAndPrint(
+            picocli.CommandLine.Model.CommandSpec spec,
+            Network network,
+            Format format,
+            UnitSystem system,
+            Path output,
+            boolean force) {
+        NetworkResult result = NetworkSolver.standard().solve(network);
+        PrintWriter out = spec.commandLine().getOut();
+        try {
+            switch (format) {
+                case json -> out.println(NetworkOutput.json(network, result));
+                case csv -> {
+                    NetworkOutput.nodesCsv(result, out);
+                    out.println();
+                    NetworkOutput.linksCsv(result, out);
+                }
+                default -> NetworkOutput.text(out, network, result, system);
+            }
+            if (output != null) {
+                Files.createDirectories(output);
+                write(
+                        output.resolve("network.json"),
+                        force,
+                        w -> w.append(NetworkOutput.json(network, result)).append('\n'));
+                write(output.resolve("network-nodes.csv"), force, w -> NetworkOutput.nodesCsv(result, w));
+                write(output.resolve("network-links.csv"), force, w -> NetworkOutput.linksCsv(result, w));
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        out.flush();
+        return result.converged() ? HeadwayCommand.EXIT_OK : HeadwayCommand.EXIT_FAILED;
+    }
+
+    private interface Body {
+        void write(Writer w) throws IOException;
+    }
+
+    private static void write(Path file, boolean force, Body body) {
+        AtomicFiles.write(file, force, out -> {
+            Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+            body.write(w);
+            w.flush();
+        });
+    }
+}

@@ -1,0 +1,226 @@
+package org.headway.cli;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.util.Locale;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.headway.caution.Caution;
+import org.headway.network.Network;
+import org.headway.network.NetworkResult;
+import org.headway.network.NetworkSolver;
+import org.headway.report.SafeText;
+import org.headway.units.Quantities;
+import org.headway.units.QuantityKind;
+import org.headway.units.UnitSystem;
+
+/** A solved network as JSON, CSV or text: the same values in each, SI in JSON and CSV. */
+final class NetworkOutput {
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    /** Node CSV columns, units in brackets. */
+    static final String[] NODE_HEADER = {
+        "id", "head [m]", "pressure [Pa]", "elevation [m]", "demand [m3/s]", "fixed_head"
+    };
+
+    /** Link CSV columns, units in brackets. */
+    static final String[] LINK_HEADER = {
+        "id", "kind", "from", "to", "flow [m3/s]", "velocity [m/s]", "head_loss [m]", "friction_factor [-]", "status"
+    };
+
+    private NetworkOutput() {}
+
+    private static void put(ObjectNode n, String key, double v) {
+        if (Double.isFinite(v)) {
+            n.put(key, v);
+        } else {
+            n.putNull(key);
+        }
+    }
+
+    static String json(Network net, NetworkResult r) {
+        ObjectNode root = MAPPER.createObjectNode();
+        root.put("title", net.title());
+        root.put("fluid", net.context().fluid().fluid());
+        root.put("density_kg_per_m3", net.context().fluid().density());
+        root.put("friction", net.context().friction().id());
+        root.put("barometric_pressure_pa", net.site().pressure());
+        root.put("converged", r.converged());
+        root.put("iterations", r.iterations());
+        ObjectNode res = root.putObject("residuals");
+        put(res, "head_change_m", r.headChange());
+        put(res, "energy_m", r.energyResidual());
+        put(res, "continuity_m3_per_s", r.continuityResidual());
+        res.put("head_tolerance_m", NetworkSolver.DEFAULT_HEAD_TOLERANCE);
+        ArrayNode nodes = root.putArray("nodes");
+        for (NetworkResult.NodeResult n : r.nodes()) {
+            ObjectNode o = nodes.addObject();
+            o.put("id", n.id());
+            put(o, "head_m", n.head());
+            put(o, "pressure_pa", n.pressure());
+            put(o, "elevation_m", n.elevation());
+            put(o, "demand_m3_per_s", n.demand());
+            o.put("fixed_head", n.fixed());
+        }
+        ArrayNode links = root.putArray("links");
+        for (NetworkResult.LinkResult l : r.links()) {
+            ObjectNode o = links.addObject();
+            o.put("id", l.id());
+            o.put("kind", l.kind());
+            o.put("from", l.from());
+            o.put("to", l.to());
+            put(o, "flow_m3_per_s", l.flow());
+            put(o, "velocity_m_per_s", l.velocity());
+            put(o, "head_loss_m", l.headLoss());
+            put(o, "friction_factor", l.frictionFactor());
+            o.put("status", l.status());
+            l.element().ifPresent(e -> o.put("law", e.law()));
+        }
+        ArrayNode cautions = root.putArray("cautions");
+        for (Caution c : r.cautions()) {
+            ObjectNode n = cautions.addObject();
+            n.put("code", c.code());
+            n.put("severity", c.severity().name().toLowerCase(Locale.ROOT));
+            n.put("message", c.message());
+            n.put("basis", c.basis());
+        }
+        try {
+            return MAPPER.writeValueAsString(root);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static String num(double v) {
+        return Double.isFinite(v) ? Double.toString(v) : "";
+    }
+
+    static void nodesCsv(NetworkResult r, Appendable out) throws IOException {
+        CSVPrinter p = new CSVPrinter(
+                out, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+        p.printRecord((Object[]) NODE_HEADER);
+        for (NetworkResult.NodeResult n : r.nodes()) {
+            p.printRecord(
+                    SafeText.cell(n.id()),
+                    num(n.head()),
+                    num(n.pressure()),
+                    num(n.elevation()),
+                    num(n.demand()),
+                    n.fixed() ? "yes" : "no");
+        }
+        p.flush();
+    }
+
+    static void linksCsv(NetworkResult r, Appendable out) throws IOException {
+        CSVPrinter p = new CSVPrinter(
+                out, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+        p.printRecord((Object[]) LINK_HEADER);
+        for (NetworkResult.LinkResult l : r.links()) {
+            p.printRecord(
+                    SafeText.cell(l.id()),
+                    l.kind(),
+                    SafeText.cell(l.from()),
+                    SafeText.cell(l.to()),
+                    num(l.flow()),
+                    num(l.velocity()),
+                    num(l.headLoss()),
+                    num(l.frictionFactor()),
+                    l.status());
+        }
+        p.flush();
+    }
+
+    private static String q(double si, QuantityKind kind, UnitSystem u) {
+        return Double.isFinite(si) ? Quantities.formatNumber(Quantities.fromSi(si, kind, u)) : "—";
+    }
+
+    private static String clip(String s, int width) {
+        return s.length() <= width ? s : s.substring(0, width - 1) + "…";
+    }
+
+    static void text(PrintWriter out, Network net, NetworkResult r, UnitSystem u) {
+        out.println(net.title().isEmpty() ? "Network" : net.title());
+        var f = net.context().fluid();
+        out.printf(
+                Locale.ROOT,
+                "Fluid: %s, ρ = %s, μ = %s; friction: %s%n",
+                f.fluid(),
+                Quantities.format(f.density(), QuantityKind.DENSITY, u),
+                Quantities.format(f.dynamicViscosity(), QuantityKind.DYNAMIC_VISCOSITY, u),
+                net.context().friction().displayName());
+        out.printf(
+                Locale.ROOT,
+                "Solve: %s after %d iterations (head change %.3g m, energy residual %.3g m, continuity residual"
+                        + " %.3g m³/s)%n%n",
+                r.converged() ? "converged" : "NOT CONVERGED",
+                r.iterations(),
+                r.headChange(),
+                r.energyResidual(),
+                r.continuityResidual());
+        String hu = Quantities.unitSymbol(QuantityKind.HEAD, u);
+        String pu = Quantities.unitSymbol(QuantityKind.PRESSURE, u);
+        String qu = Quantities.unitSymbol(QuantityKind.VOLUMETRIC_FLOW, u);
+        String vu = Quantities.unitSymbol(QuantityKind.VELOCITY, u);
+        out.printf(
+                Locale.ROOT,
+                "%-20s %11s %12s %11s %12s  %s%n",
+                "node",
+                "head [" + hu + "]",
+                "p [" + pu + "]",
+                "z [" + hu + "]",
+                "demand [" + qu + "]",
+                "");
+        for (NetworkResult.NodeResult n : r.nodes()) {
+            out.printf(
+                    Locale.ROOT,
+                    "%-20s %11s %12s %11s %12s  %s%n",
+                    clip(n.id(), 20),
+                    q(n.head(), QuantityKind.HEAD, u),
+                    q(n.pressure(), QuantityKind.PRESSURE, u),
+                    q(n.elevation(), QuantityKind.HEAD, u),
+                    q(n.demand(), QuantityKind.VOLUMETRIC_FLOW, u),
+                    n.fixed() ? "fixed head (demand: flow it takes; negative supplies)" : "");
+        }
+        out.println();
+        out.printf(
+                Locale.ROOT,
+                "%-16s %-11s %-12s %-12s %11s %9s %11s %9s  %s%n",
+                "link",
+                "kind",
+                "from",
+                "to",
+                "Q [" + qu + "]",
+                "V [" + vu + "]",
+                "h [" + hu + "]",
+                "f",
+                "status");
+        for (NetworkResult.LinkResult l : r.links()) {
+            out.printf(
+                    Locale.ROOT,
+                    "%-16s %-11s %-12s %-12s %11s %9s %11s %9s  %s%n",
+                    clip(l.id(), 16),
+                    l.kind(),
+                    clip(l.from(), 12),
+                    clip(l.to(), 12),
+                    q(l.flow(), QuantityKind.VOLUMETRIC_FLOW, u),
+                    q(l.velocity(), QuantityKind.VELOCITY, u),
+                    q(l.headLoss(), QuantityKind.HEAD, u),
+                    Double.isFinite(l.frictionFactor()) ? Quantities.formatNumber(l.frictionFactor()) : "—",
+                    l.status());
+        }
+        out.println("(flow positive from → to; heads are energy heads with node velocity heads neglected; pressures"
+                + " gauge)");
+        out.println();
+        out.println("Cautions:");
+        for (Caution c : r.cautions()) {
+            out.println("  [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + c.message() + " (basis: "
+                    + c.basis() + ")");
+        }
+    }
+}

@@ -1,0 +1,532 @@
+package org.headway.project;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.io.StringReader;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.headway.caution.InputException;
+import org.headway.pipe.Catalog;
+import org.headway.pipe.Material;
+import org.headway.units.Quantities;
+import org.headway.units.QuantityKind;
+
+/**
+ * A network's line list as engineers keep it in a spreadsheet: a CSV of nodes and a CSV of links,
+ * read into a project's {@link Project.NetworkSpec}.
+ *
+ * <p>A column name may carry its unit in brackets ({@code diameter [mm]}, {@code demand [L/s]});
+ * the column's cells are then bare numbers in that unit. Without a bracket a cell is a number in SI
+ * or a number with its own unit ({@code 150 mm}). A blank cell means "not given". Every bad cell is
+ * refused with the file, the line and the column. Columns whose name starts with {@code #} and the
+ * columns {@code notes} and {@code comment} are ignored; any other unknown column is refused, so
+ * that a misspelt {@code diamter} is not silently dropped.
+ *
+ * <p>Node columns: {@code id}, {@code elevation}, {@code demand}, {@code fixed_head}, and optional
+ * {@code fixed_pressure}, {@code reference} ({@code yes}/{@code no}), {@code x}, {@code y}, {@code
+ * name}. Link columns: {@code id}, {@code from}, {@code to}, {@code kind} ({@code pipe} when blank;
+ * {@code valve}, {@code component}, {@code check-valve}, {@code pump}, {@code closed}, {@code
+ * open}), {@code length}, {@code diameter}, {@code roughness}, {@code loss_coefficient}, {@code
+ * hw_c}, {@code material}, {@code size}, {@code schedule}, {@code kv}, {@code cv}, {@code
+ * rated_pressure_drop}, {@code rated_flow}, {@code exponent}, {@code pump_curve} ({@code "0 L/s:40
+ * m; 5 L/s:36 m; 10 L/s:25 m"}), {@code speed_ratio}, {@code npsh_required}, {@code design_flow},
+ * {@code name}.
+ */
+public final class LineList {
+
+    /** Node columns understood. */
+    public static final List<String> NODE_COLUMNS =
+            List.of("id", "name", "elevation", "demand", "fixed_head", "fixed_pressure", "reference", "x", "y");
+
+    /** Link columns understood. */
+    public static final List<String> LINK_COLUMNS = List.of(
+            "id",
+            "name",
+            "from",
+            "to",
+            "kind",
+            "length",
+            "diameter",
+            "roughness",
+            "loss_coefficient",
+            "hw_c",
+            "material",
+            "size",
+            "schedule",
+            "kv",
+            "cv",
+            "rated_pressure_drop",
+            "rated_flow",
+            "exponent",
+            "pump_curve",
+            "speed_ratio",
+            "npsh_required",
+            "design_flow");
+
+    /** Link kinds a line list may name. */
+    public static final List<String> LINK_KINDS =
+            List.of("pipe", "valve", "component", "check-valve", "pump", "closed", "open");
+
+    /** Largest line-list file read (bytes): far beyond any real network's list. */
+    public static final long MAX_BYTES = 512L * 1024 * 1024;
+
+    private static final Pattern HEADER = Pattern.compile("^\\s*([A-Za-z_][A-Za-z0-9_\\-]*)\\s*(?:\\[(.*)\\])?\\s*$");
+    private static final Pattern BARE_NUMBER = Pattern.compile("^[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?$");
+
+    private LineList() {}
+
+    /**
+     * Reads both files.
+     *
+     * @param nodes the nodes CSV
+     * @param links the links CSV
+     * @param catalog catalog for a material given without a size
+     * @param hazenWilliams whether pipes are computed by Hazen–Williams (a material's C is then taken
+     *     from the catalog)
+     * @return the network as typed, values kept as text with their units
+     */
+    public static Project.NetworkSpec read(Path nodes, Path links, Catalog catalog, boolean hazenWilliams) {
+        Table n = Table.read(nodes, NODE_COLUMNS);
+        Table l = Table.read(links, LINK_COLUMNS);
+        return new Project.NetworkSpec(nodes(n), links(l, catalog, hazenWilliams));
+    }
+
+    /** Reads from text (tests and fuzzing), naming the files as given. */
+    public static Project.NetworkSpec parse(
+            String nodesName, String nodesText, String linksName, String linksText, Catalog c, boolean hazenWilliams) {
+        Table n = Table.parse(nodesName, nodesText, NODE_COLUMNS);
+        Table l = Table.parse(linksName, linksText, LINK_COLUMNS);
+        return new Project.NetworkSpec(nodes(n), links(l, c, hazenWilliams));
+    }
+
+    private static List<Project.NodeSpec> nodes(Table t) {
+        t.require("id");
+        List<Project.NodeSpec> out = new ArrayList<>();
+        Set<String> ids = new HashSet<>();
+        for (Row r : t.rows) {
+            String id = r.text("id");
+            if (id.isEmpty()) {
+                throw r.error("id", "every node needs an id");
+            }
+            if (!ids.add(id)) {
+                throw r.error("id", "node id \"" + id + "\" is used by an earlier line");
+            }
+            String reference = r.text("reference").toLowerCase(Locale.ROOT);
+            if (!List.of("", "yes", "no", "true", "false", "1", "0").contains(reference)) {
+                throw r.error("reference", "expected yes or no, got \"" + r.text("reference") + "\"");
+            }
+            out.add(new Project.NodeSpec(
+                    id,
+                    r.text("name"),
+                    r.quantity("elevation", QuantityKind.LENGTH),
+                    r.flow("demand"),
+                    r.quantity("fixed_head", QuantityKind.HEAD),
+                    r.quantity("fixed_pressure", QuantityKind.PRESSURE),
+                    reference.equals("yes") || reference.equals("true") || reference.equals("1"),
+                    r.quantity("x", QuantityKind.LENGTH),
+                    r.quantity("y", QuantityKind.LENGTH)));
+        }
+        if (out.isEmpty()) {
+            throw new InputException(t.name, "has no node lines");
+        }
+        return out;
+    }
+
+    private static List<Project.LinkSpec> links(Table t, Catalog catalog, boolean hazenWilliams) {
+        t.require("id");
+        t.require("from");
+        t.require("to");
+        List<Project.LinkSpec> out = new ArrayList<>();
+        Set<String> ids = new HashSet<>();
+        for (Row r : t.rows) {
+            String id = r.text("id");
+            if (id.isEmpty()) {
+                throw r.error("id", "every link needs an id");
+            }
+            if (!ids.add(id)) {
+                throw r.error("id", "link id \"" + id + "\" is used by an earlier line");
+            }
+            String from = r.text("from");
+            String to = r.text("to");
+            if (from.isEmpty() || to.isEmpty()) {
+                throw r.error(from.isEmpty() ? "from" : "to", "a link needs both its from and to nodes");
+            }
+            String kind = r.text("kind").isEmpty() ? "pipe" : r.text("kind").toLowerCase(Locale.ROOT);
+            if (!LINK_KINDS.contains(kind)) {
+                throw r.error(
+                        "kind", "unknown kind \"" + r.text("kind") + "\"; expected " + String.join(", ", LINK_KINDS));
+            }
+            Project.ElementSpec element = switch (kind) {
+                case "pipe" -> pipe(r, id, catalog, hazenWilliams);
+                case "pump" -> pump(r, id);
+                default -> device(r, id, kind);
+            };
+            out.add(new Project.LinkSpec(from, to, element, r.flow("design_flow")));
+        }
+        if (out.isEmpty()) {
+            throw new InputException(t.name, "has no link lines");
+        }
+        return out;
+    }
+
+    private static Project.SegmentSpec pipe(Row r, String id, Catalog catalog, boolean hazenWilliams) {
+        String length = r.quantity("length", QuantityKind.LENGTH);
+        if (length.isEmpty()) {
+            throw r.error("length", "a pipe needs its length");
+        }
+        String material = r.text("material");
+        String size = r.text("size");
+        String diameter = r.quantity("diameter", QuantityKind.DIAMETER);
+        String roughness = r.quantity("roughness", QuantityKind.ROUGHNESS);
+        String hwC = r.quantity("hw_c", QuantityKind.DIMENSIONLESS);
+        Optional<Project.PipeSpec> pipe = Optional.empty();
+        if (!material.isEmpty() && !size.isEmpty()) {
+            pipe = Optional.of(new Project.PipeSpec(material, size, r.text("schedule")));
+        } else if (!material.isEmpty()) {
+            Material m;
+            try {
+                m = catalog.material(material);
+            } catch (InputException e) {
+                throw r.error("material", e.problem());
+            }
+            if (diameter.isEmpty()) {
+                throw r.error("size", "material \"" + material + "\" without a size needs a diameter");
+            }
+            if (roughness.isEmpty()) {
+                roughness = Double.toString(m.roughness()) + " m";
+            }
+            if (hazenWilliams && hwC.isEmpty() && m.hazenWilliams().isPresent()) {
+                hwC = Double.toString(m.hazenWilliams().get().value());
+            }
+        } else if (!size.isEmpty()) {
+            throw r.error("material", "a size needs its material");
+        } else if (diameter.isEmpty()) {
+            throw r.error("diameter", "a pipe needs a diameter, or a material and size from the catalog");
+        } else if (roughness.isEmpty() && hwC.isEmpty()) {
+            throw r.error("roughness", "a pipe with an explicit diameter needs its roughness (or a material)");
+        } else if (roughness.isEmpty()) {
+            // A Hazen–Williams pipe given by C alone: the roughness is used only for the comparison with
+            // Colebrook, so take that of new commercial steel and say so in the description of the source.
+            roughness = "0.045 mm";
+        }
+        return new Project.SegmentSpec(
+                id,
+                r.text("name").isEmpty() ? id : r.text("name"),
+                length,
+                pipe,
+                diameter,
+                roughness,
+                List.of(),
+                r.quantity("loss_coefficient", QuantityKind.DIMENSIONLESS),
+                "",
+                "",
+                "",
+                hwC,
+                "",
+                "");
+    }
+
+    private static Project.PumpSpec pump(Row r, String id) {
+        String curve = r.text("pump_curve");
+        if (curve.isEmpty()) {
+            throw r.error("pump_curve", "a pump needs its curve, e.g. \"0 L/s:40 m; 5 L/s:36 m; 10 L/s:25 m\"");
+        }
+        List<Project.PumpPointSpec> points = new ArrayList<>();
+        String[] parts = curve.split(";");
+        for (String part : parts) {
+            if (part.isBlank()) {
+                continue;
+            }
+            String[] fh = part.split(":");
+            if (fh.length != 2) {
+                throw r.error(
+                        "pump_curve", "each point is flow:head, e.g. \"5 L/s:36 m\"; got \"" + part.strip() + "\"");
+            }
+            String flow = fh[0].strip();
+            String head = fh[1].strip();
+            if (BARE_NUMBER.matcher(flow).matches() || BARE_NUMBER.matcher(head).matches()) {
+                throw r.error(
+                        "pump_curve", "give each point's units, e.g. \"5 L/s:36 m\"; got \"" + part.strip() + "\"");
+            }
+            try {
+                Quantities.parseFlow(flow, "pump_curve").volumetric(1000, "pump_curve");
+                Quantities.parse(head, QuantityKind.HEAD, "pump_curve");
+            } catch (InputException e) {
+                throw r.error("pump_curve", e.problem());
+            }
+            points.add(new Project.PumpPointSpec(flow, head));
+        }
+        if (points.size() < 3) {
+            throw r.error("pump_curve", "a pump curve needs at least three points, got " + points.size());
+        }
+        return new Project.PumpSpec(
+                id,
+                r.text("name").isEmpty() ? id : r.text("name"),
+                0,
+                points,
+                r.quantity("npsh_required", QuantityKind.HEAD),
+                r.quantity("speed_ratio", QuantityKind.DIMENSIONLESS));
+    }
+
+    private static Project.DeviceSpec device(Row r, String id, String kind) {
+        Map<String, String> values = new LinkedHashMap<>();
+        String kv = r.quantity("kv", QuantityKind.DIMENSIONLESS);
+        String cv = r.quantity("cv", QuantityKind.DIMENSIONLESS);
+        String deviceKind = kind;
+        switch (kind) {
+            case "valve" -> {
+                if (kv.isEmpty() == cv.isEmpty()) {
+                    throw r.error("kv", "a valve needs its kv or its cv (one of them)");
+                }
+            }
+            case "component" -> {
+                String dp = r.quantity("rated_pressure_drop", QuantityKind.PRESSURE);
+                String q = r.flow("rated_flow");
+                if (dp.isEmpty() || q.isEmpty()) {
+                    throw r.error(
+                            dp.isEmpty() ? "rated_pressure_drop" : "rated_flow",
+                            "a rated component needs rated_pressure_drop and rated_flow");
+                }
+                values.put("ratedPressureDrop", dp);
+                values.put("ratedFlow", q);
+                putIf(values, "exponent", r.quantity("exponent", QuantityKind.DIMENSIONLESS));
+            }
+            case "closed", "open" -> {
+                deviceKind = "isolation";
+                values.put("status", kind);
+            }
+            default -> {}
+        }
+        if (!kind.equals("component")) {
+            putIf(values, "kv", kv);
+            putIf(values, "cv", cv);
+            String k = r.quantity("loss_coefficient", QuantityKind.DIMENSIONLESS);
+            if (!k.isEmpty()) {
+                if (kind.equals("valve")) {
+                    throw r.error("loss_coefficient", "a valve is given by kv or cv; use kind check-valve or open");
+                }
+                String d = r.quantity("diameter", QuantityKind.DIAMETER);
+                if (d.isEmpty()) {
+                    throw r.error("diameter", "a loss coefficient needs the diameter its velocity is taken in");
+                }
+                values.put("lossCoefficient", k);
+                values.put("diameter", d);
+            }
+        }
+        return new Project.DeviceSpec(deviceKind, id, r.text("name"), values);
+    }
+
+    private static void putIf(Map<String, String> m, String k, String v) {
+        if (!v.isEmpty()) {
+            m.put(k, v);
+        }
+    }
+
+    /** A CSV file read into named columns with optional units. */
+    private static final class Table {
+        final String name;
+        final Map<String, Integer> column = new LinkedHashMap<>();
+        final Map<String, String> unit = new LinkedHashMap<>();
+        final List<Row> rows = new ArrayList<>();
+
+        Table(String name) {
+            this.name = name;
+        }
+
+        static Table read(Path file, List<String> known) {
+            String text;
+            try {
+                if (Files.size(file) > MAX_BYTES) {
+                    throw new InputException(file.toString(), "is larger than " + (MAX_BYTES >> 20) + " MB");
+                }
+                byte[] bytes = Files.readAllBytes(file);
+                text = StandardCharsets.UTF_8
+                        .newDecoder()
+                        .onMalformedInput(CodingErrorAction.REPORT)
+                        .onUnmappableCharacter(CodingErrorAction.REPORT)
+                        .decode(java.nio.ByteBuffer.wrap(bytes))
+                        .toString();
+            } catch (NoSuchFileException e) {
+                throw new InputException(file.toString(), "file not found");
+            } catch (CharacterCodingException e) {
+                throw new InputException(
+                        file.toString(), "is not UTF-8 text; save it as CSV UTF-8 (a spreadsheet's \"CSV UTF-8\")");
+            } catch (IOException e) {
+                throw new InputException(file.toString(), "cannot be read: " + e.getMessage());
+            }
+            return parse(file.toString(), text, known);
+        }
+
+        static Table parse(String name, String text, List<String> known) {
+            if (text.startsWith("\uFEFF")) {
+                text = text.substring(1);
+            }
+            Table t = new Table(name);
+            try (Reader reader = new StringReader(text);
+                    CSVParser p = CSVFormat.DEFAULT
+                            .builder()
+                            .setIgnoreEmptyLines(true)
+                            .setTrim(true)
+                            .get()
+                            .parse(reader)) {
+                boolean header = true;
+                for (CSVRecord rec : p) {
+                    if (header) {
+                        for (int c = 0; c < rec.size(); c++) {
+                            t.header(rec.get(c), c, known);
+                        }
+                        header = false;
+                        continue;
+                    }
+                    boolean blank = true;
+                    for (String v : rec) {
+                        blank &= v.isBlank();
+                    }
+                    if (blank) {
+                        continue;
+                    }
+                    if (rec.size() > t.width()) {
+                        throw new InputException(
+                                name + " line " + rec.getParser().getCurrentLineNumber(),
+                                "has " + rec.size() + " cells, more than the " + t.width() + " columns of the header");
+                    }
+                    List<String> cells = new ArrayList<>();
+                    rec.forEach(cells::add);
+                    t.rows.add(new Row(t, rec.getParser().getCurrentLineNumber(), cells));
+                }
+                if (header) {
+                    throw new InputException(name, "is empty; it needs a header row naming its columns");
+                }
+            } catch (IOException | java.io.UncheckedIOException | IllegalStateException e) {
+                throw new InputException(name, "is not valid CSV: " + e.getMessage());
+            }
+            return t;
+        }
+
+        int width = 0;
+
+        int width() {
+            return width;
+        }
+
+        void header(String cell, int c, List<String> known) {
+            width = Math.max(width, c + 1);
+            String h = cell.strip();
+            if (h.isEmpty() || h.startsWith("#")) {
+                return;
+            }
+            Matcher m = HEADER.matcher(h);
+            if (!m.matches()) {
+                throw new InputException(name + " header, column " + (c + 1), "cannot read column name \"" + h + "\"");
+            }
+            String key = m.group(1).toLowerCase(Locale.ROOT).replace('-', '_');
+            if (key.equals("notes") || key.equals("comment")) {
+                return;
+            }
+            if (!known.contains(key)) {
+                throw new InputException(
+                        name + " header, column " + (c + 1),
+                        "unknown column \"" + h + "\"; known columns: " + String.join(", ", known)
+                                + " (start a column name with # to have it ignored)");
+            }
+            if (column.put(key, c) != null) {
+                throw new InputException(name + " header, column " + (c + 1), "column \"" + key + "\" appears twice");
+            }
+            if (m.group(2) != null) {
+                String u = m.group(2).strip();
+                if (u.isEmpty() || u.equals("-")) {
+                    return;
+                }
+                unit.put(key, u);
+            }
+        }
+
+        void require(String key) {
+            if (!column.containsKey(key)) {
+                throw new InputException(name + " header", "needs a column \"" + key + "\"");
+            }
+        }
+    }
+
+    /** One line of a table. */
+    private record Row(Table table, long line, List<String> cells) {
+
+        InputException error(String key, String problem) {
+            return new InputException(table.name + " line " + line + ", column " + key, problem);
+        }
+
+        String text(String key) {
+            Integer c = table.column.get(key);
+            if (c == null || c >= cells.size()) {
+                return "";
+            }
+            return cells.get(c).strip();
+        }
+
+        /** The cell as quantity text with its unit, checked; empty when blank. */
+        String quantity(String key, QuantityKind kind) {
+            String v = withUnit(key);
+            if (v.isEmpty()) {
+                return v;
+            }
+            try {
+                if (kind == QuantityKind.PRESSURE) {
+                    Quantities.parsePressure(v, key);
+                } else {
+                    Quantities.parse(v, kind, key);
+                }
+            } catch (InputException e) {
+                throw error(key, e.problem());
+            }
+            return v;
+        }
+
+        /** A flow cell, by volume or mass, checked; empty when blank. */
+        String flow(String key) {
+            String v = withUnit(key);
+            if (v.isEmpty()) {
+                return v;
+            }
+            try {
+                Quantities.parseFlow(v, key);
+            } catch (InputException e) {
+                throw error(key, e.problem());
+            }
+            return v;
+        }
+
+        String withUnit(String key) {
+            String v = text(key);
+            if (v.isEmpty()) {
+                return v;
+            }
+            String u = table.unit.get(key);
+            if (u == null) {
+                return v;
+            }
+            if (!BARE_NUMBER.matcher(v).matches()) {
+                throw error(
+                        key,
+                        "the column gives the unit [" + u + "], so the cell must be a plain number; got \"" + v + "\"");
+            }
+            return v + " " + u;
+        }
+    }
+}
