@@ -95,6 +95,13 @@ public final class NetworkSolver {
      */
     public static final double REVERSE_SLOPE = 1e8;
 
+    /**
+     * Smallest link slope used (m per m³/s): a link of no resistance (a zero-length pipe, a
+     * negligible loss) is held at 10¹⁰ (m³/s)/m of conductance so that the head equations stay
+     * finite; such a link then carries its flow with a head difference below 10⁻¹⁰ m per m³/s.
+     */
+    public static final double SLOPE_FLOOR = 1e-10;
+
     /** Status rounds allowed. */
     public static final int MAX_STATUS_ROUNDS = 20;
 
@@ -279,7 +286,7 @@ public final class NetworkSolver {
             if (!(secant > 0) || !Double.isFinite(secant)) {
                 secant = laminarSlope(e);
             }
-            return secant;
+            return Math.max(secant, SLOPE_FLOOR);
         }
 
         /** Hagen–Poiseuille slope 128 μ L / (π ρ g D⁴) of a pipe; a small positive number otherwise. */
@@ -453,6 +460,9 @@ public final class NetworkSolver {
                 }
             }
             double energy = energyResidual(h, e, live);
+            double bestEnergy = Double.POSITIVE_INFINITY;
+            double[] bestHead = head.clone();
+            double[] bestFlow = flow.clone();
             for (int iter = 0; iter < maxIterations; iter++) {
                 iterations++;
                 java.util.Arrays.fill(diag, 0);
@@ -491,7 +501,18 @@ public final class NetworkSolver {
                         rhs[j] = 0;
                     }
                 }
-                double[] dH = nj == 0 ? new double[0] : linear.solve(diag, off, rhs);
+                double[] dH;
+                try {
+                    dH = nj == 0 ? new double[0] : linear.solve(diag, off, rhs);
+                } catch (IllegalStateException | ArithmeticException singular) {
+                    restore(bestHead, bestFlow);
+                    cautions.add(Caution.serious(
+                            "network-singular",
+                            "the head equations could not be solved (" + singular.getMessage() + "); check for links"
+                                    + " of absurd size or resistance; the best iterate is shown and is not a solution",
+                            "solver"));
+                    return false;
+                }
                 double[] dQ = new double[nLinks];
                 for (int k = 0; k < nLinks; k++) {
                     if (status[k] != OPEN) {
@@ -538,19 +559,28 @@ public final class NetworkSolver {
                 }
                 lastHeadChange = maxDh;
                 energy = newEnergy;
-                if (!Double.isFinite(energy)) {
+                if (!Double.isFinite(energy) || !Double.isFinite(maxDh)) {
+                    restore(bestHead, bestFlow);
                     cautions.add(Caution.serious(
                             "network-diverged",
-                            "the network solve diverged (a head or flow became infinite); check units, lengths,"
-                                    + " diameters and pump curves",
+                            "the network solve diverged (a head or flow became infinite); the best iterate is shown"
+                                    + " and is not a solution; check units, lengths, diameters and pump curves",
                             "solver"));
                     return false;
+                }
+                if (energy < bestEnergy) {
+                    bestEnergy = energy;
+                    System.arraycopy(head, 0, bestHead, 0, nNodes);
+                    System.arraycopy(flow, 0, bestFlow, 0, nLinks);
                 }
                 if (maxDh <= headTolerance
                         && energy <= ENERGY_TOLERANCE_RATIO * headTolerance
                         && continuityResidual(live) <= continuityTolerance()) {
                     return true;
                 }
+            }
+            if (bestEnergy < energy) {
+                restore(bestHead, bestFlow);
             }
             cautions.add(Caution.serious(
                     "not-converged",
@@ -606,6 +636,11 @@ public final class NetworkSolver {
                 }
             }
             return Double.isNaN(m) ? Double.POSITIVE_INFINITY : 0.5 * m;
+        }
+
+        void restore(double[] bestHead, double[] bestFlow) {
+            System.arraycopy(bestHead, 0, head, 0, nNodes);
+            System.arraycopy(bestFlow, 0, flow, 0, nLinks);
         }
 
         int slotCount() {

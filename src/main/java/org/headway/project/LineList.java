@@ -173,6 +173,14 @@ public final class LineList {
                 throw r.error(
                         "kind", "unknown kind \"" + r.text("kind") + "\"; expected " + String.join(", ", LINK_KINDS));
             }
+            for (String column : t.column.keySet()) {
+                if (!r.text(column).isEmpty() && !usedBy(kind).contains(column)) {
+                    throw r.error(
+                            column,
+                            "is not used by a link of kind " + kind + "; leave it blank (got \"" + r.text(column)
+                                    + "\")");
+                }
+            }
             Project.ElementSpec element = switch (kind) {
                 case "pipe" -> pipe(r, id, catalog, hazenWilliams);
                 case "pump" -> pump(r, id);
@@ -184,6 +192,22 @@ public final class LineList {
             throw new InputException(t.name, "has no link lines");
         }
         return out;
+    }
+
+    /** Columns a link kind reads. */
+    static List<String> usedBy(String kind) {
+        List<String> common = List.of("id", "name", "from", "to", "kind", "design_flow");
+        List<String> own = switch (kind) {
+            case "pipe" ->
+                List.of("length", "diameter", "roughness", "loss_coefficient", "hw_c", "material", "size", "schedule");
+            case "pump" -> List.of("pump_curve", "speed_ratio", "npsh_required");
+            case "component" -> List.of("rated_pressure_drop", "rated_flow", "exponent");
+            case "valve" -> List.of("kv", "cv");
+            default -> List.of("kv", "cv", "loss_coefficient", "diameter");
+        };
+        List<String> all = new ArrayList<>(common);
+        all.addAll(own);
+        return all;
     }
 
     private static Project.SegmentSpec pipe(Row r, String id, Catalog catalog, boolean hazenWilliams) {

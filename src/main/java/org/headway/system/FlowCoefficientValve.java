@@ -41,12 +41,21 @@ public record FlowCoefficientValve(String id, String name, double flowCoefficien
     /** K_v per unit C_v from the two definitions: 0.864 97 (IEC 60534-1 quotes K_v = 0.865 C_v). */
     public static final double KV_PER_CV = US_GPM_IN_CUBIC_METRES_PER_HOUR * Math.sqrt(REFERENCE_PRESSURE_DROP / PSI);
 
+    /** Smallest flow coefficient accepted (m³/h at 1 bar): below it, a unit slip. */
+    public static final double MIN_FLOW_COEFFICIENT = 1e-6;
+
     /** Largest flow coefficient accepted (m³/h at 1 bar): beyond the largest valves made, a unit slip. */
     public static final double MAX_FLOW_COEFFICIENT = 1e6;
 
     public FlowCoefficientValve {
         requireId(id);
         InputException.requirePositive(id + ".kv", flowCoefficient);
+        if (flowCoefficient < MIN_FLOW_COEFFICIENT) {
+            throw new InputException(
+                    id + (givenAs != null && givenAs.startsWith("Cv") ? ".cv" : ".kv"),
+                    "flow coefficient " + flowCoefficient + " m³/h is below the smallest needle valves made ("
+                            + MIN_FLOW_COEFFICIENT + "); check the number and its unit");
+        }
         if (flowCoefficient > MAX_FLOW_COEFFICIENT) {
             throw new InputException(
                     id + ".kv",

@@ -33,6 +33,9 @@ public record RatedComponent(String id, String name, double ratedPressureDrop, d
     /** Largest exponent accepted. */
     public static final double MAX_EXPONENT = 2.5;
 
+    /** Smallest rated flow accepted (m³/s), 1 µL/s: below it the rating is a unit slip. */
+    public static final double MIN_RATED_FLOW = 1e-9;
+
     public RatedComponent {
         FlowCoefficientValve.requireId(id);
         InputException.requirePositive(id + ".rated_pressure_drop", ratedPressureDrop);
@@ -41,6 +44,12 @@ public record RatedComponent(String id, String name, double ratedPressureDrop, d
             throw new InputException(
                     id + ".rated_pressure_drop",
                     "value " + ratedPressureDrop + " Pa is beyond the plausible limit of 1 GPa; check the unit");
+        }
+        if (ratedFlow < MIN_RATED_FLOW || ratedPressureDrop < 1e-3) {
+            throw new InputException(
+                    id + (ratedFlow < MIN_RATED_FLOW ? ".rated_flow" : ".rated_pressure_drop"),
+                    "rating " + ratedPressureDrop + " Pa at " + ratedFlow + " m³/s is below any real component's"
+                            + " (at least 1 mPa at 1 µL/s); check the number and its unit");
         }
         if (ratedFlow > PipeRun.MAX_FLOW) {
             throw new InputException(
