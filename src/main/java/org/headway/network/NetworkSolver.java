@@ -144,8 +144,11 @@ public final class NetworkSolver {
         return new NetworkSolver(DEFAULT_HEAD_TOLERANCE, DEFAULT_MAX_ITERATIONS, factory);
     }
 
+    /** Dense Cholesky below this many junctions (cheaper to set up), the sparse factor above. */
+    static final int DENSE_LIMIT = 60;
+
     private static SpdSolver defaultSolver(int n, int[] a, int[] b) {
-        return new DenseSpdSolver(n, a, b);
+        return n <= DENSE_LIMIT ? new DenseSpdSolver(n, a, b) : new SparseSpdSolver(n, a, b);
     }
 
     /** Solves the network. */

@@ -262,6 +262,23 @@ class NetworkSolverTest {
     }
 
     @Test
+    void sparseFactorAgreesWithDenseCholeskyOnALargerGrid() {
+        // 15 × 15 junctions: above the dense limit, so the default solver uses the sparse L D Lᵀ.
+        Network net = NetworkFixtures.grid(15, 5, 90, 0.0005);
+        NetworkResult sparse = SOLVER.solve(net);
+        NetworkResult dense =
+                NetworkSolver.withLinearSolver(DenseSpdSolver::new).solve(net);
+        assertBalanced(net, sparse);
+        for (int i = 0; i < sparse.nodes().size(); i++) {
+            assertEquals(dense.nodes().get(i).head(), sparse.nodes().get(i).head(), 1e-9);
+        }
+        for (int k = 0; k < sparse.links().size(); k++) {
+            double q = dense.links().get(k).flow();
+            assertEquals(q, sparse.links().get(k).flow(), 1e-9 * Math.abs(q) + 1e-13);
+        }
+    }
+
+    @Test
     void checkValveAgainstTheGradientShutsAndCarriesNothing() {
         Network net = network(
                 "colebrook",
