@@ -103,8 +103,14 @@ public final class NetworkCommand implements Callable<Integer> {
             description = "Folder of catalog files to add to the bundled ones.")
     Path catalogFolder;
 
+    @Option(
+            names = "--timings",
+            description = "Print the time of each phase (read, resolve, solve, write) to standard error.")
+    boolean timings;
+
     @Override
     public Integer call() {
+        long t0 = System.nanoTime();
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
         Project.NetworkSpec spec = LineList.read(nodes, links, catalog, friction.equals("hazen-williams"));
@@ -124,6 +130,7 @@ public final class NetworkCommand implements Callable<Integer> {
                 Project.PressureLimitsSpec.NONE,
                 "",
                 Optional.of(spec));
+        long t1 = System.nanoTime();
         Network network;
         try {
             network = ProjectResolver.resolveNetwork(
@@ -138,7 +145,18 @@ public final class NetworkCommand implements Callable<Integer> {
             }
             ProjectFile.save(project, save);
         }
-        return solveAndPrint(spec(), network, format, system, output, force);
+        long t2 = System.nanoTime();
+        int code = solveAndPrint(spec(), network, format, system, output, force, timings);
+        if (timings) {
+            spec().commandLine()
+                    .getErr()
+                    .printf(
+                            java.util.Locale.ROOT,
+                            "timings: read %.3f s, resolve %.3f s%n",
+                            (t1 - t0) * 1e-9,
+                            (t2 - t1) * 1e-9);
+        }
+        return code;
     }
 
     private picocli.CommandLine.Model.CommandSpec spec() {
@@ -152,8 +170,11 @@ public final class NetworkCommand implements Callable<Integer> {
             Format format,
             UnitSystem system,
             Path output,
-            boolean force) {
+            boolean force,
+            boolean timings) {
+        long t0 = System.nanoTime();
         NetworkResult result = NetworkSolver.standard().solve(network);
+        long t1 = System.nanoTime();
         PrintWriter out = spec.commandLine().getOut();
         try {
             switch (format) {
@@ -178,6 +199,16 @@ public final class NetworkCommand implements Callable<Integer> {
             throw new UncheckedIOException(e);
         }
         out.flush();
+        if (timings) {
+            spec.commandLine()
+                    .getErr()
+                    .printf(
+                            java.util.Locale.ROOT,
+                            "timings: solve %.3f s (%d iterations), write %.3f s%n",
+                            (t1 - t0) * 1e-9,
+                            result.iterations(),
+                            (System.nanoTime() - t1) * 1e-9);
+        }
         return result.converged() ? HeadwayCommand.EXIT_OK : HeadwayCommand.EXIT_FAILED;
     }
 

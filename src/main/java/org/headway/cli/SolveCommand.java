@@ -119,7 +119,7 @@ public final class SolveCommand implements Callable<Integer> {
                         "a network is solved for its demands and fixed heads; --mode " + mode + " is for runs");
             }
             return NetworkCommand.solveAndPrint(
-                    spec, network, NetworkCommand.Format.valueOf(format.name()), system, null, false);
+                    spec, network, NetworkCommand.Format.valueOf(format.name()), system, null, false, false);
         }
         ResolvedProject resolved = resolve(loaded, catalog);
         PipeRun run = resolved.run();

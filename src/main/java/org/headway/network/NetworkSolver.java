@@ -13,7 +13,6 @@ import org.headway.system.Element;
 import org.headway.system.ElementResult;
 import org.headway.system.FlowContext;
 import org.headway.system.Gravity;
-import org.headway.system.PipeFlow;
 import org.headway.system.PumpElement;
 import org.headway.system.Segment;
 
@@ -810,20 +809,25 @@ public final class NetworkSolver {
                 Optional<ElementResult> er = Optional.empty();
                 String st = status[k] == OPEN ? "open" : status[k] == CLOSED ? "closed" : "shut";
                 if (status[k] == OPEN && Double.isFinite(q)) {
-                    try {
-                        double evalFlow = q < 0 && e.blocksReverseFlow() ? 0 : q;
-                        ElementResult r = e.evaluate(evalFlow, ctx);
-                        er = Optional.of(r);
-                        cautions.addAll(r.cautions());
-                        maxEnergy = Math.max(maxEnergy, Math.abs(law(k, q) - loss));
-                    } catch (InputException ex) {
-                        cautions.add(Caution.serious("element-failed", ex.getMessage(), "element law")
-                                .about(e.id()));
-                    }
                     if (e instanceof Segment s) {
-                        PipeFlow pf = s.flowAt(Math.abs(q), ctx);
-                        velocity = Math.signum(q) * pf.velocity();
-                        friction = pf.frictionFactor();
+                        velocity = q / (Math.PI * s.innerDiameter() * s.innerDiameter() / 4);
+                    }
+                    maxEnergy = Math.max(maxEnergy, Math.abs(law(k, q) - loss));
+                    // Below the zero-flow threshold the law was linearised; a method such as Colebrook–White
+                    // may refuse so small a Reynolds number, and there is nothing to report about it anyway.
+                    if (Math.abs(q) >= ZERO_FLOW || e instanceof PumpElement) {
+                        try {
+                            double evalFlow = q < 0 && e.blocksReverseFlow() ? 0 : q;
+                            ElementResult r = e.evaluate(evalFlow, ctx);
+                            er = Optional.of(r);
+                            cautions.addAll(r.cautions());
+                            if (e instanceof Segment s) {
+                                friction = s.flowAt(Math.abs(q), ctx).frictionFactor();
+                            }
+                        } catch (InputException ex) {
+                            cautions.add(Caution.serious("element-failed", ex.getMessage(), "element law")
+                                    .about(e.id()));
+                        }
                     }
                 }
                 links.add(new NetworkResult.LinkResult(
@@ -845,7 +849,40 @@ public final class NetworkSolver {
         }
     }
 
+    /** Cautions of one code shown in full before the rest are counted in one summary line. */
+    static final int CAUTIONS_PER_CODE = 5;
+
+    /**
+     * Equal cautions once each; of one code at most {@value #CAUTIONS_PER_CODE} in full and a count
+     * of the rest, so that a network of 10⁵ laminar pipes does not print 10⁵ lines.
+     */
     private static List<Caution> dedupe(List<Caution> cautions) {
-        return new ArrayList<>(new java.util.LinkedHashSet<>(cautions));
+        java.util.Map<String, Integer> shown = new java.util.HashMap<>();
+        java.util.Map<String, Caution> firstOfCode = new java.util.LinkedHashMap<>();
+        java.util.Map<String, Integer> hidden = new java.util.LinkedHashMap<>();
+        List<Caution> out = new ArrayList<>();
+        for (Caution c : new java.util.LinkedHashSet<>(cautions)) {
+            int n = shown.merge(c.code(), 1, Integer::sum);
+            firstOfCode.putIfAbsent(c.code(), c);
+            if (n <= CAUTIONS_PER_CODE) {
+                out.add(c);
+            } else {
+                hidden.merge(c.code(), 1, Integer::sum);
+            }
+        }
+        for (var e : hidden.entrySet()) {
+            Caution first = firstOfCode.get(e.getKey());
+            out.add(new Caution(
+                    e.getKey(),
+                    first.severity(),
+                    String.format(
+                            Locale.ROOT,
+                            "… and %d more elements with the caution \"%s\" (the first %d are listed above)",
+                            e.getValue(),
+                            e.getKey(),
+                            CAUTIONS_PER_CODE),
+                    first.basis()));
+        }
+        return out;
     }
 }

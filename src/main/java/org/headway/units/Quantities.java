@@ -484,11 +484,56 @@ public final class Quantities {
     /** The number and unit text of typed input, checked for emptiness and finiteness. */
     private record Typed(double number, String numberText, String unitText, String whole) {}
 
+    /**
+     * The common case without regular expressions: digits with at most one point, optional sign and
+     * no exponent, then optional spaces and a unit of letters and {@code /} only ({@code 95.04 m},
+     * {@code 0.05 L/s}). Anything else returns null and takes the general path.
+     */
+    private static Typed plainDecimal(String t) {
+        int n = t.length();
+        int i = 0;
+        if (i < n && (t.charAt(i) == '-' || t.charAt(i) == '+')) {
+            i++;
+        }
+        int digits = 0;
+        boolean point = false;
+        while (i < n) {
+            char c = t.charAt(i);
+            if (c >= '0' && c <= '9') {
+                digits++;
+            } else if (c == '.' && !point) {
+                point = true;
+            } else {
+                break;
+            }
+            i++;
+        }
+        if (digits == 0 || digits > 17) {
+            return null;
+        }
+        int numberEnd = i;
+        while (i < n && t.charAt(i) == ' ') {
+            i++;
+        }
+        for (int j = i; j < n; j++) {
+            char c = t.charAt(j);
+            if (!((c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || c == '/')) {
+                return null;
+            }
+        }
+        String numberText = t.substring(0, numberEnd);
+        return new Typed(Double.parseDouble(numberText), numberText, t.substring(i), t);
+    }
+
     private static Typed split(String text, String expected, String example, String where) {
         if (text == null || text.isBlank()) {
             throw new InputException(where, expected + " expected, got an empty value");
         }
         String trimmed = text.strip();
+        Typed fast = plainDecimal(trimmed);
+        if (fast != null) {
+            return fast;
+        }
         if (NON_FINITE.matcher(trimmed).matches()) {
             throw new InputException(where, "a finite number is required, got \"" + abbreviate(trimmed) + "\"");
         }
@@ -535,7 +580,24 @@ public final class Quantities {
     }
 
     /** The unit without its gauge/absolute marker, or null when it carries none. */
+    private static final Marked UNMARKED = new Marked("", PressureReading.Reference.ABSOLUTE);
+
+    private static final java.util.concurrent.ConcurrentHashMap<String, Marked> MARKED_CACHE =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
     private static Marked marked(String unitText) {
+        Marked cached = MARKED_CACHE.get(unitText);
+        if (cached != null) {
+            return cached == UNMARKED ? null : cached;
+        }
+        Marked m = markedUncached(unitText);
+        if (MARKED_CACHE.size() < CACHE_LIMIT) {
+            MARKED_CACHE.put(unitText, m == null ? UNMARKED : m);
+        }
+        return m;
+    }
+
+    private static Marked markedUncached(String unitText) {
         for (Pattern p : List.of(MARKER_IN_BRACKETS, MARKER_GLUED, MARKER_WORD)) {
             Matcher m = p.matcher(unitText);
             if (m.matches()) {
@@ -547,7 +609,32 @@ public final class Quantities {
         return null;
     }
 
+    /**
+     * Units already read, by their text: a line list of 10⁶ rows repeats a handful of units, and the
+     * unit library's parser is slow. Bounded so that fuzzed input cannot grow it without end.
+     */
+    private static final java.util.concurrent.ConcurrentHashMap<String, Unit<?>> UNIT_CACHE =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
+    private static final java.util.concurrent.ConcurrentHashMap<List<Unit<?>>, UnitConverter> CONVERTER_CACHE =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
+    private static final int CACHE_LIMIT = 512;
+
     private static Unit<?> parseUnit(String unitText, String whole, String expected, String example, String where) {
+        Unit<?> cached = UNIT_CACHE.get(unitText);
+        if (cached != null) {
+            return cached;
+        }
+        Unit<?> unit = parseUnitUncached(unitText, whole, expected, example, where);
+        if (UNIT_CACHE.size() < CACHE_LIMIT) {
+            UNIT_CACHE.put(unitText, unit);
+        }
+        return unit;
+    }
+
+    private static Unit<?> parseUnitUncached(
+            String unitText, String whole, String expected, String example, String where) {
         if (unitText.length() > MAX_UNIT_LENGTH) {
             throw new InputException(
                     where,
@@ -693,11 +780,83 @@ public final class Quantities {
     }
 
     private static double convert(Unit<?> from, Unit<?> to, double value) {
-        return converter(from, to).convert(value);
+        UnitConverter c = converter(from, to);
+        Integer decimal = DECIMAL_EXPONENT.get(c);
+        if (decimal == null) {
+            decimal = decimalExponent(c);
+            if (DECIMAL_EXPONENT.size() < CACHE_LIMIT) {
+                DECIMAL_EXPONENT.put(c, decimal);
+            }
+        }
+        if (decimal == NOT_DECIMAL) {
+            return c.convert(value);
+        }
+        // A pure power of ten: one correctly rounded multiplication or division gives the same double as
+        // the unit library's exact decimal arithmetic, without its big-number cost.
+        int k = decimal;
+        return k >= 0 ? value * POWERS_OF_TEN[k] : value / POWERS_OF_TEN[-k];
+    }
+
+    private static final int NOT_DECIMAL = Integer.MIN_VALUE;
+
+    /** 10⁰ … 10²², each exactly representable as a double. */
+    private static final double[] POWERS_OF_TEN = new double[23];
+
+    static {
+        double p = 1;
+        for (int i = 0; i < POWERS_OF_TEN.length; i++) {
+            POWERS_OF_TEN[i] = p;
+            p *= 10;
+        }
+    }
+
+    private static final java.util.concurrent.ConcurrentHashMap<UnitConverter, Integer> DECIMAL_EXPONENT =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
+    /** k when the converter multiplies by exactly 10^k (|k| ≤ 22), else {@link #NOT_DECIMAL}. */
+    private static int decimalExponent(UnitConverter c) {
+        if (c.isIdentity()) {
+            return 0;
+        }
+        if (!c.isLinear()) {
+            return NOT_DECIMAL;
+        }
+        double f = c.convert(1.0);
+        if (!(f > 0) || !Double.isFinite(f)) {
+            return NOT_DECIMAL;
+        }
+        long k = Math.round(Math.log10(f));
+        if (Math.abs(k) > 22) {
+            return NOT_DECIMAL;
+        }
+        int ki = (int) k;
+        double expected = ki >= 0 ? POWERS_OF_TEN[ki] : 1 / POWERS_OF_TEN[-ki];
+        if (f != expected && f != (ki >= 0 ? POWERS_OF_TEN[ki] : 1.0 / POWERS_OF_TEN[-ki])) {
+            return NOT_DECIMAL;
+        }
+        for (double probe : new double[] {3.0, 7.0, 0.1, 123.456}) {
+            double fast = ki >= 0 ? probe * POWERS_OF_TEN[ki] : probe / POWERS_OF_TEN[-ki];
+            if (c.convert(probe) != fast) {
+                return NOT_DECIMAL;
+            }
+        }
+        return ki;
+    }
+
+    private static UnitConverter converter(Unit<?> from, Unit<?> to) {
+        List<Unit<?>> key = List.of(from, to);
+        UnitConverter c = CONVERTER_CACHE.get(key);
+        if (c == null) {
+            c = converterUncached(from, to);
+            if (CONVERTER_CACHE.size() < CACHE_LIMIT) {
+                CONVERTER_CACHE.put(key, c);
+            }
+        }
+        return c;
     }
 
     @SuppressWarnings({"unchecked", "rawtypes"})
-    private static UnitConverter converter(Unit<?> from, Unit<?> to) {
+    private static UnitConverter converterUncached(Unit<?> from, Unit<?> to) {
         try {
             return ((Unit) from).getConverterToAny(to);
         } catch (IncommensurableException | UnconvertibleException e) {
