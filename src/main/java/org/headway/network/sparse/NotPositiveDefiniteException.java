@@ -40,7 +40,7 @@ public final class NotPositiveDefiniteException extends ArithmeticException {
         return step;
     }
 
-    /** The pivot d of L D Lᵀ found for that row. */
+    /** The pivot found for that row: dₖ = A(k, k) − Σⱼ L(k, j)², the square of L(k, k) had it passed. */
     public double pivot() {
         return pivot;
     }

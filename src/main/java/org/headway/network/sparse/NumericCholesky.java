@@ -3,15 +3,20 @@ package org.headway.network.sparse;
 import java.util.Arrays;
 
 /**
- * The numeric factor P A Pᵀ = L D Lᵀ (L unit lower triangular, D diagonal; the Cholesky factor is
- * L D^½) of a symmetric positive-definite matrix on the pattern of a {@link SymbolicCholesky}, and
- * solves with it.
+ * The numeric Cholesky factor P A Pᵀ = L Lᵀ of a symmetric positive-definite matrix on the
+ * pattern of a {@link SymbolicCholesky}, and solves with it.
  *
- * <p>The factorization is the up-looking (row-by-row) method: row k of L solves the triangular
- * system L₀..ₖ₋₁ y = A(0..k−1, k) over the row's pattern, which is the set of tree nodes reached
- * from A's entries of row k, visited in a topological order of the elimination tree; then L(k, j) =
- * yⱼ / dⱼ and dₖ = aₖₖ − Σ L(k, j) yⱼ (Davis, <i>Direct Methods for Sparse Linear Systems</i>, SIAM
- * 2006, §§4.1–4.2, 4.8). Square roots are not needed, and the pivot dₖ is tested directly.
+ * <p>The factorization is the left-looking supernodal method (Ng &amp; Peyton, "Block sparse
+ * Cholesky algorithms on advanced uniprocessor computers", SIAM J. Sci. Comput. 14(5), 1993;
+ * Davis, <i>Direct Methods for Sparse Linear Systems</i>, SIAM 2006, §9.1; the column form with
+ * linked lists of updating columns is George &amp; Liu 1981 §5.5). Each supernode J is a dense
+ * column-major block holding its rows; in column order, J gathers A's columns, subtracts the
+ * update L_K L_Kᵀ of every earlier supernode K with rows in J's columns (K sits in a linked list
+ * keyed by the next supernode it updates), then factors its diagonal block in place and divides
+ * the rows below by it. The inner loops are dense, four target columns at a time.
+ *
+ * <p>The pivot of column k is dₖ = A(k, k) − Σ L(k, j)² (the pivot of L D Lᵀ, before the square
+ * root) and must exceed a tolerance relative to the largest diagonal entry of A.
  *
  * <p>{@link #refactor} writes new values into the same arrays (one factor per Newton iteration,
  * no allocation). A factor is not thread-safe: {@link #refactor} and {@link #solveInPlace} use its
@@ -28,25 +33,37 @@ public final class NumericCholesky {
 
     private final SymbolicCholesky symbolic;
     private final int n;
-    private final double[] lx;
-    private final double[] d;
-    private final double[] y;
+    private final double[] values;
     private final double[] work;
-    private final int[] stack;
-    private final int[] flag;
-    private final int[] next;
+    /** Global row → its position in the current supernode's rows. */
+    private final int[] map;
+    /** Head of the list of supernodes whose next update goes to supernode s. */
+    private final int[] head;
+
+    private final int[] link;
+    /** Position in supernode K's rows of the first row not yet used by an update. */
+    private final int[] cursor;
+    /** Update buffer: up to four columns of the largest supernode's rows. */
+    private final double[] update;
+
     private boolean valid;
 
     NumericCholesky(SymbolicCholesky symbolic) {
         this.symbolic = symbolic;
         this.n = symbolic.size();
-        this.lx = new double[symbolic.rowIndex().length];
-        this.d = new double[n];
-        this.y = new double[n];
+        int ns = symbolic.supernodeCount();
+        this.values = new double[(int) symbolic.storedValues()];
         this.work = new double[n];
-        this.stack = new int[n];
-        this.flag = new int[n];
-        this.next = new int[n];
+        this.map = new int[n];
+        this.head = new int[ns];
+        this.link = new int[ns];
+        this.cursor = new int[ns];
+        int[] rs = symbolic.superRowStart();
+        int maxRows = 0;
+        for (int s = 0; s < ns; s++) {
+            maxRows = Math.max(maxRows, rs[s + 1] - rs[s]);
+        }
+        this.update = new double[4 * maxRows];
     }
 
     /**
@@ -57,8 +74,8 @@ public final class NumericCholesky {
      * @param offDiagonal A[a][b] = A[b][a] for each edge of the pattern's list, in its order;
      *     repeated pairs are summed
      * @return this factor
-     * @throws NotPositiveDefiniteException naming the first row whose pivot is not above the
-     *     tolerance × the largest diagonal entry
+     * @throws NotPositiveDefiniteException naming the first row (in elimination order) whose pivot
+     *     is not above the tolerance × the largest diagonal entry
      * @throws IllegalArgumentException when a length is wrong or a value is not finite
      */
     public NumericCholesky refactor(double[] diagonal, double[] offDiagonal) {
@@ -85,60 +102,160 @@ public final class NumericCholesky {
         double threshold = relativePivotTolerance * maxDiagonal;
 
         int[] perm = symbolic.perm();
-        int[] parent = symbolic.parent();
-        int[] cp = symbolic.columnPointer();
-        int[] ri = symbolic.rowIndex();
-        int[] rowEdgeStart = symbolic.rowEdgeStart();
-        int[] rowEdge = symbolic.rowEdge();
-        int[] rowEdgeLower = symbolic.rowEdgeLower();
-        double[] lx = this.lx;
-        double[] d = this.d;
-        double[] y = this.y;
-        int[] stack = this.stack;
-        int[] flag = this.flag;
-        int[] next = this.next;
-        Arrays.fill(flag, -1);
-        System.arraycopy(cp, 0, next, 0, n);
+        int[] first = symbolic.superFirst();
+        int[] columnSuper = symbolic.columnSuper();
+        int[] rowStart = symbolic.superRowStart();
+        int[] rows = symbolic.superRows();
+        int[] valueStart = symbolic.superValueStart();
+        int[] colEdgeStart = symbolic.colEdgeStart();
+        int[] colEdge = symbolic.colEdge();
+        int[] colEdgeUpper = symbolic.colEdgeUpper();
+        double[] v = values;
+        int ns = first.length - 1;
+        Arrays.fill(head, -1);
 
-        for (int k = 0; k < n; k++) {
-            // Scatter A(0..k−1, k) into y and collect the pattern of row k of L in stack[top..n),
-            // each tree path pushed so that descendants come before ancestors.
-            int top = n;
-            flag[k] = k;
-            for (int t = rowEdgeStart[k]; t < rowEdgeStart[k + 1]; t++) {
-                int j = rowEdgeLower[t];
-                y[j] += offDiagonal[rowEdge[t]];
-                int len = 0;
-                while (flag[j] != k) {
-                    stack[len++] = j;
-                    flag[j] = k;
-                    j = parent[j];
-                }
-                while (len > 0) {
-                    stack[--top] = stack[--len];
+        for (int sj = 0; sj < ns; sj++) {
+            int f = first[sj];
+            int w = first[sj + 1] - f;
+            int rj = rowStart[sj];
+            int r = rowStart[sj + 1] - rj;
+            int vj = valueStart[sj];
+            Arrays.fill(v, vj, vj + r * w, 0.0);
+            for (int i = 0; i < r; i++) {
+                map[rows[rj + i]] = i;
+            }
+            // Gather A's columns f .. f+w−1 (diagonal and the entries below it).
+            for (int t = 0; t < w; t++) {
+                int col = f + t;
+                int base = vj + t * r;
+                v[base + t] = diagonal[perm[col]];
+                for (int q = colEdgeStart[col]; q < colEdgeStart[col + 1]; q++) {
+                    v[base + map[colEdgeUpper[q]]] += offDiagonal[colEdge[q]];
                 }
             }
-            double dk = diagonal[perm[k]];
-            for (int t = top; t < n; t++) {
-                int j = stack[t];
-                double yj = y[j];
-                y[j] = 0;
-                int end = next[j];
-                for (int q = cp[j]; q < end; q++) {
-                    y[ri[q]] -= lx[q] * yj;
+            // Updates from earlier supernodes with rows among J's columns.
+            int sk = head[sj];
+            while (sk != -1) {
+                int nextK = link[sk];
+                int rk = rowStart[sk];
+                int rowsK = rowStart[sk + 1] - rk;
+                int wK = first[sk + 1] - first[sk];
+                int vk = valueStart[sk];
+                int p0 = cursor[sk];
+                int p1 = p0;
+                int end = f + w;
+                while (p1 < rowsK && rows[rk + p1] < end) {
+                    p1++;
                 }
-                double lkj = yj / d[j];
-                dk -= lkj * yj;
-                lx[end] = lkj; // ri[end] == k: rows of each column are filled in ascending order
-                next[j] = end + 1;
+                int len = rowsK - p0;
+                for (int b0 = p0; b0 < p1; b0 += 4) {
+                    int nb = Math.min(4, p1 - b0);
+                    Arrays.fill(update, 0, nb * len, 0.0);
+                    // update[(a − p0) + j·len] = −Σ_c L_K(a, c) L_K(b0 + j, c), rows a ≥ b0.
+                    subtractProducts(v, vk, rowsK, 0, wK, b0, rowsK, b0, nb, update, -p0, len);
+                    for (int j = 0; j < nb; j++) {
+                        int target = vj + (rows[rk + b0 + j] - f) * r;
+                        int u = j * len - p0;
+                        for (int a = b0 + j; a < rowsK; a++) {
+                            v[target + map[rows[rk + a]]] += update[u + a];
+                        }
+                    }
+                }
+                cursor[sk] = p1;
+                if (p1 < rowsK) {
+                    int s = columnSuper[rows[rk + p1]];
+                    link[sk] = head[s];
+                    head[s] = sk;
+                }
+                sk = nextK;
             }
-            if (!(dk > threshold)) {
-                throw new NotPositiveDefiniteException(perm[k], k, n, dk, threshold);
+            // Dense Cholesky of the diagonal block, left-looking in groups of four columns, each
+            // group also dividing the rows below.
+            for (int t0 = 0; t0 < w; t0 += 4) {
+                int nb = Math.min(4, w - t0);
+                subtractProducts(v, vj, r, 0, t0, t0, r, t0, nb, v, vj + t0 * r, r);
+                for (int j = 0; j < nb; j++) {
+                    int t = t0 + j;
+                    int col = vj + t * r;
+                    for (int c = t0; c < t; c++) {
+                        int cc = vj + c * r;
+                        double y = v[cc + t];
+                        for (int a = t; a < r; a++) {
+                            v[col + a] -= v[cc + a] * y;
+                        }
+                    }
+                    double d = v[col + t];
+                    if (!(d > threshold)) {
+                        throw new NotPositiveDefiniteException(perm[f + t], f + t, n, d, threshold);
+                    }
+                    double s = Math.sqrt(d);
+                    v[col + t] = s;
+                    double inv = 1.0 / s;
+                    for (int a = t + 1; a < r; a++) {
+                        v[col + a] *= inv;
+                    }
+                }
             }
-            d[k] = dk;
+            cursor[sj] = w;
+            if (w < r) {
+                int s = columnSuper[rows[rj + w]];
+                link[sj] = head[s];
+                head[s] = sj;
+            }
         }
         valid = true;
         return this;
+    }
+
+    /**
+     * dst[dstBase + a + j·dstLd] −= Σ_{c ∈ [c0, c1)} X(a, c) X(b0 + j, c) for rows a ∈ [a0, a1), j
+     * &lt; nb ≤ 4, with X(i, c) = v[base + i + c·ld]. dst may be v itself when the columns written
+     * are not among those read.
+     */
+    private static void subtractProducts(
+            double[] v,
+            int base,
+            int ld,
+            int c0,
+            int c1,
+            int a0,
+            int a1,
+            int b0,
+            int nb,
+            double[] dst,
+            int dstBase,
+            int dstLd) {
+        if (nb == 4) {
+            int d0 = dstBase;
+            int d1 = dstBase + dstLd;
+            int d2 = d1 + dstLd;
+            int d3 = d2 + dstLd;
+            for (int c = c0; c < c1; c++) {
+                int x = base + c * ld;
+                double y0 = v[x + b0];
+                double y1 = v[x + b0 + 1];
+                double y2 = v[x + b0 + 2];
+                double y3 = v[x + b0 + 3];
+                for (int a = a0; a < a1; a++) {
+                    double xa = v[x + a];
+                    dst[d0 + a] -= xa * y0;
+                    dst[d1 + a] -= xa * y1;
+                    dst[d2 + a] -= xa * y2;
+                    dst[d3 + a] -= xa * y3;
+                }
+            }
+            return;
+        }
+        for (int j = 0; j < nb; j++) {
+            int dj = dstBase + j * dstLd;
+            for (int c = c0; c < c1; c++) {
+                int x = base + c * ld;
+                double y = v[x + b0 + j];
+                for (int a = a0; a < a1; a++) {
+                    dst[dj + a] -= v[x + a] * y;
+                }
+            }
+        }
     }
 
     private static void check(double[] values, int expected, String what) {
@@ -175,38 +292,52 @@ public final class NumericCholesky {
     }
 
     private void solve(double[] b, double[] z) {
-        if (!valid) {
-            throw new IllegalStateException("no valid factor: the last factorization failed");
-        }
+        requireValid();
         if (b == null || b.length != n) {
             throw new IllegalArgumentException("right-hand side must have " + n + " entries, got "
                     + (b == null ? "null" : String.valueOf(b.length)));
         }
         int[] perm = symbolic.perm();
-        int[] cp = symbolic.columnPointer();
-        int[] ri = symbolic.rowIndex();
+        int[] first = symbolic.superFirst();
+        int[] rowStart = symbolic.superRowStart();
+        int[] rows = symbolic.superRows();
+        int[] valueStart = symbolic.superValueStart();
+        double[] v = values;
+        int ns = first.length - 1;
         for (int k = 0; k < n; k++) {
             z[k] = b[perm[k]];
         }
-        // L z = P b, column by column.
-        for (int j = 0; j < n; j++) {
-            double zj = z[j];
-            if (zj != 0) {
-                for (int q = cp[j]; q < cp[j + 1]; q++) {
-                    z[ri[q]] -= lx[q] * zj;
+        // L y = P b, supernode by supernode, column by column.
+        for (int s = 0; s < ns; s++) {
+            int f = first[s];
+            int w = first[s + 1] - f;
+            int rs = rowStart[s];
+            int r = rowStart[s + 1] - rs;
+            for (int t = 0; t < w; t++) {
+                int col = valueStart[s] + t * r;
+                double zt = z[f + t] / v[col + t];
+                z[f + t] = zt;
+                if (zt != 0) {
+                    for (int a = t + 1; a < r; a++) {
+                        z[rows[rs + a]] -= v[col + a] * zt;
+                    }
                 }
             }
         }
-        for (int j = 0; j < n; j++) {
-            z[j] /= d[j];
-        }
-        // Lᵀ z = D⁻¹ z, row j of Lᵀ being column j of L.
-        for (int j = n - 1; j >= 0; j--) {
-            double s = z[j];
-            for (int q = cp[j]; q < cp[j + 1]; q++) {
-                s -= lx[q] * z[ri[q]];
+        // Lᵀ x = y, row t of Lᵀ being column t of L.
+        for (int s = ns - 1; s >= 0; s--) {
+            int f = first[s];
+            int w = first[s + 1] - f;
+            int rs = rowStart[s];
+            int r = rowStart[s + 1] - rs;
+            for (int t = w - 1; t >= 0; t--) {
+                int col = valueStart[s] + t * r;
+                double sum = z[f + t];
+                for (int a = t + 1; a < r; a++) {
+                    sum -= v[col + a] * z[rows[rs + a]];
+                }
+                z[f + t] = sum / v[col + t];
             }
-            z[j] = s;
         }
         for (int k = 0; k < n; k++) {
             b[perm[k]] = z[k];
@@ -223,22 +354,35 @@ public final class NumericCholesky {
         return symbolic.nonZerosInL();
     }
 
-    /** ln det A = Σ ln dₖ. */
+    /** ln det A = 2 Σ ln L(k, k). */
     public double logDeterminant() {
         requireValid();
         double s = 0;
-        for (int k = 0; k < n; k++) {
-            s += Math.log(d[k]);
+        int[] first = symbolic.superFirst();
+        int[] rowStart = symbolic.superRowStart();
+        int[] valueStart = symbolic.superValueStart();
+        for (int sn = 0; sn + 1 < first.length; sn++) {
+            int r = rowStart[sn + 1] - rowStart[sn];
+            for (int t = 0; t < first[sn + 1] - first[sn]; t++) {
+                s += Math.log(values[valueStart[sn] + t * r + t]);
+            }
         }
-        return s;
+        return 2 * s;
     }
 
-    /** The smallest pivot dₖ (+∞ when n = 0). */
+    /** The smallest pivot dₖ = L(k, k)² (+∞ when n = 0). */
     public double smallestPivot() {
         requireValid();
         double m = Double.POSITIVE_INFINITY;
-        for (int k = 0; k < n; k++) {
-            m = Math.min(m, d[k]);
+        int[] first = symbolic.superFirst();
+        int[] rowStart = symbolic.superRowStart();
+        int[] valueStart = symbolic.superValueStart();
+        for (int sn = 0; sn + 1 < first.length; sn++) {
+            int r = rowStart[sn + 1] - rowStart[sn];
+            for (int t = 0; t < first[sn + 1] - first[sn]; t++) {
+                double l = values[valueStart[sn] + t * r + t];
+                m = Math.min(m, l * l);
+            }
         }
         return m;
     }

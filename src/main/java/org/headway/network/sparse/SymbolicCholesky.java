@@ -4,12 +4,12 @@ import java.util.Arrays;
 
 /**
  * The symbolic analysis of a sparse symmetric matrix for a given elimination order: the
- * elimination tree, the column counts and the full pattern of the factor L of P A Pᵀ = L D Lᵀ.
- * Computed once per network topology; {@link #factor} then runs once per Newton iteration with new
- * values on the same pattern.
+ * elimination tree, the column counts, the supernodes and the full pattern of the Cholesky factor L
+ * of P A Pᵀ = L Lᵀ. Computed once per network topology; {@link #factor} then runs once per Newton
+ * iteration with new values on the same pattern.
  *
  * <p>Algorithms, written from their published descriptions (Davis, <i>Direct Methods for Sparse
- * Linear Systems</i>, SIAM 2006, ch. 4; George &amp; Liu 1981, ch. 5):
+ * Linear Systems</i>, SIAM 2006, ch. 4 and §9.1; George &amp; Liu 1981, ch. 5):
  *
  * <ul>
  *   <li>the elimination tree by Liu's algorithm with path compression of a virtual forest of
@@ -17,7 +17,11 @@ import java.util.Arrays;
  *       elimination trees", ACM TOMS 12(2), 1986), parent(j) = min{ i &gt; j : L(i, j) ≠ 0 };
  *   <li>the pattern of row k of L is the union of the tree paths from each j with A(k, j) ≠ 0, j
  *       &lt; k, up towards k (the "row subtree"); one walk over all rows gives the column counts, a
- *       second fills the row indices of each column in ascending order. Both cost O(|L|).
+ *       second the row indices, in ascending order, of the first column of each supernode;
+ *   <li>supernodes: maximal runs of columns j, j+1, … with parent(j) = j+1 and count(j) =
+ *       count(j+1) + 1, which share one row structure (Liu, Ng &amp; Peyton, "On finding
+ *       supernodes for sparse matrix computations", SIAM J. Matrix Anal. Appl. 14(1), 1993), so
+ *       each is stored once as a dense block and factored with dense kernels.
  * </ul>
  *
  * <p>Indices inside this class are in the permuted order (row k of P A Pᵀ is original row {@code
@@ -32,38 +36,62 @@ public final class SymbolicCholesky {
     private final int[] perm;
     private final int[] inversePerm;
     private final int[] parent;
-    private final int[] columnPointer;
-    private final int[] rowIndex;
-    /** Edges grouped by the later (permuted) of their two rows: row k holds rowEdge[rowEdgeStart[k]..). */
-    private final int[] rowEdgeStart;
+    private final int[] count;
+    private final long belowDiagonal;
+    /** Supernode s holds columns superFirst[s] .. superFirst[s+1] − 1. */
+    private final int[] superFirst;
+    /** Column → its supernode. */
+    private final int[] columnSuper;
+    /** Rows of supernode s (its own columns first, then the rows below), ascending. */
+    private final int[] superRowStart;
 
-    private final int[] rowEdge;
-    /** For each entry of rowEdge, the earlier (permuted) row of that edge. */
-    private final int[] rowEdgeLower;
+    private final int[] superRows;
+    /** Offset of supernode s's dense column-major block (rows × width) in the value array. */
+    private final int[] superValueStart;
+    /** Edges grouped by the earlier (permuted) of their two rows: column j holds colEdge[colEdgeStart[j]..). */
+    private final int[] colEdgeStart;
 
-    private SymbolicCholesky(
-            int n,
-            int edgeCount,
-            int distinctPairs,
-            int[] perm,
-            int[] inversePerm,
-            int[] parent,
-            int[] columnPointer,
-            int[] rowIndex,
-            int[] rowEdgeStart,
-            int[] rowEdge,
-            int[] rowEdgeLower) {
-        this.n = n;
-        this.edgeCount = edgeCount;
-        this.distinctPairs = distinctPairs;
-        this.perm = perm;
-        this.inversePerm = inversePerm;
-        this.parent = parent;
-        this.columnPointer = columnPointer;
-        this.rowIndex = rowIndex;
-        this.rowEdgeStart = rowEdgeStart;
-        this.rowEdge = rowEdge;
-        this.rowEdgeLower = rowEdgeLower;
+    private final int[] colEdge;
+    /** For each entry of colEdge, the later (permuted) row of that edge. */
+    private final int[] colEdgeUpper;
+
+    private SymbolicCholesky(Builder b) {
+        this.n = b.n;
+        this.edgeCount = b.edgeCount;
+        this.distinctPairs = b.distinctPairs;
+        this.perm = b.perm;
+        this.inversePerm = b.inversePerm;
+        this.parent = b.parent;
+        this.count = b.count;
+        this.belowDiagonal = b.belowDiagonal;
+        this.superFirst = b.superFirst;
+        this.columnSuper = b.columnSuper;
+        this.superRowStart = b.superRowStart;
+        this.superRows = b.superRows;
+        this.superValueStart = b.superValueStart;
+        this.colEdgeStart = b.colEdgeStart;
+        this.colEdge = b.colEdge;
+        this.colEdgeUpper = b.colEdgeUpper;
+    }
+
+    /** The fields of a symbolic factor while it is computed. */
+    private static final class Builder {
+        int n;
+        int edgeCount;
+        int distinctPairs;
+        int[] perm;
+        int[] inversePerm;
+        int[] parent;
+        int[] count;
+        long belowDiagonal;
+        int[] superFirst;
+        int[] columnSuper;
+        int[] superRowStart;
+        int[] superRows;
+        int[] superValueStart;
+        int[] colEdgeStart;
+        int[] colEdge;
+        int[] colEdgeUpper;
     }
 
     /**
@@ -81,7 +109,7 @@ public final class SymbolicCholesky {
      * @param perm elimination order, {@code perm[k]} = original row eliminated k-th (new → old)
      * @return the symbolic factor
      * @throws IllegalArgumentException when perm is not a permutation of 0..n−1
-     * @throws IllegalStateException when L would hold more than 2³¹ − 16 entries
+     * @throws IllegalStateException when the factor would not fit in one Java array
      */
     public static SymbolicCholesky analyse(SparsePattern pattern, int[] perm) {
         int n = pattern.size();
@@ -136,17 +164,41 @@ public final class SymbolicCholesky {
                 }
             }
         }
-        if (total > Integer.MAX_VALUE - 16) {
-            throw new IllegalStateException("the factor would hold " + total
-                    + " off-diagonal entries, more than one Java array can; use a better ordering");
-        }
-        int[] columnPointer = new int[n + 1];
+
+        // Supernodes: column j+1 joins j's when its structure is j's less row j+1.
+        int[] columnSuper = new int[n];
+        int[] firstTmp = new int[n + 1];
+        int ns = 0;
         for (int j = 0; j < n; j++) {
-            columnPointer[j + 1] = columnPointer[j] + count[j];
+            if (j == 0 || !(parent[j - 1] == j && count[j - 1] == count[j] + 1)) {
+                firstTmp[ns++] = j;
+            }
+            columnSuper[j] = ns - 1;
         }
-        int[] rowIndex = new int[(int) total];
-        int[] fill = count; // reuse as the next free slot of each column
-        System.arraycopy(columnPointer, 0, fill, 0, n);
+        firstTmp[ns] = n;
+        int[] superFirst = Arrays.copyOf(firstTmp, ns + 1);
+        int[] superRowStart = new int[ns + 1];
+        int[] superValueStart = new int[ns + 1];
+        long values = 0;
+        for (int s = 0; s < ns; s++) {
+            int rows = count[superFirst[s]] + 1;
+            int width = superFirst[s + 1] - superFirst[s];
+            superRowStart[s + 1] = superRowStart[s] + rows;
+            values += (long) rows * width;
+            if (values > Integer.MAX_VALUE - 16) {
+                throw new IllegalStateException("the factor would hold more than " + (Integer.MAX_VALUE - 16)
+                        + " values (" + total + " below the diagonal); use a better ordering");
+            }
+            superValueStart[s + 1] = (int) values;
+        }
+        // Rows of each supernode: its first column, then that column's pattern (second walk).
+        int[] superRows = new int[superRowStart[ns]];
+        int[] slot = new int[n];
+        Arrays.fill(slot, -1);
+        for (int s = 0; s < ns; s++) {
+            superRows[superRowStart[s]] = superFirst[s];
+            slot[superFirst[s]] = superRowStart[s] + 1;
+        }
         Arrays.fill(mark, -1);
         for (int k = 0; k < n; k++) {
             mark[k] = k;
@@ -158,45 +210,53 @@ public final class SymbolicCholesky {
                 }
                 while (mark[i] != k) {
                     mark[i] = k;
-                    rowIndex[fill[i]++] = k;
+                    if (slot[i] >= 0) {
+                        superRows[slot[i]++] = k;
+                    }
                     i = parent[i];
                 }
             }
         }
 
-        // Value map: every given edge, filed under the later of its two permuted rows.
+        // Value map: every given edge, filed under the earlier of its two permuted rows.
         int[] ea = pattern.edgeAArray();
         int[] eb = pattern.edgeBArray();
         int m = ea.length;
-        int[] rowEdgeStart = new int[n + 1];
+        int[] colEdgeStart = new int[n + 1];
         for (int e = 0; e < m; e++) {
-            rowEdgeStart[Math.max(pinv[ea[e]], pinv[eb[e]]) + 1]++;
+            colEdgeStart[Math.min(pinv[ea[e]], pinv[eb[e]]) + 1]++;
         }
         for (int k = 0; k < n; k++) {
-            rowEdgeStart[k + 1] += rowEdgeStart[k];
+            colEdgeStart[k + 1] += colEdgeStart[k];
         }
-        int[] slot = Arrays.copyOf(rowEdgeStart, n);
-        int[] rowEdge = new int[m];
-        int[] rowEdgeLower = new int[m];
+        int[] next = Arrays.copyOf(colEdgeStart, n);
+        int[] colEdge = new int[m];
+        int[] colEdgeUpper = new int[m];
         for (int e = 0; e < m; e++) {
             int a = pinv[ea[e]];
             int b = pinv[eb[e]];
-            int s = slot[Math.max(a, b)]++;
-            rowEdge[s] = e;
-            rowEdgeLower[s] = Math.min(a, b);
+            int s = next[Math.min(a, b)]++;
+            colEdge[s] = e;
+            colEdgeUpper[s] = Math.max(a, b);
         }
-        return new SymbolicCholesky(
-                n,
-                m,
-                pattern.distinctPairs(),
-                p,
-                pinv,
-                parent,
-                columnPointer,
-                rowIndex,
-                rowEdgeStart,
-                rowEdge,
-                rowEdgeLower);
+        Builder b = new Builder();
+        b.n = n;
+        b.edgeCount = m;
+        b.distinctPairs = pattern.distinctPairs();
+        b.perm = p;
+        b.inversePerm = pinv;
+        b.parent = parent;
+        b.count = count;
+        b.belowDiagonal = total;
+        b.superFirst = superFirst;
+        b.columnSuper = columnSuper;
+        b.superRowStart = superRowStart;
+        b.superRows = superRows;
+        b.superValueStart = superValueStart;
+        b.colEdgeStart = colEdgeStart;
+        b.colEdge = colEdge;
+        b.colEdgeUpper = colEdgeUpper;
+        return new SymbolicCholesky(b);
     }
 
     /**
@@ -239,7 +299,7 @@ public final class SymbolicCholesky {
      * entries in its lower triangle, so the difference is the fill.
      */
     public long nonZerosInL() {
-        return (long) n + rowIndex.length;
+        return n + belowDiagonal;
     }
 
     /** Entries of L below the diagonal that are zero in A: {@code nonZerosInL() − n − pairs}. */
@@ -248,14 +308,27 @@ public final class SymbolicCholesky {
     }
 
     /**
+     * Values the numeric factor stores: each supernode's rows × its width, so {@link #nonZerosInL()}
+     * plus the unused upper part of each supernode's diagonal block.
+     */
+    public long storedValues() {
+        return superValueStart[superFirst.length - 1];
+    }
+
+    /** Number of supernodes (runs of columns with one shared row structure). */
+    public int supernodeCount() {
+        return superFirst.length - 1;
+    }
+
+    /**
      * Floating-point operations of one numeric factorization, for benchmarks: Σⱼ cⱼ (cⱼ + 2) with
-     * cⱼ the entries below the diagonal of column j — cⱼ(cⱼ − 1)/2 multiply–adds applying column j
-     * to later rows, plus a division and a multiply–add for each of its entries.
+     * cⱼ the entries below the diagonal of column j — cⱼ(cⱼ + 1)/2 multiply–adds applying column j
+     * to later columns, plus a division per entry and a square root.
      */
     public double factorFlops() {
         double f = 0;
         for (int j = 0; j < n; j++) {
-            double c = columnPointer[j + 1] - columnPointer[j];
+            double c = count[j];
             f += c * (c + 2);
         }
         return f;
@@ -276,19 +349,17 @@ public final class SymbolicCholesky {
 
     /** Entries of each column of L below the diagonal, permuted numbering (a copy). */
     public int[] columnCounts() {
-        int[] c = new int[n];
-        for (int j = 0; j < n; j++) {
-            c[j] = columnPointer[j + 1] - columnPointer[j];
-        }
-        return c;
+        return count.clone();
     }
 
     /**
      * The rows (permuted numbering, ascending) of the entries below the diagonal in column j of L
-     * (a copy).
+     * (a copy): the rows of j's supernode after j.
      */
     public int[] columnPattern(int j) {
-        return Arrays.copyOfRange(rowIndex, columnPointer[j], columnPointer[j + 1]);
+        int s = columnSuper[j];
+        int from = superRowStart[s] + (j - superFirst[s]) + 1;
+        return Arrays.copyOfRange(superRows, from, superRowStart[s + 1]);
     }
 
     // Package-private views for NumericCholesky (never modified).
@@ -297,31 +368,35 @@ public final class SymbolicCholesky {
         return perm;
     }
 
-    int[] inversePerm() {
-        return inversePerm;
+    int[] superFirst() {
+        return superFirst;
     }
 
-    int[] parent() {
-        return parent;
+    int[] columnSuper() {
+        return columnSuper;
     }
 
-    int[] columnPointer() {
-        return columnPointer;
+    int[] superRowStart() {
+        return superRowStart;
     }
 
-    int[] rowIndex() {
-        return rowIndex;
+    int[] superRows() {
+        return superRows;
     }
 
-    int[] rowEdgeStart() {
-        return rowEdgeStart;
+    int[] superValueStart() {
+        return superValueStart;
     }
 
-    int[] rowEdge() {
-        return rowEdge;
+    int[] colEdgeStart() {
+        return colEdgeStart;
     }
 
-    int[] rowEdgeLower() {
-        return rowEdgeLower;
+    int[] colEdge() {
+        return colEdge;
+    }
+
+    int[] colEdgeUpper() {
+        return colEdgeUpper;
     }
 }

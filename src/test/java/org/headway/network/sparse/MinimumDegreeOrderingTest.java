@@ -74,10 +74,14 @@ class MinimumDegreeOrderingTest {
         assertEquals(0, perm[n - 1]);
     }
 
-    @Test
-    void completeGraphHasTheOnlyPossibleFill() {
-        // K_n: every order gives a full lower triangle, n(n+1)/2 entries with the diagonal.
-        int n = 12;
+    /**
+     * K_n: every order gives a full lower triangle, n(n+1)/2 entries with the diagonal, and every
+     * column's structure is the next one's plus itself, so the factor is a single supernode of n²
+     * stored values. n = 300 makes every row dense (299 > 10√300 ≈ 173): all are ordered last.
+     */
+    @ParameterizedTest(name = "K_{0}")
+    @ValueSource(ints = {2, 12, 300})
+    void completeGraphHasTheOnlyPossibleFill(int n) {
         int m = n * (n - 1) / 2;
         int[] a = new int[m];
         int[] b = new int[m];
@@ -91,7 +95,10 @@ class MinimumDegreeOrderingTest {
         SparsePattern p = SparsePattern.fromEdges(n, a, b);
         int[] perm = MinimumDegreeOrdering.order(p);
         assertTrue(SparseTestMatrices.isPermutation(perm, n));
-        assertEquals(n * (n + 1) / 2, SymbolicCholesky.analyse(p, perm).nonZerosInL());
+        SymbolicCholesky s = SymbolicCholesky.analyse(p, perm);
+        assertEquals((long) n * (n + 1) / 2, s.nonZerosInL());
+        assertEquals(1, s.supernodeCount());
+        assertEquals((long) n * n, s.storedValues());
     }
 
     /**
