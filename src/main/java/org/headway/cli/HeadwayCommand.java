@@ -54,7 +54,26 @@ public final class HeadwayCommand implements Runnable {
 
     /** Runs the command line on the given arguments and returns the exit code. */
     public static int run(String... args) {
-        return commandLine().execute(args);
+        // Standard output is buffered (one flush at the end, not one per line: a 10⁵-row table took
+        // seconds line by line) and always UTF-8, whatever the platform charset. A failed write (a full
+        // disk, a closed pipe) is reported and fails the command rather than leaving a silent truncation.
+        PrintWriter out = new PrintWriter(
+                new java.io.BufferedWriter(
+                        new java.io.OutputStreamWriter(
+                                new java.io.FileOutputStream(java.io.FileDescriptor.out),
+                                java.nio.charset.StandardCharsets.UTF_8),
+                        1 << 16),
+                false);
+        CommandLine cl = commandLine();
+        cl.setOut(out);
+        int code = cl.execute(args);
+        out.flush();
+        if (out.checkError()) {
+            System.err.println("headway: writing to standard output failed (a full disk or a closed pipe?); the"
+                    + " output is incomplete");
+            return code == EXIT_OK ? EXIT_FAILED : code;
+        }
+        return code;
     }
 
     private static int handleExecutionException(Exception ex, CommandLine cl, CommandLine.ParseResult parseResult) {
