@@ -19,7 +19,8 @@ class ArchitectureTest {
         "org.headway.pipe..",
         "org.headway.friction..",
         "org.headway.correlation..",
-        "org.headway.system.."
+        "org.headway.system..",
+        "org.headway.network.."
     };
 
     private static JavaClasses classes;
@@ -49,6 +50,19 @@ class ArchitectureTest {
                         "org.dhatim..")
                 .because("the engines must run headless, in tests and batch jobs, and stay independent of"
                         + " the file formats and user interfaces at the edges");
+        rule.check(classes);
+    }
+
+    @Test
+    void networkBuildsOnTheElementModelNotOnTheEdges() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAPackage("org.headway.network..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage("org.headway.project..", "org.headway.cli..", "org.headway.app..", "org.headway.report..")
+                .because("the network solver takes elements and nodes; reading line lists and projects is the"
+                        + " project package's job");
         rule.check(classes);
     }
 

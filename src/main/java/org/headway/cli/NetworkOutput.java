@@ -49,6 +49,7 @@ final class NetworkOutput {
         root.put("title", net.title());
         root.put("fluid", net.context().fluid().fluid());
         root.put("density_kg_per_m3", net.context().fluid().density());
+        root.put("dynamic_viscosity_pa_s", net.context().fluid().dynamicViscosity());
         root.put("friction", net.context().friction().id());
         root.put("barometric_pressure_pa", net.site().pressure());
         root.put("converged", r.converged());
