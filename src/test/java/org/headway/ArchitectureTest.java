@@ -60,7 +60,8 @@ class ArchitectureTest {
                 .resideInAPackage("org.headway.network..")
                 .should()
                 .dependOnClassesThat()
-                .resideInAnyPackage("org.headway.project..", "org.headway.cli..", "org.headway.app..", "org.headway.report..")
+                .resideInAnyPackage(
+                        "org.headway.project..", "org.headway.cli..", "org.headway.app..", "org.headway.report..")
                 .because("the network solver takes elements and nodes; reading line lists and projects is the"
                         + " project package's job");
         rule.check(classes);

@@ -12,6 +12,7 @@ import org.headway.caution.InputException;
 import org.headway.system.Element;
 import org.headway.system.ElementResult;
 import org.headway.system.FlowContext;
+import org.headway.system.FlowControlValve;
 import org.headway.system.Gravity;
 import org.headway.system.PumpElement;
 import org.headway.system.Segment;
@@ -107,6 +108,8 @@ public final class NetworkSolver {
     private static final int OPEN = 0;
     private static final int CLOSED = 1;
     private static final int SHUT = 2;
+    /** A flow-control valve holding its setting. */
+    private static final int ACTIVE = 3;
 
     private final double headTolerance;
     private final int maxIterations;
@@ -236,8 +239,8 @@ public final class NetworkSolver {
             int pairs = 0;
             for (int k = 0; k < nLinks; k++) {
                 Element e = element[k];
-                status[k] = e.isClosed() ? CLOSED : OPEN;
-                flow[k] = status[k] == OPEN ? startFlow(e) : 0;
+                status[k] = e.isClosed() ? CLOSED : e instanceof FlowControlValve ? ACTIVE : OPEN;
+                flow[k] = status[k] == OPEN ? startFlow(e) : status[k] == ACTIVE ? setting(k) : 0;
                 minSlope[k] = slopeFloor(e);
                 zeroFlowLoss[k] = e.blocksReverseFlow() ? e.headLoss(0, ctx) : 0;
                 if (junction[from[k]] >= 0 && junction[to[k]] >= 0) {
@@ -256,6 +259,10 @@ public final class NetworkSolver {
             }
             requireEveryJunctionReachable();
             linear = nJunctions == 0 ? null : solvers.create(nJunctions, pa, pb);
+        }
+
+        double setting(int k) {
+            return ((FlowControlValve) element[k]).setting();
         }
 
         double startFlow(Element e) {
@@ -450,7 +457,9 @@ public final class NetworkSolver {
             double[] g = new double[nLinks];
             double[] e = new double[nLinks];
             for (int k = 0; k < nLinks; k++) {
-                if (status[k] != OPEN) {
+                if (status[k] == ACTIVE) {
+                    flow[k] = setting(k);
+                } else if (status[k] != OPEN) {
                     flow[k] = 0;
                 }
             }
@@ -476,6 +485,18 @@ public final class NetworkSolver {
                     }
                 }
                 for (int k = 0; k < nLinks; k++) {
+                    if (status[k] == ACTIVE) {
+                        // A held flow: it enters continuity as a known flow and couples no heads.
+                        int jfa = junction[from[k]];
+                        int jta = junction[to[k]];
+                        if (jta >= 0) {
+                            rhs[jta] += flow[k];
+                        }
+                        if (jfa >= 0) {
+                            rhs[jfa] -= flow[k];
+                        }
+                        continue;
+                    }
                     if (status[k] != OPEN) {
                         continue;
                     }
@@ -715,6 +736,24 @@ public final class NetworkSolver {
             List<String> changed = new ArrayList<>();
             for (int k = 0; k < nLinks; k++) {
                 Element e = element[k];
+                if (e instanceof FlowControlValve fcv) {
+                    double hf = head[from[k]];
+                    double ht = head[to[k]];
+                    if (status[k] == ACTIVE && !Double.isNaN(hf) && !Double.isNaN(ht)) {
+                        // The heads cannot drive the setting even fully open: the valve opens.
+                        if (hf - ht < e.headLoss(fcv.setting(), ctx) - headTolerance) {
+                            status[k] = OPEN;
+                            changed.add(e.id());
+                        }
+                        continue;
+                    }
+                    if (status[k] == OPEN && flow[k] > fcv.setting() * (1 + 1e-9)) {
+                        status[k] = ACTIVE;
+                        flow[k] = fcv.setting();
+                        changed.add(e.id());
+                        continue;
+                    }
+                }
                 if (status[k] == CLOSED || !e.blocksReverseFlow()) {
                     continue;
                 }
@@ -807,7 +846,12 @@ public final class NetworkSolver {
                 double velocity = Double.NaN;
                 double friction = Double.NaN;
                 Optional<ElementResult> er = Optional.empty();
-                String st = status[k] == OPEN ? "open" : status[k] == CLOSED ? "closed" : "shut";
+                String st = status[k] == OPEN
+                        ? "open"
+                        : status[k] == CLOSED ? "closed" : status[k] == ACTIVE ? "active" : "shut";
+                if (status[k] == ACTIVE) {
+                    er = Optional.of(e.evaluate(q, ctx));
+                }
                 if (status[k] == OPEN && Double.isFinite(q)) {
                     if (e instanceof Segment s) {
                         velocity = q / (Math.PI * s.innerDiameter() * s.innerDiameter() / 4);
@@ -835,7 +879,7 @@ public final class NetworkSolver {
                         e.kind(),
                         NetworkSolver.Run.this.net.nodes().get(from[k]).id(),
                         NetworkSolver.Run.this.net.nodes().get(to[k]).id(),
-                        status[k] == OPEN ? q : 0,
+                        status[k] == OPEN || status[k] == ACTIVE ? q : 0,
                         velocity,
                         loss,
                         friction,

@@ -42,8 +42,8 @@ import org.headway.units.QuantityKind;
  * <p>Node columns: {@code id}, {@code elevation}, {@code demand}, {@code fixed_head}, and optional
  * {@code fixed_pressure}, {@code reference} ({@code yes}/{@code no}), {@code x}, {@code y}, {@code
  * name}. Link columns: {@code id}, {@code from}, {@code to}, {@code kind} ({@code pipe} when blank;
- * {@code valve}, {@code component}, {@code check-valve}, {@code pump}, {@code closed}, {@code
- * open}), {@code length}, {@code diameter}, {@code roughness}, {@code loss_coefficient}, {@code
+ * {@code valve}, {@code component}, {@code check-valve}, {@code flow-control} (with {@code setting}),
+ * {@code pump}, {@code closed}, {@code open}), {@code length}, {@code diameter}, {@code roughness}, {@code loss_coefficient}, {@code
  * hw_c}, {@code material}, {@code size}, {@code schedule}, {@code kv}, {@code cv}, {@code
  * rated_pressure_drop}, {@code rated_flow}, {@code exponent}, {@code pump_curve} ({@code "0 L/s:40
  * m; 5 L/s:36 m; 10 L/s:25 m"}), {@code speed_ratio}, {@code npsh_required}, {@code design_flow},
@@ -78,11 +78,12 @@ public final class LineList {
             "pump_curve",
             "speed_ratio",
             "npsh_required",
-            "design_flow");
+            "design_flow",
+            "setting");
 
     /** Link kinds a line list may name. */
     public static final List<String> LINK_KINDS =
-            List.of("pipe", "valve", "component", "check-valve", "pump", "closed", "open");
+            List.of("pipe", "valve", "component", "check-valve", "flow-control", "pump", "closed", "open");
 
     /** Largest line-list file read (bytes): far beyond any real network's list. */
     public static final long MAX_BYTES = 512L * 1024 * 1024;
@@ -203,6 +204,7 @@ public final class LineList {
             case "pump" -> List.of("pump_curve", "speed_ratio", "npsh_required");
             case "component" -> List.of("rated_pressure_drop", "rated_flow", "exponent");
             case "valve" -> List.of("kv", "cv");
+            case "flow-control" -> List.of("setting", "kv", "cv", "loss_coefficient", "diameter");
             default -> List.of("kv", "cv", "loss_coefficient", "diameter");
         };
         List<String> all = new ArrayList<>(common);
@@ -331,6 +333,13 @@ public final class LineList {
                 values.put("ratedPressureDrop", dp);
                 values.put("ratedFlow", q);
                 putIf(values, "exponent", r.quantity("exponent", QuantityKind.DIMENSIONLESS));
+            }
+            case "flow-control" -> {
+                String setting = r.flow("setting");
+                if (setting.isEmpty()) {
+                    throw r.error("setting", "a flow-control valve needs the flow it holds");
+                }
+                values.put("setting", setting);
             }
             case "closed", "open" -> {
                 deviceKind = "isolation";

@@ -251,7 +251,8 @@ public record Project(
                 "component", List.of("ratedPressureDrop", "ratedFlow", "exponent"),
                 "reducer", List.of("inletDiameter", "outletDiameter", "includedAngleDegrees"),
                 "check-valve", List.of("lossCoefficient", "diameter", "kv", "cv"),
-                "isolation", List.of("status", "lossCoefficient", "diameter", "kv", "cv"));
+                "isolation", List.of("status", "lossCoefficient", "diameter", "kv", "cv"),
+                "flow-control", List.of("setting", "lossCoefficient", "diameter", "kv", "cv"));
 
         public DeviceSpec {
             name = name == null ? "" : name;

@@ -25,6 +25,7 @@ import org.headway.system.Element;
 import org.headway.system.EndCondition;
 import org.headway.system.FittingUse;
 import org.headway.system.FlowCoefficientValve;
+import org.headway.system.FlowControlValve;
 import org.headway.system.GivenLossCoefficient;
 import org.headway.system.Gravity;
 import org.headway.system.IsolationValve;
@@ -674,6 +675,14 @@ public final class ProjectResolver {
                     throw new InputException("status", "expected open or closed, got \"" + status + "\"");
                 }
                 return new IsolationValve(d.id(), d.name(), status.equals("open"), localLoss(d, false));
+            }
+            case "flow-control" -> {
+                if (d.value("setting").isEmpty()) {
+                    throw new InputException("setting", "missing; a flow-control valve needs the flow it holds");
+                }
+                double setting = Quantities.parseFlow(d.value("setting"), "setting")
+                        .volumetric(fluid == null ? Double.NaN : fluid.density(), "setting");
+                return new FlowControlValve(d.id(), d.name(), setting, localLoss(d, true));
             }
             default -> throw new InputException("kind", "unknown element kind \"" + d.kind() + "\"");
         }

@@ -19,7 +19,14 @@ import org.headway.caution.InputException;
  * part of a 2-K or 3-K fitting), zero where the law is quadratic.
  */
 public sealed interface Element
-        permits Segment, FlowCoefficientValve, RatedComponent, DiameterChange, CheckValve, IsolationValve, PumpElement {
+        permits Segment,
+                FlowCoefficientValve,
+                RatedComponent,
+                DiameterChange,
+                CheckValve,
+                IsolationValve,
+                FlowControlValve,
+                PumpElement {
 
     /** Stable id, unique in its system; results are keyed by it. */
     String id();

@@ -136,6 +136,9 @@ public final class HeadLossCalculator {
                 minor += loss;
                 componentLoss += loss;
                 cautions.addAll(elementResult.cautions());
+                if (element instanceof FlowControlValve fcv) {
+                    cautions.add(fcv.seriesNote());
+                }
                 if (element instanceof DiameterChange change) {
                     inletVelocityHead = velocityHead(flow, change.inletDiameter());
                     outletVelocityHead = velocityHead(flow, change.outletDiameter());
