@@ -12,9 +12,9 @@ mvn -B -q -DskipTests package
 sizes=("${@:-32 100 317}")
 for k in ${sizes[@]}; do
   python3 src/jmh/python/network_gen.py "$k" "$out/g$k" > /dev/null
-  java -jar target/headway.jar network --nodes "$out/g$k-nodes.csv" --links "$out/g$k-links.csv" \
-    --friction colebrook --format json > "$out/g$k-hw.json" 2> /dev/null || true
-  props=$(python3 -c "import json,sys; d=json.load(open(sys.argv[1])); print(d['density_kg_per_m3'], d['dynamic_viscosity_pa_s'])" "$out/g$k-hw.json")
+  # The peer uses the same water state as Headway's default (15 °C), read from Headway itself.
+  java -jar target/headway.jar fluid water --temperature "15 degC" --format json > "$out/water.json"
+  props=$(python3 -c "import json,sys; d=json.load(open(sys.argv[1])); print(d['density_kg_per_m3'], d['dynamic_viscosity_pa_s'])" "$out/water.json")
   /usr/bin/time -f "%e %M" -o "$out/peer-time.txt" python3 src/jmh/python/network_peer.py \
     "$out/g$k-nodes.csv" "$out/g$k-links.csv" "$out/g$k-peer.csv" $props 2> "$out/peer-log.txt"
   /usr/bin/time -f "%e %M" -o "$out/hw-time.txt" java -Xmx2g -jar target/headway.jar network \

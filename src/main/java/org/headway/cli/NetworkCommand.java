@@ -146,6 +146,9 @@ public final class NetworkCommand implements Callable<Integer> {
             ProjectFile.save(project, save);
         }
         long t2 = System.nanoTime();
+        // The typed line list is no longer needed: let it go before the solve needs the heap.
+        spec = null;
+        project = null;
         int code = solveAndPrint(spec(), network, format, system, output, force, timings);
         if (timings) {
             spec().commandLine()

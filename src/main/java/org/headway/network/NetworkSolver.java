@@ -1,12 +1,10 @@
 package org.headway.network;
 
-import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.function.IntFunction;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 import org.headway.system.Element;
@@ -356,47 +354,59 @@ public final class NetworkSolver {
             }
         }
 
-        /** Nodes reachable from a fixed-head node through links passing the test. */
-        boolean[] reach(IntFunction<Boolean> usable) {
-            List<List<Integer>> adjacency = adjacency();
+        /** Nodes reachable from a fixed-head node through links passing the test (breadth first, int arrays). */
+        boolean[] reach(java.util.function.IntPredicate usable) {
+            buildAdjacency();
             boolean[] reached = new boolean[nNodes];
-            ArrayDeque<Integer> queue = new ArrayDeque<>();
+            int[] queue = new int[nNodes];
+            int head = 0;
+            int tail = 0;
             for (int i = 0; i < nNodes; i++) {
                 if (junction[i] < 0) {
                     reached[i] = true;
-                    queue.add(i);
+                    queue[tail++] = i;
                 }
             }
-            while (!queue.isEmpty()) {
-                int n = queue.poll();
-                for (int k : adjacency.get(n)) {
-                    if (!usable.apply(k)) {
+            while (head < tail) {
+                int n = queue[head++];
+                for (int p = adjacencyStart[n]; p < adjacencyStart[n + 1]; p++) {
+                    int k = adjacencyLink[p];
+                    if (!usable.test(k)) {
                         continue;
                     }
                     int other = from[k] == n ? to[k] : from[k];
                     if (!reached[other]) {
                         reached[other] = true;
-                        queue.add(other);
+                        queue[tail++] = other;
                     }
                 }
             }
             return reached;
         }
 
-        List<List<Integer>> adjacencyCache;
+        /** Links at each node in compressed rows: node n's links are adjacencyLink[start[n] .. start[n+1]). */
+        int[] adjacencyStart;
 
-        List<List<Integer>> adjacency() {
-            if (adjacencyCache == null) {
-                adjacencyCache = new ArrayList<>(nNodes);
-                for (int i = 0; i < nNodes; i++) {
-                    adjacencyCache.add(new ArrayList<>(3));
-                }
-                for (int k = 0; k < nLinks; k++) {
-                    adjacencyCache.get(from[k]).add(k);
-                    adjacencyCache.get(to[k]).add(k);
-                }
+        int[] adjacencyLink;
+
+        void buildAdjacency() {
+            if (adjacencyStart != null) {
+                return;
             }
-            return adjacencyCache;
+            adjacencyStart = new int[nNodes + 1];
+            for (int k = 0; k < nLinks; k++) {
+                adjacencyStart[from[k] + 1]++;
+                adjacencyStart[to[k] + 1]++;
+            }
+            for (int i = 0; i < nNodes; i++) {
+                adjacencyStart[i + 1] += adjacencyStart[i];
+            }
+            adjacencyLink = new int[2 * nLinks];
+            int[] fill = java.util.Arrays.copyOf(adjacencyStart, nNodes);
+            for (int k = 0; k < nLinks; k++) {
+                adjacencyLink[fill[from[k]]++] = k;
+                adjacencyLink[fill[to[k]]++] = k;
+            }
         }
 
         NetworkResult solve() {
