@@ -8,7 +8,6 @@ import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.headway.caution.InputException;
 import org.headway.network.Network;
@@ -114,22 +113,7 @@ public final class NetworkCommand implements Callable<Integer> {
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
         Project.NetworkSpec spec = LineList.read(nodes, links, catalog, friction.equals("hazen-williams"));
-        Project project = new Project(
-                title,
-                Project.TitleBlock.EMPTY,
-                new Project.FluidSpec(fluid, temperature, "", "", "", ""),
-                "",
-                "",
-                friction,
-                java.util.List.of(),
-                Project.EndsSpec.OPEN,
-                Project.LimitsSpec.NONE,
-                Optional.empty(),
-                Optional.empty(),
-                Project.SiteSpec.SEA_LEVEL,
-                Project.PressureLimitsSpec.NONE,
-                "",
-                Optional.of(spec));
+        Project project = Project.network(title, fluid, temperature, friction, spec);
         long t1 = System.nanoTime();
         Network network;
         try {

@@ -83,14 +83,7 @@ final class NetworkOutput {
             o.put("status", l.status());
             l.element().ifPresent(e -> o.put("law", e.law()));
         }
-        ArrayNode cautions = root.putArray("cautions");
-        for (Caution c : r.cautions()) {
-            ObjectNode n = cautions.addObject();
-            n.put("code", c.code());
-            n.put("severity", c.severity().name().toLowerCase(Locale.ROOT));
-            n.put("message", c.message());
-            n.put("basis", c.basis());
-        }
+        RunJson.putCautions(root, r.cautions());
         try {
             return MAPPER.writeValueAsString(root);
         } catch (JsonProcessingException e) {

@@ -24,6 +24,18 @@ final class RunJson {
 
     private RunJson() {}
 
+    /** The {@code cautions} array every JSON output carries: code, severity, message, basis. */
+    static void putCautions(ObjectNode root, List<Caution> list) {
+        ArrayNode cautions = root.putArray("cautions");
+        for (Caution c : list) {
+            ObjectNode n = cautions.addObject();
+            n.put("code", c.code());
+            n.put("severity", c.severity().name().toLowerCase(Locale.ROOT));
+            n.put("message", c.message());
+            n.put("basis", c.basis());
+        }
+    }
+
     static String toJson(
             PipeRun run,
             RunResult result,
@@ -141,14 +153,7 @@ final class RunJson {
                 check.reasons().forEach(reasons::add);
             }
         }
-        ArrayNode cautions = root.putArray("cautions");
-        for (Caution c : result.cautions()) {
-            ObjectNode n = cautions.addObject();
-            n.put("code", c.code());
-            n.put("severity", c.severity().name().toLowerCase(Locale.ROOT));
-            n.put("message", c.message());
-            n.put("basis", c.basis());
-        }
+        putCautions(root, result.cautions());
         try {
             return MAPPER.writeValueAsString(root);
         } catch (JsonProcessingException e) {

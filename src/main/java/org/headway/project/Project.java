@@ -88,6 +88,29 @@ public record Project(
                 Optional.empty());
     }
 
+    /**
+     * A network project as a line list gives it: a title, the fluid at a temperature, the default
+     * friction method and the nodes and links; everything else at its default.
+     */
+    public static Project network(String title, String fluid, String temperature, String friction, NetworkSpec net) {
+        return new Project(
+                title,
+                TitleBlock.EMPTY,
+                new FluidSpec(fluid, temperature, "", "", "", ""),
+                "",
+                "",
+                friction,
+                List.of(),
+                EndsSpec.OPEN,
+                LimitsSpec.NONE,
+                Optional.empty(),
+                Optional.empty(),
+                SiteSpec.SEA_LEVEL,
+                PressureLimitsSpec.NONE,
+                "",
+                Optional.of(net));
+    }
+
     /** Whether this project holds a network (nodes and links) rather than a series run. */
     public boolean isNetwork() {
         return network.isPresent();

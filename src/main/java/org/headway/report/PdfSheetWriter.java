@@ -283,7 +283,7 @@ public final class PdfSheetWriter {
                     "Check"
                 },
                 pressures,
-                new float[] {0.13f, 0.1f, 0.11f, 0.12f, 0.12f, 0.14f, 0.15f, 0.13f},
+                new float[] {0.17f, 0.1f, 0.11f, 0.12f, 0.12f, 0.13f, 0.15f, 0.10f},
                 SMALL);
         List<String[]> totals = new ArrayList<>();
         totals.add(row("Friction loss Σh_f", q(r.totals().frictionHeadLoss(), QuantityKind.HEAD, u), ""));

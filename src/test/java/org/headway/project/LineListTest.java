@@ -5,7 +5,6 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
-import java.util.Optional;
 import java.util.Random;
 import org.headway.caution.InputException;
 import org.headway.network.Network;
@@ -36,22 +35,7 @@ class LineListTest {
     }
 
     private static Network resolve(Project.NetworkSpec spec) {
-        Project p = new Project(
-                "",
-                Project.TitleBlock.EMPTY,
-                new Project.FluidSpec("water", "15 degC", "", "", "", ""),
-                "",
-                "",
-                "auto",
-                java.util.List.of(),
-                Project.EndsSpec.OPEN,
-                Project.LimitsSpec.NONE,
-                Optional.empty(),
-                Optional.empty(),
-                Project.SiteSpec.SEA_LEVEL,
-                Project.PressureLimitsSpec.NONE,
-                "",
-                Optional.of(spec));
+        Project p = Project.network("", "water", "15 degC", "auto", spec);
         return ProjectResolver.resolveNetwork(p, Catalog.bundled(), Path.of("."));
     }
 
@@ -74,22 +58,7 @@ class LineListTest {
     @Test
     void projectRoundTripKeepsTheNetwork() {
         Project.NetworkSpec spec = parse(NODES, LINKS);
-        Project p = new Project(
-                "t",
-                Project.TitleBlock.EMPTY,
-                new Project.FluidSpec("water", "15 degC", "", "", "", ""),
-                "",
-                "",
-                "auto",
-                java.util.List.of(),
-                Project.EndsSpec.OPEN,
-                Project.LimitsSpec.NONE,
-                Optional.empty(),
-                Optional.empty(),
-                Project.SiteSpec.SEA_LEVEL,
-                Project.PressureLimitsSpec.NONE,
-                "",
-                Optional.of(spec));
+        Project p = Project.network("t", "water", "15 degC", "auto", spec);
         Project again = ProjectFile.parse(ProjectFile.toJson(p));
         assertEquals(p.network(), again.network());
     }
