@@ -35,6 +35,11 @@ public final class HeadwayCommand implements Runnable {
     public static final int EXIT_FAILED = 1;
     /** Exit code for bad usage or bad input. */
     public static final int EXIT_BAD_INPUT = 2;
+    /**
+     * Exit code of {@code solve --mode flow} when no forward flow is possible: the delivery's head is
+     * at or above what the source and the available head give. The result is still printed.
+     */
+    public static final int EXIT_NO_FLOW = 3;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

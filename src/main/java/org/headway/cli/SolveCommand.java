@@ -30,7 +30,8 @@ import picocli.CommandLine.Spec;
         description = {
             "Solve a pipe run: head loss, flow for a head, or size for limits.",
             "--mode headloss (default): losses and total head at the design flow.",
-            "--mode flow: the flow an available head drives through the run.",
+            "--mode flow: the flow an available head drives through the run (exit status 3 when no",
+            "forward flow is possible; the result is still printed).",
             "--mode size: the smallest catalog size meeting the project's limits.",
             "Results are estimates for design review against local codes by a qualified engineer."
         })
@@ -183,6 +184,9 @@ public final class SolveCommand implements Callable<Integer> {
                         out, run, result, system, mode.name(), modeNote, curvePoints, operating, band, sizeChecks);
         }
         out.flush();
+        if (flowSolution != null && flowSolution.outcome() != FlowSolver.Outcome.FLOWING) {
+            return HeadwayCommand.EXIT_NO_FLOW;
+        }
         return HeadwayCommand.EXIT_OK;
     }
 }

@@ -87,6 +87,21 @@ class PipeRunCommandsTest {
     }
 
     @Test
+    void flowModeWithNoForwardFlowHasItsOwnExitStatus() throws Exception {
+        var run = ProjectResolver.resolve(ProjectFile.load(project), Catalog.bundled(), dir)
+                .run();
+        // Less head than the static lift at zero flow: nothing can flow forward (energy balance).
+        double head = HeadLossCalculator.totalHead(run, 0.0) - 5;
+        assertEquals(
+                HeadwayCommand.EXIT_NO_FLOW,
+                run("solve", project.toString(), "--mode", "flow", "--available-head", head + " m", "--format", "json"),
+                err::toString);
+        JsonNode json = new ObjectMapper().readTree(out.toString());
+        assertEquals(0, json.get("flow_m3_per_s").asDouble(), 0);
+        assertEquals(FlowSolver.Outcome.REVERSE, FlowSolver.solve(run, head).outcome());
+    }
+
+    @Test
     void solveSizeModeListsCandidates() {
         assertEquals(0, run("solve", project.toString(), "--mode", "size"), err::toString);
         String text = out.toString();

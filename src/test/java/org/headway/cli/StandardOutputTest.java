@@ -21,8 +21,8 @@ class StandardOutputTest {
 
     private static ProcessBuilder headway(String... args) {
         Path java = Path.of(System.getProperty("java.home"), "bin", "java");
-        List<String> command = new java.util.ArrayList<>(List.of(
-                java.toString(), "-cp", System.getProperty("java.class.path"), "org.headway.Launcher"));
+        List<String> command = new java.util.ArrayList<>(
+                List.of(java.toString(), "-cp", System.getProperty("java.class.path"), "org.headway.Launcher"));
         command.addAll(List.of(args));
         ProcessBuilder pb = new ProcessBuilder(command);
         pb.environment().put("LC_ALL", "C");
