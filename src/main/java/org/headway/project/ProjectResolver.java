@@ -438,7 +438,12 @@ public final class ProjectResolver {
             Path file = fittedFile(id);
             return new org.headway.correlation.FittedFrictionCorrelation(stem(file), loadFitted(file));
         }
-        return FrictionMethods.byId(id);
+        try {
+            return FrictionMethods.byId(id);
+        } catch (InputException e) {
+            // The project key is "friction" itself; the library's own field name would read as a sub-key.
+            throw new InputException("", e.problem() + " (or hazen-williams, or fitted:FILE)");
+        }
     }
 
     /**

@@ -270,6 +270,14 @@ public final class Quantities {
         Objects.requireNonNull(kind, "kind");
         Typed typed = split(text, kind.dimensionName(), example(kind), where);
         if (typed.unitText.isEmpty()) {
+            if (kind == QuantityKind.TEMPERATURE) {
+                // "5" is 5 °C to most people and 5 K to the SI rule for bare numbers: too far apart to guess.
+                throw new InputException(
+                        where,
+                        "a temperature needs its unit, got \"" + abbreviate(typed.whole) + "\" (write e.g. "
+                                + typed.numberText + " degC, " + typed.numberText + " degF or " + typed.numberText
+                                + " K)");
+            }
             return typed.number;
         }
         Marked marked = marked(typed.unitText);

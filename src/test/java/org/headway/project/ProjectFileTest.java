@@ -97,7 +97,10 @@ class ProjectFileTest {
                 Arguments.of("unknown fluid", VALID.replace("\"water\"", "\"lemonade\""), "fluid.name"),
                 Arguments.of("frozen water", VALID.replace("\"20 degC\"", "\"-10 degC\""), "fluid"),
                 Arguments.of("temperature as a length", VALID.replace("\"20 degC\"", "\"20 m\""), "fluid.temperature"),
-                Arguments.of("unknown friction method", VALID.replace("\"colebrook\"", "\"guesswork\""), "friction"),
+                Arguments.of(
+                        "unknown friction method",
+                        VALID.replace("\"colebrook\"", "\"guesswork\""),
+                        "friction: unknown friction method"),
                 Arguments.of(
                         "negative length",
                         VALID.replace("\"120 m\"", "\"-2 m\""),

@@ -314,4 +314,17 @@ class UnitsEngineersTypeTest {
         close(1e-6, Quantities.parse("1 mm2/s", QuantityKind.KINEMATIC_VISCOSITY, "viscosity"));
         close(1e-6, Quantities.parse("1 (mm)^2/s", QuantityKind.KINEMATIC_VISCOSITY, "viscosity"));
     }
+
+    @org.junit.jupiter.api.Test
+    void aTemperatureWithoutItsUnitIsRefusedNotReadAsKelvin() {
+        // "5" is 5 °C to a reader and 5 K by the bare-number-is-SI rule: common practice, no source.
+        org.headway.caution.InputException e = org.junit.jupiter.api.Assertions.assertThrows(
+                org.headway.caution.InputException.class,
+                () -> Quantities.parse("5", QuantityKind.TEMPERATURE, "--temperature"));
+        org.junit.jupiter.api.Assertions.assertEquals(
+                "--temperature: a temperature needs its unit, got \"5\" (write e.g. 5 degC, 5 degF or 5 K)",
+                e.getMessage());
+        org.junit.jupiter.api.Assertions.assertEquals(
+                278.15, Quantities.parse("5 degC", QuantityKind.TEMPERATURE, "t"), 1e-12);
+    }
 }
