@@ -29,11 +29,13 @@ import picocli.CommandLine.Spec;
         name = "network",
         mixinStandardHelpOptions = true,
         description = {
-            "Solve a branched or looped network from its line list: heads and pressures at the nodes,",
-            "flows and losses in the links (global gradient algorithm, Todini & Pilati 1988).",
-            "Column names may carry units in brackets, e.g. \"diameter [mm]\", \"demand [L/s]\"; without",
-            "them cells are SI or carry their own unit. Exit status 1 when the solve does not converge.",
-            "Results are estimates for design review against local codes by a qualified engineer."
+            "Solve a branched or looped network from its line list: heads and",
+            "pressures at the nodes, flows and losses in the links (global gradient",
+            "algorithm, Todini & Pilati 1988). Column names may carry units in",
+            "brackets, e.g. \"diameter [mm]\"; without them cells are SI or carry",
+            "their own unit. Exit status 1 when the solve does not converge.",
+            "Results are estimates for design review against local codes by a",
+            "qualified engineer."
         })
 public final class NetworkCommand implements Callable<Integer> {
 
