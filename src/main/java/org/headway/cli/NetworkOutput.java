@@ -184,7 +184,7 @@ final class NetworkOutput {
         out.println();
         out.printf(
                 Locale.ROOT,
-                "%-16s %-11s %-12s %-12s %11s %9s %11s %9s  %s%n",
+                "%-16s %-19s %-12s %-12s %11s %9s %11s %9s  %s%n",
                 "link",
                 "kind",
                 "from",
@@ -197,7 +197,7 @@ final class NetworkOutput {
         for (NetworkResult.LinkResult l : r.links()) {
             out.printf(
                     Locale.ROOT,
-                    "%-16s %-11s %-12s %-12s %11s %9s %11s %9s  %s%n",
+                    "%-16s %-19s %-12s %-12s %11s %9s %11s %9s  %s%n",
                     clip(l.id(), 16),
                     l.kind(),
                     clip(l.from(), 12),

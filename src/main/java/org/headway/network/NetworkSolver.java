@@ -12,6 +12,7 @@ import org.headway.system.ElementResult;
 import org.headway.system.FlowContext;
 import org.headway.system.FlowControlValve;
 import org.headway.system.Gravity;
+import org.headway.system.PressureControlValve;
 import org.headway.system.PumpElement;
 import org.headway.system.Segment;
 
@@ -100,6 +101,9 @@ public final class NetworkSolver {
      */
     public static final double SLOPE_FLOOR = 1e-10;
 
+    /** Weight of the pinning equation of an active pressure-control valve, relative to the largest diagonal. */
+    static final double PIN_WEIGHT = 1e10;
+
     /** Status rounds allowed. */
     public static final int MAX_STATUS_ROUNDS = 20;
 
@@ -174,6 +178,11 @@ public final class NetworkSolver {
         final int[] status;
         final double[] minSlope;
         final double[] zeroFlowLoss;
+        /** For a pressure-control valve, the node whose head it holds; −1 for other links. */
+        final int[] pinNode;
+        /** The head a pressure-control valve holds at its node (m). */
+        final double[] pinHead;
+
         final double totalDemand;
         final SpdSolver linear;
         final List<Caution> cautions = new ArrayList<>();
@@ -233,12 +242,41 @@ public final class NetworkSolver {
             flow = new double[nLinks];
             minSlope = new double[nLinks];
             zeroFlowLoss = new double[nLinks];
+            pinNode = new int[nLinks];
+            pinHead = new double[nLinks];
+            java.util.Arrays.fill(pinNode, -1);
             slot = new int[nLinks];
             int pairs = 0;
             for (int k = 0; k < nLinks; k++) {
                 Element e = element[k];
-                status[k] = e.isClosed() ? CLOSED : e instanceof FlowControlValve ? ACTIVE : OPEN;
-                flow[k] = status[k] == OPEN ? startFlow(e) : status[k] == ACTIVE ? setting(k) : 0;
+                status[k] = e.isClosed()
+                        ? CLOSED
+                        : e instanceof FlowControlValve || e instanceof PressureControlValve ? ACTIVE : OPEN;
+                if (e instanceof PressureControlValve pcv) {
+                    int p = pcv.reducing() ? to[k] : from[k];
+                    if (junction[p] < 0) {
+                        throw new InputException(
+                                e.id(),
+                                "a " + e.kind() + " valve holds the pressure at node "
+                                        + network.nodes().get(p).id()
+                                        + ", which already has a fixed head; put a junction there");
+                    }
+                    for (int other = 0; other < k; other++) {
+                        if (pinNode[other] == p) {
+                            throw new InputException(
+                                    e.id(),
+                                    "valves " + element[other].id() + " and " + e.id()
+                                            + " both hold the pressure at node "
+                                            + network.nodes().get(p).id() + "; only one may");
+                        }
+                    }
+                    pinNode[k] = p;
+                    Node node = network.nodes().get(p);
+                    pinHead[k] = node.elevation() + pcv.setting() / (ctx.fluid().density() * Gravity.STANDARD);
+                }
+                flow[k] = status[k] == OPEN || e instanceof PressureControlValve
+                        ? startFlow(e)
+                        : status[k] == ACTIVE ? setting(k) : 0;
                 minSlope[k] = slopeFloor(e);
                 zeroFlowLoss[k] = e.blocksReverseFlow() ? e.headLoss(0, ctx) : 0;
                 if (junction[from[k]] >= 0 && junction[to[k]] >= 0) {
@@ -356,13 +394,17 @@ public final class NetworkSolver {
 
         /** Nodes reachable from a fixed-head node through links passing the test (breadth first, int arrays). */
         boolean[] reach(java.util.function.IntPredicate usable) {
+            return reach(usable, new boolean[nNodes]);
+        }
+
+        boolean[] reach(java.util.function.IntPredicate usable, boolean[] seed) {
             buildAdjacency();
             boolean[] reached = new boolean[nNodes];
             int[] queue = new int[nNodes];
             int head = 0;
             int tail = 0;
             for (int i = 0; i < nNodes; i++) {
-                if (junction[i] < 0) {
+                if (junction[i] < 0 || seed[i]) {
                     reached[i] = true;
                     queue[tail++] = i;
                 }
@@ -454,7 +496,13 @@ public final class NetworkSolver {
 
         /** Junctions connected to a fixed head through links that are open now. */
         boolean[] liveNodes() {
-            return reach(k -> status[k] == OPEN);
+            boolean[] seed = new boolean[nNodes];
+            for (int k = 0; k < nLinks; k++) {
+                if (status[k] == ACTIVE && pinNode[k] >= 0) {
+                    seed[pinNode[k]] = true;
+                }
+            }
+            return reach(k -> status[k] == OPEN, seed);
         }
 
         /** Newton iterations with the statuses as they are; true when converged. */
@@ -467,9 +515,9 @@ public final class NetworkSolver {
             double[] g = new double[nLinks];
             double[] e = new double[nLinks];
             for (int k = 0; k < nLinks; k++) {
-                if (status[k] == ACTIVE) {
+                if (status[k] == ACTIVE && pinNode[k] < 0) {
                     flow[k] = setting(k);
-                } else if (status[k] != OPEN) {
+                } else if (status[k] != OPEN && status[k] != ACTIVE) {
                     flow[k] = 0;
                 }
             }
@@ -527,6 +575,20 @@ public final class NetworkSolver {
                         off[slot[k]] -= w;
                     }
                 }
+                double largest = 1;
+                for (int j = 0; j < nj; j++) {
+                    largest = Math.max(largest, diag[j]);
+                }
+                for (int k = 0; k < nLinks; k++) {
+                    if (status[k] == ACTIVE && pinNode[k] >= 0) {
+                        // The held head replaces continuity at the controlled node ("big number" pinning);
+                        // the valve's flow follows from that node's continuity after the step.
+                        int jp = junction[pinNode[k]];
+                        double big = PIN_WEIGHT * largest;
+                        diag[jp] += big;
+                        rhs[jp] += big * (pinHead[k] - head[pinNode[k]]);
+                    }
+                }
                 for (int i = 0; i < nNodes; i++) {
                     int j = junction[i];
                     if (j >= 0 && !live[i]) {
@@ -576,6 +638,7 @@ public final class NetworkSolver {
                             flow[k] = oldFlow[k] + alpha * dQ[k];
                         }
                     }
+                    assignControlledFlows();
                     newEnergy = energyResidual(h, e, live);
                     double merit = merit(e, live, weight);
                     if (merit <= (1 - 1e-4 * alpha) * merit0 || halving == MAX_HALVINGS) {
@@ -592,6 +655,29 @@ public final class NetworkSolver {
                 }
                 lastHeadChange = maxDh;
                 energy = newEnergy;
+                // A held head that makes its valve run backwards cannot be the answer: shut it at once
+                // rather than iterate towards a state the status rules would reject (EPANET checks its
+                // control valves during the iterations too, Rossman 2000 Appendix D).
+                boolean shut = false;
+                for (int k = 0; k < nLinks; k++) {
+                    if (status[k] == ACTIVE && pinNode[k] >= 0 && flow[k] < 0) {
+                        status[k] = SHUT;
+                        flow[k] = 0;
+                        shut = true;
+                    }
+                }
+                if (shut) {
+                    boolean[] now = liveNodes();
+                    System.arraycopy(now, 0, live, 0, nNodes);
+                    for (int i = 0; i < nNodes; i++) {
+                        if (junction[i] >= 0 && live[i] && Double.isNaN(head[i])) {
+                            head[i] = nearestFixedHead();
+                        }
+                    }
+                    energy = energyResidual(h, e, live);
+                    bestEnergy = Double.POSITIVE_INFINITY;
+                    continue;
+                }
                 if (!Double.isFinite(energy) || !Double.isFinite(maxDh)) {
                     restore(bestHead, bestFlow);
                     cautions.add(Caution.serious(
@@ -626,6 +712,32 @@ public final class NetworkSolver {
                             energy),
                     "solver"));
             return false;
+        }
+
+        /** An active pressure-control valve carries what its controlled node's continuity leaves. */
+        void assignControlledFlows() {
+            for (int k = 0; k < nLinks; k++) {
+                if (status[k] != ACTIVE || pinNode[k] < 0) {
+                    continue;
+                }
+                int p = pinNode[k];
+                double balance = -demand[p];
+                int start = adjacencyStart[p];
+                for (int a = start; a < adjacencyStart[p + 1]; a++) {
+                    int l = adjacencyLink[a];
+                    if (l == k) {
+                        continue;
+                    }
+                    if (to[l] == p) {
+                        balance += flow[l];
+                    }
+                    if (from[l] == p) {
+                        balance -= flow[l];
+                    }
+                }
+                // Reducing valve: it flows into p and must make up the deficit; sustaining: it drains the surplus.
+                flow[k] = to[k] == p ? -balance : balance;
+            }
         }
 
         /** Mean slope of the open links at each node (m per m³/s), 0 where none. */
@@ -746,6 +858,13 @@ public final class NetworkSolver {
             List<String> changed = new ArrayList<>();
             for (int k = 0; k < nLinks; k++) {
                 Element e = element[k];
+                if (e instanceof PressureControlValve pcv) {
+                    String change = pressureControlStatus(k, pcv);
+                    if (change != null) {
+                        changed.add(change);
+                    }
+                    continue;
+                }
                 if (e instanceof FlowControlValve fcv) {
                     double hf = head[from[k]];
                     double ht = head[to[k]];
@@ -787,6 +906,47 @@ public final class NetworkSolver {
                 }
             }
             return changed;
+        }
+
+        /**
+         * The pressure-control status rules (Rossman 2000, Appendix D): returns the id when the status
+         * changed. H_f, H_t are the heads at the valve's ends, H_s the held head.
+         */
+        String pressureControlStatus(int k, PressureControlValve pcv) {
+            double hf = head[from[k]];
+            double ht = head[to[k]];
+            double hs = pinHead[k];
+            double tol = headTolerance;
+            if (Double.isNaN(hf) || Double.isNaN(ht)) {
+                return null;
+            }
+            int before = status[k];
+            int after = before;
+            if (before == ACTIVE) {
+                if (flow[k] < 0) {
+                    after = SHUT;
+                } else if (pcv.reducing() ? hf < hs - tol : ht > hs + tol) {
+                    after = OPEN;
+                }
+            } else if (before == OPEN) {
+                if (flow[k] < 0) {
+                    after = SHUT;
+                } else if (pcv.reducing() ? ht > hs + tol : hf < hs - tol) {
+                    after = ACTIVE;
+                }
+            } else if (before == SHUT) {
+                if (hf > hs + tol && ht < hs - tol) {
+                    after = ACTIVE;
+                } else if (hf > ht + tol && (pcv.reducing() ? hf < hs : ht > hs)) {
+                    after = OPEN;
+                }
+            }
+            if (after == before) {
+                return null;
+            }
+            status[k] = after;
+            flow[k] = after == OPEN ? ZERO_FLOW : after == SHUT ? 0 : Math.max(flow[k], 0);
+            return pcv.id();
         }
 
         NetworkResult result(boolean converged, boolean[] live) {
@@ -860,7 +1020,7 @@ public final class NetworkSolver {
                         ? "open"
                         : status[k] == CLOSED ? "closed" : status[k] == ACTIVE ? "active" : "shut";
                 if (status[k] == ACTIVE) {
-                    er = Optional.of(e.evaluate(q, ctx));
+                    er = Optional.of(e.evaluate(Math.max(q, 0), ctx));
                 }
                 if (status[k] == OPEN && Double.isFinite(q)) {
                     if (e instanceof Segment s) {

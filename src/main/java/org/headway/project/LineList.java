@@ -42,7 +42,9 @@ import org.headway.units.QuantityKind;
  * <p>Node columns: {@code id}, {@code elevation}, {@code demand}, {@code fixed_head}, and optional
  * {@code fixed_pressure}, {@code reference} ({@code yes}/{@code no}), {@code x}, {@code y}, {@code
  * name}. Link columns: {@code id}, {@code from}, {@code to}, {@code kind} ({@code pipe} when blank;
- * {@code valve}, {@code component}, {@code check-valve}, {@code flow-control} (with {@code setting}),
+ * {@code valve}, {@code component}, {@code check-valve}, {@code flow-control} (with {@code setting}
+ * a flow), {@code pressure-reducing} and {@code pressure-sustaining} (with {@code setting} a gauge
+ * pressure at the outlet or inlet node),
  * {@code pump}, {@code closed}, {@code open}), {@code length}, {@code diameter}, {@code roughness}, {@code loss_coefficient}, {@code
  * hw_c}, {@code material}, {@code size}, {@code schedule}, {@code kv}, {@code cv}, {@code
  * rated_pressure_drop}, {@code rated_flow}, {@code exponent}, {@code pump_curve} ({@code "0 L/s:40
@@ -82,8 +84,17 @@ public final class LineList {
             "setting");
 
     /** Link kinds a line list may name. */
-    public static final List<String> LINK_KINDS =
-            List.of("pipe", "valve", "component", "check-valve", "flow-control", "pump", "closed", "open");
+    public static final List<String> LINK_KINDS = List.of(
+            "pipe",
+            "valve",
+            "component",
+            "check-valve",
+            "flow-control",
+            "pressure-reducing",
+            "pressure-sustaining",
+            "pump",
+            "closed",
+            "open");
 
     /** Largest line-list file read (bytes): far beyond any real network's list. */
     public static final long MAX_BYTES = 512L * 1024 * 1024;
@@ -204,7 +215,8 @@ public final class LineList {
             case "pump" -> List.of("pump_curve", "speed_ratio", "npsh_required");
             case "component" -> List.of("rated_pressure_drop", "rated_flow", "exponent");
             case "valve" -> List.of("kv", "cv");
-            case "flow-control" -> List.of("setting", "kv", "cv", "loss_coefficient", "diameter");
+            case "flow-control", "pressure-reducing", "pressure-sustaining" ->
+                List.of("setting", "kv", "cv", "loss_coefficient", "diameter");
             default -> List.of("kv", "cv", "loss_coefficient", "diameter");
         };
         List<String> all = new ArrayList<>(common);
@@ -338,6 +350,13 @@ public final class LineList {
                 String setting = r.flow("setting");
                 if (setting.isEmpty()) {
                     throw r.error("setting", "a flow-control valve needs the flow it holds");
+                }
+                values.put("setting", setting);
+            }
+            case "pressure-reducing", "pressure-sustaining" -> {
+                String setting = r.quantity("setting", QuantityKind.PRESSURE);
+                if (setting.isEmpty()) {
+                    throw r.error("setting", "a pressure-control valve needs the gauge pressure it holds");
                 }
                 values.put("setting", setting);
             }

@@ -275,7 +275,9 @@ public record Project(
                 "reducer", List.of("inletDiameter", "outletDiameter", "includedAngleDegrees"),
                 "check-valve", List.of("lossCoefficient", "diameter", "kv", "cv"),
                 "isolation", List.of("status", "lossCoefficient", "diameter", "kv", "cv"),
-                "flow-control", List.of("setting", "lossCoefficient", "diameter", "kv", "cv"));
+                "flow-control", List.of("setting", "lossCoefficient", "diameter", "kv", "cv"),
+                "pressure-reducing", List.of("setting", "lossCoefficient", "diameter", "kv", "cv"),
+                "pressure-sustaining", List.of("setting", "lossCoefficient", "diameter", "kv", "cv"));
 
         public DeviceSpec {
             name = name == null ? "" : name;

@@ -31,6 +31,7 @@ import org.headway.system.Gravity;
 import org.headway.system.IsolationValve;
 import org.headway.system.LocalLoss;
 import org.headway.system.PipeRun;
+import org.headway.system.PressureControlValve;
 import org.headway.system.PressureLimits;
 import org.headway.system.PumpCurve;
 import org.headway.system.PumpElement;
@@ -688,6 +689,15 @@ public final class ProjectResolver {
                 double setting = Quantities.parseFlow(d.value("setting"), "setting")
                         .volumetric(fluid == null ? Double.NaN : fluid.density(), "setting");
                 return new FlowControlValve(d.id(), d.name(), setting, localLoss(d, true));
+            }
+            case "pressure-reducing", "pressure-sustaining" -> {
+                if (d.value("setting").isEmpty()) {
+                    throw new InputException(
+                            "setting", "missing; a pressure-control valve needs the gauge pressure it holds");
+                }
+                double setting = Quantities.parse(d.value("setting"), QuantityKind.PRESSURE, "setting");
+                return new PressureControlValve(
+                        d.id(), d.name(), d.kind().equals("pressure-reducing"), setting, localLoss(d, true));
             }
             default -> throw new InputException("kind", "unknown element kind \"" + d.kind() + "\"");
         }

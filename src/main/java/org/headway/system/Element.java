@@ -26,6 +26,7 @@ public sealed interface Element
                 CheckValve,
                 IsolationValve,
                 FlowControlValve,
+                PressureControlValve,
                 PumpElement {
 
     /** Stable id, unique in its system; results are keyed by it. */

@@ -139,6 +139,9 @@ public final class HeadLossCalculator {
                 if (element instanceof FlowControlValve fcv) {
                     cautions.add(fcv.seriesNote());
                 }
+                if (element instanceof PressureControlValve pcv) {
+                    cautions.add(pcv.seriesNote());
+                }
                 if (element instanceof DiameterChange change) {
                     inletVelocityHead = velocityHead(flow, change.inletDiameter());
                     outletVelocityHead = velocityHead(flow, change.outletDiameter());
