@@ -12,7 +12,7 @@ import java.util.Objects;
  * @param name name the engineer gave it
  * @param openLoss loss when open
  */
-public record CheckValve(String id, String name, LocalLoss openLoss) implements Element {
+public record CheckValve(String id, String name, LocalLoss openLoss) implements OneWayValve {
 
     public CheckValve {
         FlowCoefficientValve.requireId(id);
@@ -23,23 +23,6 @@ public record CheckValve(String id, String name, LocalLoss openLoss) implements 
     @Override
     public String kind() {
         return "check-valve";
-    }
-
-    @Override
-    public boolean blocksReverseFlow() {
-        return true;
-    }
-
-    @Override
-    public double headLoss(double flow, FlowContext context) {
-        Element.requireForwardFlow(this, flow);
-        return openLoss.headLoss(flow);
-    }
-
-    @Override
-    public double headLossSlope(double flow, FlowContext context) {
-        Element.requireForwardFlow(this, flow);
-        return openLoss.slope(flow);
     }
 
     @Override

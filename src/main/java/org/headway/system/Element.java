@@ -23,10 +23,8 @@ public sealed interface Element
                 FlowCoefficientValve,
                 RatedComponent,
                 DiameterChange,
-                CheckValve,
                 IsolationValve,
-                FlowControlValve,
-                PressureControlValve,
+                OneWayValve,
                 PumpElement {
 
     /** Stable id, unique in its system; results are keyed by it. */

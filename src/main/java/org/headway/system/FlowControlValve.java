@@ -22,7 +22,7 @@ import org.headway.caution.InputException;
  * @param setting the flow it holds (m³/s), positive
  * @param openLoss loss when fully open
  */
-public record FlowControlValve(String id, String name, double setting, LocalLoss openLoss) implements Element {
+public record FlowControlValve(String id, String name, double setting, LocalLoss openLoss) implements OneWayValve {
 
     public FlowControlValve {
         FlowCoefficientValve.requireId(id);
@@ -37,23 +37,6 @@ public record FlowControlValve(String id, String name, double setting, LocalLoss
     @Override
     public String kind() {
         return "flow-control";
-    }
-
-    @Override
-    public boolean blocksReverseFlow() {
-        return true;
-    }
-
-    @Override
-    public double headLoss(double flow, FlowContext context) {
-        Element.requireForwardFlow(this, flow);
-        return openLoss.headLoss(flow);
-    }
-
-    @Override
-    public double headLossSlope(double flow, FlowContext context) {
-        Element.requireForwardFlow(this, flow);
-        return openLoss.slope(flow);
     }
 
     @Override

@@ -22,7 +22,7 @@ import org.headway.caution.InputException;
  * @param openLoss loss when fully open
  */
 public record PressureControlValve(String id, String name, boolean reducing, double setting, LocalLoss openLoss)
-        implements Element {
+        implements OneWayValve {
 
     public PressureControlValve {
         FlowCoefficientValve.requireId(id);
@@ -37,23 +37,6 @@ public record PressureControlValve(String id, String name, boolean reducing, dou
     @Override
     public String kind() {
         return reducing ? "pressure-reducing" : "pressure-sustaining";
-    }
-
-    @Override
-    public boolean blocksReverseFlow() {
-        return true;
-    }
-
-    @Override
-    public double headLoss(double flow, FlowContext context) {
-        Element.requireForwardFlow(this, flow);
-        return openLoss.headLoss(flow);
-    }
-
-    @Override
-    public double headLossSlope(double flow, FlowContext context) {
-        Element.requireForwardFlow(this, flow);
-        return openLoss.slope(flow);
     }
 
     @Override
