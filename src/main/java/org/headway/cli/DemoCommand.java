@@ -39,7 +39,8 @@ import picocli.CommandLine.Spec;
             "Run the whole job on the bundled, invented demo project.",
             "Solves an invented orchard booster line, prints the results and writes its head-loss sheet",
             "(PDF, workbook, CSV) into reports/, replacing the demo's own earlier files, and checks an",
-            "invented coil branch with valves and rated components in flow mode, and checks an",
+            "invented coil branch with valves and rated components in flow mode, an invented looped",
+            "village main from its line list, and checks an",
             "invented rig data set against the friction curves.",
             "The demo data are invented; do not use them for design."
         })
@@ -50,6 +51,11 @@ public final class DemoCommand implements Callable<Integer> {
 
     /** Classpath location of the demo coil branch (components between two headers). */
     static final String DEMO_BRANCH = "/fluids-data/examples/coil-branch.json";
+
+    /** Classpath locations of the demo network's line list. */
+    static final String DEMO_NODES = "/fluids-data/examples/network/hillcrest-nodes.csv";
+
+    static final String DEMO_LINKS = "/fluids-data/examples/network/hillcrest-links.csv";
 
     /** Classpath location of the demo rig; its data file sits beside it. */
     static final String DEMO_RIG = "/fluids-data/examples/demo-rig.json";
@@ -132,7 +138,23 @@ public final class DemoCommand implements Callable<Integer> {
                 null,
                 List.of());
         out.println();
-        out.println("5. Rig data: " + DEMO_RIG.substring(1) + " (invented measurements)");
+        out.println("5. A looped village main from its line list: " + DEMO_NODES.substring(1) + ", "
+                + DEMO_LINKS.substring(DEMO_LINKS.lastIndexOf('/') + 1));
+        var spec = org.headway.project.LineList.parse(
+                DEMO_NODES.substring(1),
+                resource(DEMO_NODES),
+                DEMO_LINKS.substring(1),
+                resource(DEMO_LINKS),
+                Catalog.bundled(),
+                false);
+        var network = ProjectResolver.resolveNetwork(
+                Project.network("Hillcrest village main (INVENTED DEMO DATA)", "water", "10 degC", "auto", spec),
+                Catalog.bundled(),
+                Path.of("."));
+        NetworkOutput.text(
+                out, network, org.headway.network.NetworkSolver.standard().solve(network), UnitSystem.SI);
+        out.println();
+        out.println("6. Rig data: " + DEMO_RIG.substring(1) + " (invented measurements)");
         RigFile rig = RigFile.loadResource(DEMO_RIG);
         RigReport rigReport = rig.analyse(0, point -> {});
         RigCommand.printText(out, rigReport, rig.dataName(), UnitSystem.SI, 0, false);

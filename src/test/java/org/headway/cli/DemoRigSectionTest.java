@@ -17,8 +17,8 @@ class DemoRigSectionTest {
     void demoAnalysesTheBundledRig() {
         CliRun run = CliRun.of("demo", "--reports", dir.resolve("reports").toString());
         assertEquals(0, run.exitCode(), run.err());
-        String rig = run.out().substring(run.out().indexOf("5. Rig data"));
-        assertTrue(rig.startsWith("5. Rig data: fluids-data/examples/demo-rig.json (invented measurements)"), rig);
+        String rig = run.out().substring(run.out().indexOf("6. Rig data"));
+        assertTrue(rig.startsWith("6. Rig data: fluids-data/examples/demo-rig.json (invented measurements)"), rig);
         assertTrue(rig.contains("Summary: 25 points"), rig);
         assertTrue(rig.contains("Effective roughness (Colebrook–White fitted to 17 turbulent points):\n  ε = "), rig);
         assertTrue(rig.contains("dominant contributor to u(f):"), rig);
@@ -29,7 +29,7 @@ class DemoRigSectionTest {
         CliRun run = CliRun.of("demo", "--reports", dir.resolve("reports").toString());
         assertEquals(0, run.exitCode(), run.err());
         String out = run.out();
-        String branch = out.substring(out.indexOf("4. A coil branch"), out.indexOf("5. Rig data"));
+        String branch = out.substring(out.indexOf("4. A coil branch"), out.indexOf("6. Rig data"));
         for (String id : new String[] {
             "iso-flow", "branch-flow", "strainer", "reducer-in", "ahu-coil", "control-valve", "branch-return"
         }) {
@@ -42,5 +42,8 @@ class DemoRigSectionTest {
         assertTrue(m.find(), branch);
         assertTrue(Double.parseDouble(m.group(1)) > 2.8, branch);
         assertTrue(branch.contains("Total head:       0 m"), "balanced flow prints a clean zero:\n" + branch);
+        String main = out.substring(out.indexOf("5. A looped village main"), out.indexOf("6. Rig data"));
+        assertTrue(main.contains("Solve: converged after"), main);
+        assertTrue(main.contains("\nV1 "), main);
     }
 }
