@@ -172,6 +172,7 @@ public final class NetworkSolver {
         final int[] junction; // node → junction index or −1
         final int nJunctions;
         final int[] slot; // link → pattern pair index or −1
+        final int pairCount;
         final double[] demand;
         final double[] head;
         final double[] flow;
@@ -245,6 +246,7 @@ public final class NetworkSolver {
             pinNode = new int[nLinks];
             pinHead = new double[nLinks];
             java.util.Arrays.fill(pinNode, -1);
+            Map<Integer, Integer> pinnedBy = new java.util.HashMap<>();
             slot = new int[nLinks];
             int pairs = 0;
             for (int k = 0; k < nLinks; k++) {
@@ -261,14 +263,12 @@ public final class NetworkSolver {
                                         + network.nodes().get(p).id()
                                         + ", which already has a fixed head; put a junction there");
                     }
-                    for (int other = 0; other < k; other++) {
-                        if (pinNode[other] == p) {
-                            throw new InputException(
-                                    e.id(),
-                                    "valves " + element[other].id() + " and " + e.id()
-                                            + " both hold the pressure at node "
-                                            + network.nodes().get(p).id() + "; only one may");
-                        }
+                    Integer other = pinnedBy.put(p, k);
+                    if (other != null) {
+                        throw new InputException(
+                                e.id(),
+                                "valves " + element[other].id() + " and " + e.id() + " both hold the pressure at node "
+                                        + network.nodes().get(p).id() + "; only one may");
                     }
                     pinNode[k] = p;
                     Node node = network.nodes().get(p);
@@ -285,6 +285,7 @@ public final class NetworkSolver {
                     slot[k] = -1;
                 }
             }
+            pairCount = pairs;
             int[] pa = new int[pairs];
             int[] pb = new int[pairs];
             for (int k = 0; k < nLinks; k++) {
@@ -509,7 +510,7 @@ public final class NetworkSolver {
         boolean newton(boolean[] live) {
             int nj = nJunctions;
             double[] diag = new double[nj];
-            double[] off = new double[Math.max(0, slotCount())];
+            double[] off = new double[pairCount];
             double[] rhs = new double[nj];
             double[] h = new double[nLinks];
             double[] g = new double[nLinks];
@@ -525,10 +526,10 @@ public final class NetworkSolver {
                 if (!live[i] && junction[i] >= 0) {
                     head[i] = Double.NaN;
                 } else if (junction[i] >= 0 && Double.isNaN(head[i])) {
-                    head[i] = nearestFixedHead();
+                    head[i] = firstFixedHead();
                 }
             }
-            double energy = energyResidual(h, e, live);
+            double energy = energyResidual(h, e);
             double bestEnergy = Double.POSITIVE_INFINITY;
             double[] bestHead = head.clone();
             double[] bestFlow = flow.clone();
@@ -639,7 +640,7 @@ public final class NetworkSolver {
                         }
                     }
                     assignControlledFlows();
-                    newEnergy = energyResidual(h, e, live);
+                    newEnergy = energyResidual(h, e);
                     double merit = merit(e, live, weight);
                     if (merit <= (1 - 1e-4 * alpha) * merit0 || halving == MAX_HALVINGS) {
                         break;
@@ -671,10 +672,10 @@ public final class NetworkSolver {
                     System.arraycopy(now, 0, live, 0, nNodes);
                     for (int i = 0; i < nNodes; i++) {
                         if (junction[i] >= 0 && live[i] && Double.isNaN(head[i])) {
-                            head[i] = nearestFixedHead();
+                            head[i] = firstFixedHead();
                         }
                     }
-                    energy = energyResidual(h, e, live);
+                    energy = energyResidual(h, e);
                     bestEnergy = Double.POSITIVE_INFINITY;
                     continue;
                 }
@@ -788,17 +789,8 @@ public final class NetworkSolver {
             System.arraycopy(bestFlow, 0, flow, 0, nLinks);
         }
 
-        int slotCount() {
-            int m = 0;
-            for (int k = 0; k < nLinks; k++) {
-                if (slot[k] >= 0) {
-                    m = Math.max(m, slot[k] + 1);
-                }
-            }
-            return m;
-        }
-
-        double nearestFixedHead() {
+        /** Start head for a junction that has none yet: the first fixed head's. */
+        double firstFixedHead() {
             for (int i = 0; i < nNodes; i++) {
                 if (junction[i] < 0) {
                     return head[i];
@@ -812,7 +804,7 @@ public final class NetworkSolver {
         }
 
         /** Fills h and e for open links; returns the largest |e|. */
-        double energyResidual(double[] h, double[] e, boolean[] live) {
+        double energyResidual(double[] h, double[] e) {
             double max = 0;
             for (int k = 0; k < nLinks; k++) {
                 if (status[k] != OPEN) {

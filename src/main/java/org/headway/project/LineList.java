@@ -186,7 +186,7 @@ public final class LineList {
                         "kind", "unknown kind \"" + r.text("kind") + "\"; expected " + String.join(", ", LINK_KINDS));
             }
             for (String column : t.column.keySet()) {
-                if (!r.text(column).isEmpty() && !usedBy(kind).contains(column)) {
+                if (!r.text(column).isEmpty() && !USED_BY.get(kind).contains(column)) {
                     throw r.error(
                             column,
                             "is not used by a link of kind " + kind + "; leave it blank (got \"" + r.text(column)
@@ -206,22 +206,36 @@ public final class LineList {
         return out;
     }
 
-    /** Columns a link kind reads. */
-    static List<String> usedBy(String kind) {
+    /** Columns each link kind reads. */
+    private static final Map<String, List<String>> USED_BY = usedByKind();
+
+    private static Map<String, List<String>> usedByKind() {
         List<String> common = List.of("id", "name", "from", "to", "kind", "design_flow");
-        List<String> own = switch (kind) {
-            case "pipe" ->
-                List.of("length", "diameter", "roughness", "loss_coefficient", "hw_c", "material", "size", "schedule");
-            case "pump" -> List.of("pump_curve", "speed_ratio", "npsh_required");
-            case "component" -> List.of("rated_pressure_drop", "rated_flow", "exponent");
-            case "valve" -> List.of("kv", "cv");
-            case "flow-control", "pressure-reducing", "pressure-sustaining" ->
-                List.of("setting", "kv", "cv", "loss_coefficient", "diameter");
-            default -> List.of("kv", "cv", "loss_coefficient", "diameter");
-        };
-        List<String> all = new ArrayList<>(common);
-        all.addAll(own);
-        return all;
+        Map<String, List<String>> m = new LinkedHashMap<>();
+        for (String kind : LINK_KINDS) {
+            List<String> own = switch (kind) {
+                case "pipe" ->
+                    List.of(
+                            "length",
+                            "diameter",
+                            "roughness",
+                            "loss_coefficient",
+                            "hw_c",
+                            "material",
+                            "size",
+                            "schedule");
+                case "pump" -> List.of("pump_curve", "speed_ratio", "npsh_required");
+                case "component" -> List.of("rated_pressure_drop", "rated_flow", "exponent");
+                case "valve" -> List.of("kv", "cv");
+                case "flow-control", "pressure-reducing", "pressure-sustaining" ->
+                    List.of("setting", "kv", "cv", "loss_coefficient", "diameter");
+                default -> List.of("kv", "cv", "loss_coefficient", "diameter");
+            };
+            List<String> all = new ArrayList<>(common);
+            all.addAll(own);
+            m.put(kind, List.copyOf(all));
+        }
+        return Map.copyOf(m);
     }
 
     private static Project.SegmentSpec pipe(Row r, String id, Catalog catalog, boolean hazenWilliams) {

@@ -838,8 +838,7 @@ public final class Quantities {
             return NOT_DECIMAL;
         }
         int ki = (int) k;
-        double expected = ki >= 0 ? POWERS_OF_TEN[ki] : 1 / POWERS_OF_TEN[-ki];
-        if (f != expected && f != (ki >= 0 ? POWERS_OF_TEN[ki] : 1.0 / POWERS_OF_TEN[-ki])) {
+        if (f != (ki >= 0 ? POWERS_OF_TEN[ki] : 1.0 / POWERS_OF_TEN[-ki])) {
             return NOT_DECIMAL;
         }
         for (double probe : new double[] {3.0, 7.0, 0.1, 123.456}) {
