@@ -139,8 +139,13 @@ public final class ProjectResolver {
             }
             if (e != null) {
                 Element element = e;
-                org.headway.network.Link link =
-                        attempt(path, () -> new org.headway.network.Link(element, l.from(), l.to()));
+                org.headway.network.Link link = attempt(
+                        path,
+                        () -> new org.headway.network.Link(
+                                element,
+                                l.from(),
+                                l.to(),
+                                l.designFlow().isEmpty() ? Double.NaN : flow(l.designFlow(), density, "designFlow")));
                 if (link != null) {
                     links.add(link);
                 }
