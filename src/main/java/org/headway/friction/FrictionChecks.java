@@ -109,7 +109,27 @@ final class FrictionChecks {
                 CHART_BASIS);
     }
 
-    /** Six significant digits, plain where short, for messages a person reads. */
+    private static final MathContext SIX_DIGITS = new MathContext(6);
+
+    /** 10⁰ … 10²², each exactly representable as a double. */
+    private static final double[] POWERS_OF_TEN = new double[23];
+
+    static {
+        double p = 1;
+        for (int i = 0; i < POWERS_OF_TEN.length; i++) {
+            POWERS_OF_TEN[i] = p;
+            p *= 10;
+        }
+    }
+
+    /**
+     * Six significant digits, trailing zeros dropped, for messages a person reads: plain from about
+     * 10⁻⁶ to below 10⁷ ({@code 0.0000015}, {@code 2300}, {@code 0.000123457}), otherwise {@code 1.5e-7},
+     * {@code 2e7} — the spelling of {@link BigDecimal#toString} with {@code E+} written {@code e}.
+     * The digits are those of the value rounded half up to six significant digits; a network of 10⁵
+     * pipes formats several numbers per caution, so this works on a long rather than a big decimal
+     * (which {@link #formatExactly} keeps as the reference the tests hold it to).
+     */
     static String format(double value) {
         if (!Double.isFinite(value)) {
             return String.valueOf(value);
@@ -117,7 +137,72 @@ final class FrictionChecks {
         if (value == 0) {
             return "0";
         }
-        BigDecimal rounded = new BigDecimal(value).round(new MathContext(6)).stripTrailingZeros();
+        double a = Math.abs(value);
+        int e = (int) Math.floor(Math.log10(a));
+        long m = sixDigits(a, e);
+        if (m >= 1_000_000) {
+            e++;
+            m = sixDigits(a, e);
+        } else if (m < 100_000) {
+            e--;
+            m = sixDigits(a, e);
+        }
+        if (m < 100_000 || m >= 1_000_000) {
+            return formatExactly(value);
+        }
+        String digits = Long.toString(m);
+        int length = digits.length();
+        while (length > 1 && digits.charAt(length - 1) == '0') {
+            length--;
+        }
+        StringBuilder out = new StringBuilder(16);
+        if (value < 0) {
+            out.append('-');
+        }
+        if (a < 1e7 && e >= -6) {
+            if (e >= 0) {
+                for (int i = 0; i <= e; i++) {
+                    out.append(i < length ? digits.charAt(i) : '0');
+                }
+                if (length > e + 1) {
+                    out.append('.').append(digits, e + 1, length);
+                }
+            } else {
+                out.append("0.");
+                for (int i = -1; i > e; i--) {
+                    out.append('0');
+                }
+                out.append(digits, 0, length);
+            }
+        } else {
+            out.append(digits.charAt(0));
+            if (length > 1) {
+                out.append('.').append(digits, 1, length);
+            }
+            out.append('e').append(e);
+        }
+        return out.toString();
+    }
+
+    /** a / 10^(e − 5) rounded half up, or −1 when the power is beyond the exact table. */
+    private static long sixDigits(double a, int e) {
+        int k = e - 5;
+        if (k > 22 || k < -22) {
+            return -1;
+        }
+        double scaled = k >= 0 ? a / POWERS_OF_TEN[k] : a * POWERS_OF_TEN[-k];
+        return (long) Math.floor(scaled + 0.5);
+    }
+
+    /** {@link #format} by big-decimal arithmetic on the value's shortest decimal spelling. */
+    static String formatExactly(double value) {
+        if (!Double.isFinite(value)) {
+            return String.valueOf(value);
+        }
+        if (value == 0) {
+            return "0";
+        }
+        BigDecimal rounded = BigDecimal.valueOf(value).round(SIX_DIGITS).stripTrailingZeros();
         double magnitude = Math.abs(value);
         if (magnitude >= 1e-4 && magnitude < 1e7) {
             return rounded.toPlainString();

@@ -12,6 +12,7 @@ import org.headway.system.ElementResult;
 import org.headway.system.FlowContext;
 import org.headway.system.FlowControlValve;
 import org.headway.system.Gravity;
+import org.headway.system.PipeFlow;
 import org.headway.system.PressureControlValve;
 import org.headway.system.PumpElement;
 import org.headway.system.Segment;
@@ -1024,12 +1025,17 @@ public final class NetworkSolver {
                     if (Math.abs(q) >= ZERO_FLOW || e instanceof PumpElement) {
                         try {
                             double evalFlow = q < 0 && e.blocksReverseFlow() ? 0 : q;
-                            ElementResult r = e.evaluate(evalFlow, ctx);
+                            ElementResult r;
+                            if (e instanceof Segment s) {
+                                Element.requireFiniteFlow(s, q);
+                                PipeFlow pf = s.flowAt(Math.abs(q), ctx);
+                                friction = pf.frictionFactor();
+                                r = s.evaluate(q, pf, ctx);
+                            } else {
+                                r = e.evaluate(evalFlow, ctx);
+                            }
                             er = Optional.of(r);
                             cautions.addAll(r.cautions());
-                            if (e instanceof Segment s) {
-                                friction = s.flowAt(Math.abs(q), ctx).frictionFactor();
-                            }
                         } catch (InputException ex) {
                             cautions.add(Caution.serious("element-failed", ex.getMessage(), "element law")
                                     .about(e.id()));

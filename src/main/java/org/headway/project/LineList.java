@@ -1,8 +1,6 @@
 package org.headway.project;
 
 import java.io.IOException;
-import java.io.Reader;
-import java.io.StringReader;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
@@ -19,9 +17,6 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.headway.caution.InputException;
 import org.headway.pipe.Catalog;
 import org.headway.pipe.Material;
@@ -103,6 +98,46 @@ public final class LineList {
     private static final Pattern BARE_NUMBER = Pattern.compile("^[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?$");
 
     private LineList() {}
+
+    /** {@link #BARE_NUMBER} without a regular expression (it is asked of every cell under a unit). */
+    static boolean isBareNumber(String v) {
+        int n = v.length();
+        int i = 0;
+        if (i < n && (v.charAt(i) == '+' || v.charAt(i) == '-')) {
+            i++;
+        }
+        int before = 0;
+        while (i < n && v.charAt(i) >= '0' && v.charAt(i) <= '9') {
+            i++;
+            before++;
+        }
+        int after = 0;
+        if (i < n && v.charAt(i) == '.') {
+            i++;
+            while (i < n && v.charAt(i) >= '0' && v.charAt(i) <= '9') {
+                i++;
+                after++;
+            }
+        }
+        if (before == 0 && after == 0) {
+            return false;
+        }
+        if (i < n && (v.charAt(i) == 'e' || v.charAt(i) == 'E')) {
+            i++;
+            if (i < n && (v.charAt(i) == '+' || v.charAt(i) == '-')) {
+                i++;
+            }
+            int exponent = 0;
+            while (i < n && v.charAt(i) >= '0' && v.charAt(i) <= '9') {
+                i++;
+                exponent++;
+            }
+            if (exponent == 0) {
+                return false;
+            }
+        }
+        return i == n;
+    }
 
     /**
      * Reads both files.
@@ -207,11 +242,11 @@ public final class LineList {
     }
 
     /** Columns each link kind reads. */
-    private static final Map<String, List<String>> USED_BY = usedByKind();
+    private static final Map<String, java.util.Set<String>> USED_BY = usedByKind();
 
-    private static Map<String, List<String>> usedByKind() {
+    private static Map<String, java.util.Set<String>> usedByKind() {
         List<String> common = List.of("id", "name", "from", "to", "kind", "design_flow");
-        Map<String, List<String>> m = new LinkedHashMap<>();
+        Map<String, java.util.Set<String>> m = new LinkedHashMap<>();
         for (String kind : LINK_KINDS) {
             List<String> own = switch (kind) {
                 case "pipe" ->
@@ -233,7 +268,7 @@ public final class LineList {
             };
             List<String> all = new ArrayList<>(common);
             all.addAll(own);
-            m.put(kind, List.copyOf(all));
+            m.put(kind, java.util.Set.copyOf(all));
         }
         return Map.copyOf(m);
     }
@@ -445,43 +480,31 @@ public final class LineList {
                 text = text.substring(1);
             }
             Table t = new Table(name);
-            try (Reader reader = new StringReader(text);
-                    CSVParser p = CSVFormat.DEFAULT
-                            .builder()
-                            .setIgnoreEmptyLines(true)
-                            .setTrim(true)
-                            .get()
-                            .parse(reader)) {
-                boolean header = true;
-                for (CSVRecord rec : p) {
-                    if (header) {
-                        for (int c = 0; c < rec.size(); c++) {
-                            t.header(rec.get(c), c, known);
-                        }
-                        header = false;
-                        continue;
-                    }
-                    boolean blank = true;
-                    for (String v : rec) {
-                        blank &= v.isBlank();
-                    }
-                    if (blank) {
-                        continue;
-                    }
-                    if (rec.size() > t.width()) {
-                        throw new InputException(
-                                name + " line " + rec.getParser().getCurrentLineNumber(),
-                                "has " + rec.size() + " cells, more than the " + t.width() + " columns of the header");
-                    }
-                    List<String> cells = new ArrayList<>();
-                    rec.forEach(cells::add);
-                    t.rows.add(new Row(t, rec.getParser().getCurrentLineNumber(), cells));
-                }
+            List<CsvText.Line> lines;
+            try {
+                lines = CsvText.records(text);
+            } catch (CsvText.Malformed e) {
+                throw new InputException(name + " line " + e.line, "is not valid CSV: " + e.getMessage());
+            }
+            boolean header = true;
+            for (CsvText.Line rec : lines) {
+                List<String> cells = rec.fields();
                 if (header) {
-                    throw new InputException(name, "is empty; it needs a header row naming its columns");
+                    for (int c = 0; c < cells.size(); c++) {
+                        t.header(cells.get(c), c, known);
+                    }
+                    header = false;
+                    continue;
                 }
-            } catch (IOException | java.io.UncheckedIOException | IllegalStateException e) {
-                throw new InputException(name, "is not valid CSV: " + e.getMessage());
+                if (cells.size() > t.width()) {
+                    throw new InputException(
+                            name + " line " + rec.number(),
+                            "has " + cells.size() + " cells, more than the " + t.width() + " columns of the header");
+                }
+                t.rows.add(new Row(t, rec.number(), cells));
+            }
+            if (header) {
+                throw new InputException(name, "is empty; it needs a header row naming its columns");
             }
             return t;
         }
@@ -587,7 +610,7 @@ public final class LineList {
             if (u == null) {
                 return v;
             }
-            if (!BARE_NUMBER.matcher(v).matches()) {
+            if (!isBareNumber(v)) {
                 throw error(
                         key,
                         "the column gives the unit [" + u + "], so the cell must be a plain number; got \"" + v + "\"");

@@ -417,7 +417,18 @@ public record Segment(
     @Override
     public ElementResult evaluate(double flow, FlowContext context) {
         Element.requireFiniteFlow(this, flow);
-        PipeFlow p = flowAt(Math.abs(flow), context);
+        return evaluate(flow, flowAt(Math.abs(flow), context), context);
+    }
+
+    /**
+     * The element result at a flow whose pipe flow is already known, so that a caller who needs
+     * both (the network solver's report) evaluates the friction law once.
+     *
+     * @param flow signed flow (m³/s)
+     * @param p {@code flowAt(|flow|, context)}
+     * @param context fluid and default friction method
+     */
+    public ElementResult evaluate(double flow, PipeFlow p, FlowContext context) {
         double h = Math.signum(flow) * p.headLoss();
         String law = hazenWilliams.isPresent()
                 ? String.format(

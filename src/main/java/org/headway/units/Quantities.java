@@ -280,6 +280,11 @@ public final class Quantities {
             }
             return typed.number;
         }
+        java.util.concurrent.ConcurrentHashMap<String, Conversion> accepted = ACCEPTED.get(kind);
+        Conversion known = accepted.get(typed.unitText);
+        if (known != null) {
+            return finite(known.apply(typed.number), typed, where);
+        }
         Marked marked = marked(typed.unitText);
         Unit<?> si = SI_UNITS.get(kind);
         Unit<?> base = marked == null ? null : unitOrNull(marked.base);
@@ -299,7 +304,9 @@ public final class Quantities {
         if (!unit.isCompatible(si)) {
             throw wrongDimension(kind.dimensionName(), typed, unit, where);
         }
-        return finite(convert(unit, si, typed.number), typed, where);
+        Conversion toSi = conversion(unit, si);
+        remember(accepted, typed.unitText, toSi);
+        return finite(toSi.apply(typed.number), typed, where);
     }
 
     /**
@@ -322,14 +329,21 @@ public final class Quantities {
         if (typed.unitText.isEmpty()) {
             return new PressureReading(typed.number, PressureReading.Reference.UNSPECIFIED);
         }
+        PressureUnit known = ACCEPTED_PRESSURE.get(typed.unitText);
+        if (known != null) {
+            return new PressureReading(finite(known.toPascal().apply(typed.number), typed, where), known.reference());
+        }
         Marked marked = marked(typed.unitText);
         String unitText = marked == null ? typed.unitText : marked.base;
         Unit<?> unit = parseUnit(unitText, typed.whole, expected, example, where);
         if (!unit.isCompatible(Units.PASCAL)) {
             throw wrongDimension(expected, typed, unit, where);
         }
-        double pascals = finite(convert(unit, Units.PASCAL, typed.number), typed, where);
-        return new PressureReading(pascals, marked == null ? PressureReading.Reference.UNSPECIFIED : marked.reference);
+        PressureUnit accepted = new PressureUnit(
+                conversion(unit, Units.PASCAL),
+                marked == null ? PressureReading.Reference.UNSPECIFIED : marked.reference);
+        remember(ACCEPTED_PRESSURE, typed.unitText, accepted);
+        return new PressureReading(finite(accepted.toPascal().apply(typed.number), typed, where), accepted.reference());
     }
 
     /**
@@ -348,22 +362,23 @@ public final class Quantities {
         if (typed.unitText.isEmpty()) {
             return new FlowReading(typed.number, FlowReading.Basis.VOLUMETRIC, typed.whole);
         }
-        Unit<?> unit = parseUnit(typed.unitText, typed.whole, expected, example, where);
-        Unit<?> volumetric = SI_UNITS.get(QuantityKind.VOLUMETRIC_FLOW);
-        if (unit.isCompatible(volumetric)) {
-            return new FlowReading(
-                    finite(convert(unit, volumetric, typed.number), typed, where),
-                    FlowReading.Basis.VOLUMETRIC,
-                    typed.whole);
+        FlowUnit known = ACCEPTED_FLOW.get(typed.unitText);
+        if (known == null) {
+            Unit<?> unit = parseUnit(typed.unitText, typed.whole, expected, example, where);
+            Unit<?> volumetric = SI_UNITS.get(QuantityKind.VOLUMETRIC_FLOW);
+            if (unit.isCompatible(volumetric)) {
+                known = new FlowUnit(conversion(unit, volumetric), FlowReading.Basis.VOLUMETRIC);
+            } else if (unit.isCompatible(MASS_FLOW)) {
+                known = new FlowUnit(conversion(unit, MASS_FLOW), FlowReading.Basis.MASS);
+            } else {
+                throw new InputException(
+                        where,
+                        expected + " expected (or a mass flow such as 4300 kg/h), got \"" + abbreviate(typed.whole)
+                                + "\" (" + dimensionNameOf(unit) + ")");
+            }
+            remember(ACCEPTED_FLOW, typed.unitText, known);
         }
-        if (unit.isCompatible(MASS_FLOW)) {
-            return new FlowReading(
-                    finite(convert(unit, MASS_FLOW, typed.number), typed, where), FlowReading.Basis.MASS, typed.whole);
-        }
-        throw new InputException(
-                where,
-                expected + " expected (or a mass flow such as 4300 kg/h), got \"" + abbreviate(typed.whole) + "\" ("
-                        + dimensionNameOf(unit) + ")");
+        return new FlowReading(finite(known.toSi().apply(typed.number), typed, where), known.basis(), typed.whole);
     }
 
     /**
@@ -788,6 +803,11 @@ public final class Quantities {
     }
 
     private static double convert(Unit<?> from, Unit<?> to, double value) {
+        return conversion(from, to).apply(value);
+    }
+
+    /** The conversion from one unit to another, from the caches when already seen. */
+    private static Conversion conversion(Unit<?> from, Unit<?> to) {
         UnitConverter c = converter(from, to);
         Integer decimal = DECIMAL_EXPONENT.get(c);
         if (decimal == null) {
@@ -796,13 +816,54 @@ public final class Quantities {
                 DECIMAL_EXPONENT.put(c, decimal);
             }
         }
-        if (decimal == NOT_DECIMAL) {
-            return c.convert(value);
+        return new Conversion(c, decimal);
+    }
+
+    /**
+     * A unit conversion ready to apply: a pure power of ten is one correctly rounded multiplication
+     * or division, which gives the same double as the unit library's exact decimal arithmetic
+     * without its big-number cost; anything else goes through the library's converter.
+     */
+    private record Conversion(UnitConverter converter, int decimal) {
+        double apply(double value) {
+            if (decimal == NOT_DECIMAL) {
+                return converter.convert(value);
+            }
+            return decimal >= 0 ? value * POWERS_OF_TEN[decimal] : value / POWERS_OF_TEN[-decimal];
         }
-        // A pure power of ten: one correctly rounded multiplication or division gives the same double as
-        // the unit library's exact decimal arithmetic, without its big-number cost.
-        int k = decimal;
-        return k >= 0 ? value * POWERS_OF_TEN[k] : value / POWERS_OF_TEN[-k];
+    }
+
+    /**
+     * Per quantity kind, the conversion to SI of each unit text already read and accepted for that
+     * kind: a line list of 10⁶ rows repeats a handful of units, and checking a unit's dimension in
+     * the unit library costs far more than reading the number. Only texts that passed every check
+     * are stored, so a hit needs no check but the number's. Bounded like the other caches.
+     */
+    private static final Map<QuantityKind, java.util.concurrent.ConcurrentHashMap<String, Conversion>> ACCEPTED =
+            new EnumMap<>(QuantityKind.class);
+
+    static {
+        for (QuantityKind k : QuantityKind.values()) {
+            ACCEPTED.put(k, new java.util.concurrent.ConcurrentHashMap<>());
+        }
+    }
+
+    /** Accepted pressure unit texts: their conversion to Pa and what they are measured from. */
+    private record PressureUnit(Conversion toPascal, PressureReading.Reference reference) {}
+
+    private static final java.util.concurrent.ConcurrentHashMap<String, PressureUnit> ACCEPTED_PRESSURE =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
+    /** Accepted flow unit texts: their conversion to m³/s or kg/s and which of the two. */
+    private record FlowUnit(Conversion toSi, FlowReading.Basis basis) {}
+
+    private static final java.util.concurrent.ConcurrentHashMap<String, FlowUnit> ACCEPTED_FLOW =
+            new java.util.concurrent.ConcurrentHashMap<>();
+
+    private static <V> void remember(java.util.concurrent.ConcurrentHashMap<String, V> cache, String key, V value) {
+        if (cache.size() < CACHE_LIMIT) {
+            cache.put(key, value);
+        }
     }
 
     private static final int NOT_DECIMAL = Integer.MIN_VALUE;
