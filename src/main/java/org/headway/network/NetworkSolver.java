@@ -184,6 +184,13 @@ public final class NetworkSolver {
         final int[] pinNode;
         /** The head a pressure-control valve holds at its node (m). */
         final double[] pinHead;
+        /**
+         * For a pressure-control valve, its share of the flow when it and others hold one node at one
+         * head: the flow its fully open law passes at 1 m of head.
+         */
+        final double[] shareWeight;
+        /** A pressure-control valve shut because another holds its node at a different head. */
+        final boolean[] setAside;
 
         final double totalDemand;
         final SpdSolver linear;
@@ -247,6 +254,8 @@ public final class NetworkSolver {
             pinNode = new int[nLinks];
             pinHead = new double[nLinks];
             java.util.Arrays.fill(pinNode, -1);
+            shareWeight = new double[nLinks];
+            setAside = new boolean[nLinks];
             Map<Integer, Integer> pinnedBy = new java.util.HashMap<>();
             slot = new int[nLinks];
             int pairs = 0;
@@ -265,13 +274,18 @@ public final class NetworkSolver {
                                         + ", which already has a fixed head; put a junction there");
                     }
                     Integer other = pinnedBy.put(p, k);
-                    if (other != null) {
+                    if (other != null && ((PressureControlValve) element[other]).reducing() != pcv.reducing()) {
                         throw new InputException(
                                 e.id(),
-                                "valves " + element[other].id() + " and " + e.id() + " both hold the pressure at node "
-                                        + network.nodes().get(p).id() + "; only one may");
+                                "a reducing valve (" + element[pcv.reducing() ? other : k].id()
+                                        + ") and a sustaining valve ("
+                                        + element[pcv.reducing() ? k : other].id()
+                                        + ") both hold the pressure at node "
+                                        + network.nodes().get(p).id()
+                                        + "; put a pipe or junction between them");
                     }
                     pinNode[k] = p;
+                    shareWeight[k] = shareWeight(pcv);
                     Node node = network.nodes().get(p);
                     pinHead[k] = node.elevation() + pcv.setting() / (ctx.fluid().density() * Gravity.STANDARD);
                 }
@@ -455,6 +469,7 @@ public final class NetworkSolver {
 
         NetworkResult solve() {
             boolean converged = false;
+            settleSharedHolds();
             boolean[] live = liveNodes();
             int rounds = 0;
             while (true) {
@@ -464,6 +479,7 @@ public final class NetworkSolver {
                     break;
                 }
                 List<String> changed = updateStatuses();
+                changed.addAll(settleSharedHolds());
                 if (changed.isEmpty()) {
                     break;
                 }
@@ -716,7 +732,12 @@ public final class NetworkSolver {
             return false;
         }
 
-        /** An active pressure-control valve carries what its controlled node's continuity leaves. */
+        /**
+         * Active pressure-control valves carry what their controlled node's continuity leaves. Where
+         * several hold one node at one head (valves in parallel, equal settings) the physics does not
+         * fix their split (Deuerlein, Simpson &amp; Dempe 2009); they share it in proportion to their
+         * fully open capacity, {@link #shareWeight}.
+         */
         void assignControlledFlows() {
             for (int k = 0; k < nLinks; k++) {
                 if (status[k] != ACTIVE || pinNode[k] < 0) {
@@ -724,10 +745,12 @@ public final class NetworkSolver {
                 }
                 int p = pinNode[k];
                 double balance = -demand[p];
+                double weights = 0;
                 int start = adjacencyStart[p];
                 for (int a = start; a < adjacencyStart[p + 1]; a++) {
                     int l = adjacencyLink[a];
-                    if (l == k) {
+                    if (status[l] == ACTIVE && pinNode[l] == p) {
+                        weights += shareWeight[l];
                         continue;
                     }
                     if (to[l] == p) {
@@ -737,9 +760,72 @@ public final class NetworkSolver {
                         balance -= flow[l];
                     }
                 }
+                double share = weights > 0 ? shareWeight[k] / weights : 1;
                 // Reducing valve: it flows into p and must make up the deficit; sustaining: it drains the surplus.
-                flow[k] = to[k] == p ? -balance : balance;
+                flow[k] = (to[k] == p ? -balance : balance) * share;
             }
+        }
+
+        /** The flow a valve's fully open law passes at 1 m of head (m³/s), by bisection on that law. */
+        double shareWeight(PressureControlValve pcv) {
+            double lo = 0;
+            double hi = 1;
+            while (pcv.headLoss(hi, ctx) < 1 && hi < 1e6) {
+                hi *= 10;
+            }
+            for (int i = 0; i < 100; i++) {
+                double q = 0.5 * (lo + hi);
+                if (pcv.headLoss(q, ctx) < 1) {
+                    lo = q;
+                } else {
+                    hi = q;
+                }
+            }
+            return Math.max(0.5 * (lo + hi), Double.MIN_NORMAL);
+        }
+
+        /**
+         * Of several active valves holding one node, only those holding the dominant head can stay
+         * active: a reducing valve set below the head another holds sees its outlet above its setting
+         * and closes, a sustaining valve set above the head another holds sees its inlet below its
+         * setting and closes. Those are shut here and set aside: when the valve holding the node opens
+         * or shuts they are made active again, and the status rules sort them as they would any valve.
+         * Returns the ids whose status changed.
+         */
+        List<String> settleSharedHolds() {
+            List<String> shut = new ArrayList<>();
+            // A node whose holding valve has opened or shut falls back on the valves set aside for it.
+            java.util.Set<Integer> held = new java.util.HashSet<>();
+            for (int k = 0; k < nLinks; k++) {
+                if (status[k] == ACTIVE && pinNode[k] >= 0) {
+                    held.add(pinNode[k]);
+                }
+            }
+            for (int k = 0; k < nLinks; k++) {
+                if (setAside[k] && status[k] == SHUT && !held.contains(pinNode[k])) {
+                    status[k] = ACTIVE;
+                    setAside[k] = false;
+                    shut.add(element[k].id());
+                }
+            }
+            Map<Integer, Double> dominant = new java.util.HashMap<>();
+            for (int k = 0; k < nLinks; k++) {
+                if (status[k] == ACTIVE && pinNode[k] >= 0) {
+                    boolean reducing = ((PressureControlValve) element[k]).reducing();
+                    dominant.merge(pinNode[k], pinHead[k], reducing ? Math::max : Math::min);
+                }
+            }
+            for (int k = 0; k < nLinks; k++) {
+                if (status[k] == ACTIVE && pinNode[k] >= 0) {
+                    if (Math.abs(dominant.get(pinNode[k]) - pinHead[k]) > headTolerance) {
+                        status[k] = SHUT;
+                        flow[k] = 0;
+                        setAside[k] = true;
+                        shut.add(element[k].id());
+                    }
+                }
+            }
+            return shut;
         }
 
         /** Mean slope of the open links at each node (m per m³/s), 0 where none. */
@@ -902,8 +988,11 @@ public final class NetworkSolver {
         }
 
         /**
-         * The pressure-control status rules (Rossman 2000, Appendix D): returns the id when the status
-         * changed. H_f, H_t are the heads at the valve's ends, H_s the held head.
+         * The pressure-control status rules (Rossman 2000, Appendix D), with one more: an active valve
+         * whose ends differ by less than its fully open loss at its flow opens, since no throttling
+         * could pass that flow (a small valve beside a large one, or a valve too small for the
+         * demand). Returns the id when the status changed. H_f, H_t are the heads at the valve's ends,
+         * H_s the held head.
          */
         String pressureControlStatus(int k, PressureControlValve pcv) {
             double hf = head[from[k]];
@@ -919,6 +1008,10 @@ public final class NetworkSolver {
                 if (flow[k] < 0) {
                     after = SHUT;
                 } else if (pcv.reducing() ? hf < hs - tol : ht > hs + tol) {
+                    after = OPEN;
+                } else if (hf - ht < pcv.headLoss(flow[k], ctx) - tol) {
+                    // Holding its head would take less loss than the valve has fully open: it cannot pass
+                    // that flow, so it is fully open and the held head gives way.
                     after = OPEN;
                 }
             } else if (before == OPEN) {

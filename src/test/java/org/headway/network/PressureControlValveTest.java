@@ -27,12 +27,16 @@ class PressureControlValveTest {
     private static final double RHO_G = NetworkFixtures.WATER.density() * 9.80665;
 
     private static PressureControlValve valve(String id, boolean reducing, double setting) {
+        return valve(id, reducing, setting, 60);
+    }
+
+    private static PressureControlValve valve(String id, boolean reducing, double setting, double kv) {
         return new PressureControlValve(
                 id,
                 id,
                 reducing,
                 setting,
-                LocalLoss.ofFlowCoefficient(FlowCoefficientValve.ofKv(id + "-open", "", 60)));
+                LocalLoss.ofFlowCoefficient(FlowCoefficientValve.ofKv(id + "-open", "", kv)));
     }
 
     /** Reservoir → p1 → a → PRV → b → p2 → c (demand 10 L/s), all junctions at elevation 0. */
@@ -77,6 +81,31 @@ class PressureControlValveTest {
     }
 
     @Test
+    void aReducingValveTooSmallForTheDemandRunsFullyOpen() {
+        // Kv 2 passes 10 L/s (36 m³/h) only with (36/2)² bar ≈ 330 m of loss: far more than the 100 m
+        // reservoir leaves above the setting, so no throttling can hold 300 kPa; the valve is fully open.
+        Network net = network(
+                "colebrook",
+                List.of(
+                        Node.fixedHead("R", 100, 100),
+                        Node.junction("a", 0, 0),
+                        Node.junction("b", 0, 0),
+                        Node.junction("c", 0, 0.01)),
+                List.of(
+                        link(pipe("p1", 300, 0.15, 4.5e-5), "R", "a"),
+                        link(valve("prv", true, 300_000, 2), "a", "b"),
+                        link(pipe("p2", 200, 0.1, 4.5e-5), "b", "c")));
+        NetworkResult r = SOLVER.solve(net);
+        assertTrue(r.converged(), r.cautions()::toString);
+        assertEquals("open", r.link("prv").orElseThrow().status());
+        FlowContext ctx = net.context();
+        double hb = 100
+                - net.links().get(0).element().headLoss(0.01, ctx)
+                - net.links().get(1).element().headLoss(0.01, ctx);
+        assertEquals(hb, r.node("b").orElseThrow().head(), 1e-6);
+    }
+
+    @Test
     void reverseHeadShutsTheReducingValve() {
         Network net = network(
                 "colebrook",
@@ -107,7 +136,8 @@ class PressureControlValveTest {
                         Node.fixedHead("T", 10, 10)),
                 List.of(
                         link(pipe("main", 2000, 0.15, 4.5e-5), "R", "a"),
-                        link(valve("psv", false, 400_000), "a", "b"),
+                        // Kv 400: fully open it would lose about 1 m at the ~38 L/s the main gives, so it can hold.
+                        link(valve("psv", false, 400_000, 400), "a", "b"),
                         link(pipe("tail", 50, 0.15, 4.5e-5), "b", "T")));
         NetworkResult r = SOLVER.solve(net);
         assertTrue(r.converged(), r.cautions()::toString);
