@@ -20,8 +20,8 @@ import org.headway.system.Segment;
  * node of a pump that carries flow. Paths use links that carry flow other than pumps, so a path
  * starts at a reservoir or at a pump's discharge. A <b>terminal</b> is a junction with positive
  * demand out of which no link carries flow (the end of a branch, or the point where two flows of a
- * loop meet), or, in a closed circuit, the suction node of a running pump that no fixed-head node
- * feeds. The links carrying flow, pumps left out, form a directed acyclic graph in a solved network
+ * loop meet), or, in a closed circuit, the suction node of a running pump when it is the
+ * circuit's pressure reference or a junction that no fixed-head (supply) node feeds. The links carrying flow, pumps left out, form a directed acyclic graph in a solved network
  * (the head falls along each of them); a cycle, which only a circulation through zero-loss links
  * could make, is reported and the nodes on it get no path.
  *
@@ -146,7 +146,7 @@ public record IndexCircuit(List<TerminalPath> paths, Optional<TerminalPath> inde
                 best[i] = head[i];
                 bestSource[i] = i;
             }
-            fedByFixed[i] = network.nodes().get(i).headIsFixed();
+            fedByFixed[i] = network.nodes().get(i).kind() == Node.Kind.FIXED_HEAD;
         }
         double[] predFlow = new double[nNodes];
         while (head0 < tail) {
@@ -190,7 +190,8 @@ public record IndexCircuit(List<TerminalPath> paths, Optional<TerminalPath> inde
         }
         for (int[] pump : runningPumps) {
             int suction = pump[0];
-            if (!network.nodes().get(suction).headIsFixed() && !fedByFixed[suction]) {
+            Node.Kind kind = network.nodes().get(suction).kind();
+            if (kind == Node.Kind.REFERENCE || (kind == Node.Kind.JUNCTION && !fedByFixed[suction])) {
                 terminal[suction] = true;
             }
         }
