@@ -39,7 +39,8 @@ import org.headway.units.QuantityKind;
  * columns {@code notes} and {@code comment} are ignored; any other unknown column is refused, so
  * that a misspelt {@code diamter} is not silently dropped.
  *
- * <p>Node columns: {@code id}, {@code elevation}, {@code demand}, {@code fixed_head}, and optional
+ * <p>Node columns: {@code id}, {@code elevation}, {@code demand} (category {@code base}), any number
+ * of {@code demand_NAME} (a demand of category NAME), {@code fixed_head}, and optional
  * {@code fixed_pressure}, {@code reference} ({@code yes}/{@code no}), {@code x}, {@code y}, {@code
  * name}. Link columns: {@code id}, {@code from}, {@code to}, {@code kind} ({@code pipe} when blank;
  * {@code valve}, {@code component}, {@code check-valve}, {@code flow-control} (with {@code setting}
