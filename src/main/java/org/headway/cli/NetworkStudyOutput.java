@@ -66,6 +66,9 @@ final class NetworkStudyOutput {
         "case", "terminal", "source", "head_loss [m]", "length [m]", "index_circuit", "links"
     };
 
+    /** Terminal paths listed in the text output; the rest are counted. */
+    static final int TEXT_PATHS = 20;
+
     private NetworkStudyOutput() {}
 
     // ---------------------------------------------------------------- JSON
@@ -271,7 +274,13 @@ final class NetworkStudyOutput {
         route.add(index.nodes().get(index.nodes().size() - 1));
         out.println("  route: " + String.join(" ", route));
         out.printf(Locale.ROOT, "  %-16s %-16s %12s%n", "terminal", "source", "loss [" + hu + "]");
-        for (IndexCircuit.TerminalPath p : circuit.paths()) {
+        List<IndexCircuit.TerminalPath> shown =
+                circuit.paths().subList(0, Math.min(TEXT_PATHS, circuit.paths().size()));
+        if (!shown.contains(index)) {
+            shown = new ArrayList<>(shown);
+            shown.add(index);
+        }
+        for (IndexCircuit.TerminalPath p : shown) {
             out.printf(
                     Locale.ROOT,
                     "  %-16s %-16s %12s%s%n",
@@ -279,6 +288,12 @@ final class NetworkStudyOutput {
                     NetworkOutput.clip(p.source(), 16),
                     NetworkOutput.q(p.headLoss(), QuantityKind.HEAD, u),
                     p == index ? "  ← index circuit" : "");
+        }
+        if (circuit.paths().size() > shown.size()) {
+            out.printf(
+                    Locale.ROOT,
+                    "  … and %d more terminals (all in the JSON and in --output's network-terminal-paths.csv)%n",
+                    circuit.paths().size() - shown.size());
         }
     }
 

@@ -115,15 +115,23 @@ public record IndexCircuit(List<TerminalPath> paths, Optional<TerminalPath> inde
             }
         }
         // Kahn's topological order over the links that carry flow.
+        // Out-links of each node in compressed rows (int arrays: networks of 10⁶ nodes stay small).
         int[] indegree = new int[nNodes];
-        List<List<Integer>> outLinks = new ArrayList<>(nNodes);
-        for (int i = 0; i < nNodes; i++) {
-            outLinks.add(new ArrayList<>());
-        }
+        int[] outStart = new int[nNodes + 1];
         for (int k = 0; k < nLinks; k++) {
             if (edge[k]) {
                 indegree[down[k]]++;
-                outLinks.get(up[k]).add(k);
+                outStart[up[k] + 1]++;
+            }
+        }
+        for (int i = 0; i < nNodes; i++) {
+            outStart[i + 1] += outStart[i];
+        }
+        int[] outLink = new int[outStart[nNodes]];
+        int[] fill = java.util.Arrays.copyOf(outStart, nNodes);
+        for (int k = 0; k < nLinks; k++) {
+            if (edge[k]) {
+                outLink[fill[up[k]]++] = k;
             }
         }
         int[] order = new int[nNodes];
@@ -151,7 +159,8 @@ public record IndexCircuit(List<TerminalPath> paths, Optional<TerminalPath> inde
         double[] predFlow = new double[nNodes];
         while (head0 < tail) {
             int u = order[head0++];
-            for (int k : outLinks.get(u)) {
+            for (int a = outStart[u]; a < outStart[u + 1]; a++) {
+                int k = outLink[a];
                 int v = down[k];
                 fedByFixed[v] |= fedByFixed[u];
                 double q = Math.abs(result.links().get(k).flow());
