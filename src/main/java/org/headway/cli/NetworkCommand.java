@@ -13,12 +13,14 @@ import org.headway.caution.InputException;
 import org.headway.network.Network;
 import org.headway.network.NetworkResult;
 import org.headway.network.NetworkSolver;
+import org.headway.network.NetworkStudy;
 import org.headway.pipe.Catalog;
 import org.headway.project.AtomicFiles;
 import org.headway.project.LineList;
 import org.headway.project.Project;
 import org.headway.project.ProjectFile;
 import org.headway.project.ProjectResolver;
+import org.headway.units.Quantities;
 import org.headway.units.UnitSystem;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -109,17 +111,52 @@ public final class NetworkCommand implements Callable<Integer> {
             description = "Print the time of each phase (read, resolve, solve, write) to standard error.")
     boolean timings;
 
+    @Option(
+            names = "--cases",
+            paramLabel = "CASES.csv",
+            description = {
+                "Demand cases, solved with the network's own demands in one run:",
+                "columns case, multiplier, and optional demand (a category) or",
+                "node and value (that junction's demand in the case)."
+            })
+    Path cases;
+
+    @Option(
+            names = "--min-pressure",
+            paramLabel = "P",
+            description = "Lowest gauge pressure at a junction in any case, with its unit (e.g. \"200 kPa\").")
+    String minPressure;
+
+    @Option(
+            names = "--max-pressure",
+            paramLabel = "P",
+            description = "Highest gauge pressure at a junction in any case, with its unit (e.g. \"8 bar\").")
+    String maxPressure;
+
+    @Option(
+            names = "--index-chart",
+            paramLabel = "FILE.png",
+            description = "Draw energy and hydraulic grade and elevation along the index circuit into FILE.png.")
+    Path indexChart;
+
     @Override
     public Integer call() {
         long t0 = System.nanoTime();
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
         Project.NetworkSpec spec = LineList.read(nodes, links, catalog, friction.equals("hazen-williams"));
+        if (cases != null) {
+            spec = spec.withDemandCases(LineList.readCases(cases, spec));
+        }
         Project project = Project.network(title, fluid, temperature, friction, spec);
+        if (minPressure != null || maxPressure != null) {
+            project = project.withPressureLimits(new Project.PressureLimitsSpec(
+                    pressureOption(minPressure, "--min-pressure"), pressureOption(maxPressure, "--max-pressure")));
+        }
         long t1 = System.nanoTime();
-        Network network;
+        NetworkStudy network;
         try {
-            network = ProjectResolver.resolveNetwork(
+            network = ProjectResolver.resolveNetworkStudy(
                     project, catalog, nodes.toAbsolutePath().getParent());
         } catch (InputException e) {
             throw new InputException(
@@ -135,7 +172,7 @@ public final class NetworkCommand implements Callable<Integer> {
         // The typed line list is no longer needed: let it go before the solve needs the heap.
         spec = null;
         project = null;
-        int code = solveAndPrint(spec(), network, format, system, output, force, timings);
+        int code = solveStudyAndPrint(spec(), network, format, system, output, force, timings, indexChart);
         if (timings) {
             spec().commandLine()
                     .getErr()
@@ -152,7 +189,112 @@ public final class NetworkCommand implements Callable<Integer> {
         return spec;
     }
 
-    /** Solves and writes the result; shared with {@code solve} for network projects. */
+    /** A pressure option's text, checked here so that a bad value names the option; empty when not given. */
+    private static String pressureOption(String text, String option) {
+        if (text == null) {
+            return "";
+        }
+        Quantities.parsePressure(text, option);
+        return text;
+    }
+
+    /**
+     * Solves a study (the network's own demands, then each demand case) and writes it: the keys of
+     * one solve unchanged, plus pumps, index circuit, terminal paths, and with cases or limits the
+     * cases and the pressure table. Shared with {@code solve} for network projects.
+     */
+    static int solveStudyAndPrint(
+            picocli.CommandLine.Model.CommandSpec spec,
+            NetworkStudy study,
+            Format format,
+            UnitSystem system,
+            Path output,
+            boolean force,
+            boolean timings,
+            Path indexChart) {
+        long t0 = System.nanoTime();
+        NetworkStudy.Result result = study.solve(NetworkSolver.standard());
+        long t1 = System.nanoTime();
+        PrintWriter out = spec.commandLine().getOut();
+        NetworkResult base = result.base().result();
+        try {
+            switch (format) {
+                case json -> out.println(NetworkStudyOutput.json(study, result));
+                case csv -> {
+                    NetworkOutput.nodesCsv(base, out);
+                    out.println();
+                    NetworkOutput.linksCsv(base, out);
+                    if (!result.cases().isEmpty()) {
+                        out.println();
+                        NetworkStudyOutput.caseNodesCsv(result, out);
+                        out.println();
+                        NetworkStudyOutput.caseLinksCsv(result, out);
+                    }
+                }
+                default -> NetworkStudyOutput.text(out, study, result, system);
+            }
+            if (output != null) {
+                Files.createDirectories(output);
+                write(
+                        output.resolve("network.json"),
+                        force,
+                        w -> w.append(NetworkStudyOutput.json(study, result)).append('\n'));
+                write(output.resolve("network-nodes.csv"), force, w -> NetworkOutput.nodesCsv(base, w));
+                write(output.resolve("network-links.csv"), force, w -> NetworkOutput.linksCsv(base, w));
+                if (!result.base().pumps().pumps().isEmpty()) {
+                    write(output.resolve("network-pumps.csv"), force, w -> NetworkStudyOutput.pumpsCsv(result, w));
+                }
+                if (!result.base().circuit().paths().isEmpty()) {
+                    write(
+                            output.resolve("network-terminal-paths.csv"),
+                            force,
+                            w -> NetworkStudyOutput.terminalPathsCsv(result, w));
+                }
+                if (!result.cases().isEmpty()) {
+                    write(
+                            output.resolve("network-cases-nodes.csv"),
+                            force,
+                            w -> NetworkStudyOutput.caseNodesCsv(result, w));
+                    write(
+                            output.resolve("network-cases-links.csv"),
+                            force,
+                            w -> NetworkStudyOutput.caseLinksCsv(result, w));
+                }
+                if (result.pressureCheck().isPresent()) {
+                    write(
+                            output.resolve("network-pressure-checks.csv"),
+                            force,
+                            w -> NetworkStudyOutput.pressureChecksCsv(
+                                    result.pressureCheck().get(), w));
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        out.flush();
+        if (indexChart != null && !NetworkStudyOutput.indexChart(result, system, indexChart, force)) {
+            spec.commandLine()
+                    .getErr()
+                    .println(
+                            "headway: --index-chart: the network has no index circuit (no terminal); no chart written");
+        }
+        if (timings) {
+            spec.commandLine()
+                    .getErr()
+                    .printf(
+                            java.util.Locale.ROOT,
+                            "timings: solve %.3f s (%d iterations%s), write %.3f s%n",
+                            (t1 - t0) * 1e-9,
+                            base.iterations(),
+                            result.cases().isEmpty()
+                                    ? ""
+                                    : " in the base solve, " + result.cases().size() + " cases more",
+                            (System.nanoTime() - t1) * 1e-9);
+        }
+        return result.converged() ? HeadwayCommand.EXIT_OK : HeadwayCommand.EXIT_FAILED;
+    }
+
+    /** Solves a network alone (no cases, no limits) and writes the result. */
     static int solveAndPrint(
             picocli.CommandLine.Model.CommandSpec spec,
             Network network,
@@ -161,44 +303,7 @@ public final class NetworkCommand implements Callable<Integer> {
             Path output,
             boolean force,
             boolean timings) {
-        long t0 = System.nanoTime();
-        NetworkResult result = NetworkSolver.standard().solve(network);
-        long t1 = System.nanoTime();
-        PrintWriter out = spec.commandLine().getOut();
-        try {
-            switch (format) {
-                case json -> out.println(NetworkOutput.json(network, result));
-                case csv -> {
-                    NetworkOutput.nodesCsv(result, out);
-                    out.println();
-                    NetworkOutput.linksCsv(result, out);
-                }
-                default -> NetworkOutput.text(out, network, result, system);
-            }
-            if (output != null) {
-                Files.createDirectories(output);
-                write(
-                        output.resolve("network.json"),
-                        force,
-                        w -> w.append(NetworkOutput.json(network, result)).append('\n'));
-                write(output.resolve("network-nodes.csv"), force, w -> NetworkOutput.nodesCsv(result, w));
-                write(output.resolve("network-links.csv"), force, w -> NetworkOutput.linksCsv(result, w));
-            }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-        out.flush();
-        if (timings) {
-            spec.commandLine()
-                    .getErr()
-                    .printf(
-                            java.util.Locale.ROOT,
-                            "timings: solve %.3f s (%d iterations), write %.3f s%n",
-                            (t1 - t0) * 1e-9,
-                            result.iterations(),
-                            (System.nanoTime() - t1) * 1e-9);
-        }
-        return result.converged() ? HeadwayCommand.EXIT_OK : HeadwayCommand.EXIT_FAILED;
+        return solveStudyAndPrint(spec, NetworkStudy.of(network), format, system, output, force, timings, null);
     }
 
     private interface Body {

@@ -36,7 +36,7 @@ final class NetworkOutput {
 
     private NetworkOutput() {}
 
-    private static void put(ObjectNode n, String key, double v) {
+    static void put(ObjectNode n, String key, double v) {
         if (Double.isFinite(v)) {
             n.put(key, v);
         } else {
@@ -45,6 +45,25 @@ final class NetworkOutput {
     }
 
     static String json(Network net, NetworkResult r) {
+        return write(tree(net, r));
+    }
+
+    /** The JSON text of a tree, indented. */
+    static String write(ObjectNode root) {
+        try {
+            return MAPPER.writeValueAsString(root);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    /** A fresh JSON object of this output's mapper. */
+    static ObjectNode object() {
+        return MAPPER.createObjectNode();
+    }
+
+    /** The JSON tree of one solve, the keys of {@link #json}. */
+    static ObjectNode tree(Network net, NetworkResult r) {
         ObjectNode root = MAPPER.createObjectNode();
         root.put("title", net.title());
         root.put("fluid", net.context().fluid().fluid());
@@ -84,14 +103,10 @@ final class NetworkOutput {
             l.element().ifPresent(e -> o.put("law", e.law()));
         }
         RunJson.putCautions(root, r.cautions());
-        try {
-            return MAPPER.writeValueAsString(root);
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException(e);
-        }
+        return root;
     }
 
-    private static String num(double v) {
+    static String num(double v) {
         return Double.isFinite(v) ? Double.toString(v) : "";
     }
 
@@ -130,15 +145,21 @@ final class NetworkOutput {
         p.flush();
     }
 
-    private static String q(double si, QuantityKind kind, UnitSystem u) {
+    static String q(double si, QuantityKind kind, UnitSystem u) {
         return Double.isFinite(si) ? Quantities.formatNumber(Quantities.fromSi(si, kind, u)) : "—";
     }
 
-    private static String clip(String s, int width) {
+    static String clip(String s, int width) {
         return s.length() <= width ? s : s.substring(0, width - 1) + "…";
     }
 
     static void text(PrintWriter out, Network net, NetworkResult r, UnitSystem u) {
+        tables(out, net, r, u);
+        cautions(out, r.cautions());
+    }
+
+    /** The text output without its cautions: title, fluid, solve, node and link tables. */
+    static void tables(PrintWriter out, Network net, NetworkResult r, UnitSystem u) {
         out.println(net.title().isEmpty() ? "Network" : net.title());
         var f = net.context().fluid();
         out.printf(
@@ -210,9 +231,13 @@ final class NetworkOutput {
         }
         out.println("(flow positive from → to; heads are energy heads with node velocity heads neglected; pressures"
                 + " gauge)");
+    }
+
+    /** The cautions, one a line with severity and basis. */
+    static void cautions(PrintWriter out, java.util.List<Caution> cautions) {
         out.println();
         out.println("Cautions:");
-        for (Caution c : r.cautions()) {
+        for (Caution c : cautions) {
             out.println("  [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + c.message() + " (basis: "
                     + c.basis() + ")");
         }

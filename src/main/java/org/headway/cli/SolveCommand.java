@@ -107,9 +107,9 @@ public final class SolveCommand implements Callable<Integer> {
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
         org.headway.project.Project loaded = ProjectFile.load(project);
         if (loaded.isNetwork()) {
-            org.headway.network.Network network;
+            org.headway.network.NetworkStudy network;
             try {
-                network = ProjectResolver.resolveNetwork(
+                network = ProjectResolver.resolveNetworkStudy(
                         loaded, catalog, project.toAbsolutePath().getParent());
             } catch (InputException e) {
                 throw new InputException(SheetCommand.fileName(project), e.getMessage(), e);
@@ -119,8 +119,8 @@ public final class SolveCommand implements Callable<Integer> {
                         "--mode",
                         "a network is solved for its demands and fixed heads; --mode " + mode + " is for runs");
             }
-            return NetworkCommand.solveAndPrint(
-                    spec, network, NetworkCommand.Format.valueOf(format.name()), system, null, false, false);
+            return NetworkCommand.solveStudyAndPrint(
+                    spec, network, NetworkCommand.Format.valueOf(format.name()), system, null, false, false, null);
         }
         ResolvedProject resolved = resolve(loaded, catalog);
         PipeRun run = resolved.run();

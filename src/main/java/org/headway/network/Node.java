@@ -47,12 +47,16 @@ public record Node(
     /**
      * One named demand at a junction.
      *
-     * @param name what the demand is (e.g. {@code base}, {@code hydrant})
+     * @param name what the demand is, its category (e.g. {@code base}, {@code domestic}); demand
+     *     cases scale demands by this name
      * @param flow flow out of the network (m³/s); negative for an inflow
      */
     public record Demand(String name, double flow) {
+        /** Name of a demand given without one (a line list's plain {@code demand} column). */
+        public static final String BASE = "base";
+
         public Demand {
-            name = name == null || name.isBlank() ? "demand" : name;
+            name = name == null || name.isBlank() ? BASE : name;
             InputException.requireFinite("demand " + name, flow);
         }
     }
@@ -90,7 +94,7 @@ public record Node(
                 id,
                 Kind.JUNCTION,
                 elevation,
-                demand == 0 ? List.of() : List.of(new Demand("demand", demand)),
+                demand == 0 ? List.of() : List.of(new Demand(Demand.BASE, demand)),
                 OptionalDouble.empty(),
                 OptionalDouble.empty(),
                 OptionalDouble.empty());

@@ -34,7 +34,8 @@ import org.headway.units.QuantityKind;
  * columns {@code notes} and {@code comment} are ignored; any other unknown column is refused, so
  * that a misspelt {@code diamter} is not silently dropped.
  *
- * <p>Node columns: {@code id}, {@code elevation}, {@code demand}, {@code fixed_head}, and optional
+ * <p>Node columns: {@code id}, {@code elevation}, {@code demand} (category {@code base}), any number
+ * of {@code demand_NAME} (a demand of category NAME), {@code fixed_head}, and optional
  * {@code fixed_pressure}, {@code reference} ({@code yes}/{@code no}), {@code x}, {@code y}, {@code
  * name}. Link columns: {@code id}, {@code from}, {@code to}, {@code kind} ({@code pipe} when blank;
  * {@code valve}, {@code component}, {@code check-valve}, {@code flow-control} (with {@code setting}
@@ -51,6 +52,15 @@ public final class LineList {
     /** Node columns understood. */
     public static final List<String> NODE_COLUMNS =
             List.of("id", "name", "elevation", "demand", "fixed_head", "fixed_pressure", "reference", "x", "y");
+
+    /**
+     * Prefix of a node column giving a named demand: {@code demand_domestic [L/s]} is the demand of
+     * category {@code domestic} (the plain {@code demand} column is category {@code base}).
+     */
+    public static final String NAMED_DEMAND_PREFIX = "demand_";
+
+    /** Demand-case columns understood. */
+    public static final List<String> CASE_COLUMNS = List.of("case", "multiplier", "demand", "node", "value");
 
     /** Link columns understood. */
     public static final List<String> LINK_COLUMNS = List.of(
@@ -188,11 +198,136 @@ public final class LineList {
                     r.quantity("fixed_pressure", QuantityKind.PRESSURE),
                     reference.equals("yes") || reference.equals("true") || reference.equals("1"),
                     r.quantity("x", QuantityKind.LENGTH),
-                    r.quantity("y", QuantityKind.LENGTH)));
+                    r.quantity("y", QuantityKind.LENGTH),
+                    namedDemands(t, r)));
         }
         if (out.isEmpty()) {
             throw new InputException(t.name, "has no node lines");
         }
+        return out;
+    }
+
+    private static Map<String, String> namedDemands(Table t, Row r) {
+        Map<String, String> out = new LinkedHashMap<>();
+        for (String column : t.column.keySet()) {
+            if (column.startsWith(NAMED_DEMAND_PREFIX)) {
+                String v = r.flow(column);
+                if (!v.isEmpty()) {
+                    out.put(column.substring(NAMED_DEMAND_PREFIX.length()), v);
+                }
+            }
+        }
+        return out;
+    }
+
+    /**
+     * Reads a demand-case list: one line per setting, columns {@code case} (required), {@code
+     * multiplier}, {@code demand}, {@code node}, {@code value}. A line with {@code case} and
+     * {@code multiplier} only sets the case's factor on every demand; with {@code demand} (a
+     * category) and {@code multiplier}, that category's factor; with {@code node} and {@code value}
+     * (a flow), that junction's total demand in the case. A line with only {@code case} declares a
+     * case of the network's own demands. Cases keep the order of their first line.
+     *
+     * @param file the CSV
+     * @param network the network the cases are for: nodes and categories named must exist
+     */
+    public static List<Project.DemandCaseSpec> readCases(Path file, Project.NetworkSpec network) {
+        return cases(Table.read(file, CASE_COLUMNS), network);
+    }
+
+    /** Reads a demand-case list from text (tests), naming the file as given. */
+    public static List<Project.DemandCaseSpec> parseCases(String name, String text, Project.NetworkSpec network) {
+        return cases(Table.parse(name, text, CASE_COLUMNS), network);
+    }
+
+    private static final class CaseDraft {
+        String multiplier = "";
+        final Map<String, String> categories = new LinkedHashMap<>();
+        final Map<String, String> nodes = new LinkedHashMap<>();
+    }
+
+    private static List<Project.DemandCaseSpec> cases(Table t, Project.NetworkSpec network) {
+        t.require("case");
+        Map<String, Project.NodeSpec> nodeById = new LinkedHashMap<>();
+        Set<String> categories = new java.util.LinkedHashSet<>();
+        for (Project.NodeSpec n : network.nodes()) {
+            nodeById.put(n.id(), n);
+            if (!n.demand().isEmpty()) {
+                categories.add("base");
+            }
+            categories.addAll(n.demands().keySet());
+        }
+        Map<String, CaseDraft> drafts = new LinkedHashMap<>();
+        for (Row r : t.rows) {
+            String name = r.text("case");
+            if (name.isEmpty()) {
+                throw r.error("case", "every line needs the name of its case");
+            }
+            CaseDraft d = drafts.computeIfAbsent(name, k -> new CaseDraft());
+            String demand = r.text("demand");
+            String node = r.text("node");
+            String multiplier = r.text("multiplier");
+            String value = r.flow("value");
+            if (!multiplier.isEmpty()) {
+                try {
+                    ProjectResolver.multiplier(multiplier, "multiplier");
+                } catch (InputException e) {
+                    throw r.error("multiplier", e.problem());
+                }
+            }
+            if (!demand.isEmpty() && !node.isEmpty()) {
+                throw r.error("node", "give a demand category or a node on one line, not both");
+            }
+            if (!node.isEmpty()) {
+                Project.NodeSpec n = nodeById.get(node);
+                if (n == null) {
+                    throw r.error("node", "node \"" + node + "\" is not in the node list");
+                }
+                if (!n.fixedHead().isEmpty() || !n.fixedPressure().isEmpty()) {
+                    throw r.error("node", "node \"" + node + "\" has a fixed head; cases change junction demands only");
+                }
+                if (!multiplier.isEmpty()) {
+                    throw r.error("multiplier", "a node line gives the node's demand in value, not a multiplier");
+                }
+                if (value.isEmpty()) {
+                    throw r.error("value", "a node line needs the node's demand in this case (a flow)");
+                }
+                if (d.nodes.put(node, value) != null) {
+                    throw r.error("node", "case " + name + " gives node " + node + " twice");
+                }
+            } else if (!demand.isEmpty()) {
+                if (!categories.contains(demand)) {
+                    throw r.error(
+                            "demand",
+                            "no node has a demand of category \"" + demand + "\"; the categories are "
+                                    + (categories.isEmpty() ? "(none)" : String.join(", ", categories)));
+                }
+                if (multiplier.isEmpty()) {
+                    throw r.error("multiplier", "a demand-category line needs its multiplier");
+                }
+                if (!value.isEmpty()) {
+                    throw r.error("value", "a value belongs on a node line; a category takes a multiplier");
+                }
+                if (d.categories.put(demand, multiplier) != null) {
+                    throw r.error("demand", "case " + name + " gives category " + demand + " twice");
+                }
+            } else {
+                if (!value.isEmpty()) {
+                    throw r.error("value", "a value needs the node it is for");
+                }
+                if (!multiplier.isEmpty()) {
+                    if (!d.multiplier.isEmpty()) {
+                        throw r.error("multiplier", "case " + name + " has its overall multiplier on an earlier line");
+                    }
+                    d.multiplier = multiplier;
+                }
+            }
+        }
+        if (drafts.isEmpty()) {
+            throw new InputException(t.name, "has no case lines");
+        }
+        List<Project.DemandCaseSpec> out = new ArrayList<>();
+        drafts.forEach((name, d) -> out.add(new Project.DemandCaseSpec(name, d.multiplier, d.categories, d.nodes)));
         return out;
     }
 
@@ -529,7 +664,11 @@ public final class LineList {
             if (key.equals("notes") || key.equals("comment")) {
                 return;
             }
-            if (!known.contains(key)) {
+            boolean namedDemand = known == NODE_COLUMNS
+                    && key.startsWith(NAMED_DEMAND_PREFIX)
+                    && key.length() > NAMED_DEMAND_PREFIX.length()
+                    && !key.equals(NAMED_DEMAND_PREFIX + "base");
+            if (!known.contains(key) && !namedDemand) {
                 throw new InputException(
                         name + " header, column " + (c + 1),
                         "unknown column \"" + h + "\"; known columns: " + String.join(", ", known)

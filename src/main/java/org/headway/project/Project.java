@@ -111,6 +111,26 @@ public record Project(
                 Optional.of(net));
     }
 
+    /** The same project with other gauge-pressure limits. */
+    public Project withPressureLimits(PressureLimitsSpec limits) {
+        return new Project(
+                title,
+                titleBlock,
+                fluid,
+                flow,
+                flowUncertainty,
+                friction,
+                elements,
+                ends,
+                this.limits,
+                sizing,
+                curve,
+                site,
+                limits,
+                inletLevel,
+                network);
+    }
+
     /** Whether this project holds a network (nodes and links) rather than a series run. */
     public boolean isNetwork() {
         return network.isPresent();
@@ -296,7 +316,7 @@ public record Project(
      * @param id stable id
      * @param name optional name
      * @param elevation elevation (a length)
-     * @param demand demand out of the network (a flow; blank = 0)
+     * @param demand demand out of the network (a flow; blank = 0), of category {@code base}
      * @param fixedHead head of a fixed-head node (a length on the elevations' datum), or blank
      * @param fixedPressure gauge pressure held at a fixed-pressure node (its head is elevation plus
      *     pressure over ρg), or blank
@@ -304,6 +324,8 @@ public record Project(
      *     fixedPressure)
      * @param x drawing position, optional
      * @param y drawing position, optional
+     * @param demands further named demands (category → flow text), in order; demand cases scale them
+     *     by category
      */
     public record NodeSpec(
             String id,
@@ -314,7 +336,8 @@ public record Project(
             String fixedPressure,
             boolean reference,
             String x,
-            String y) {
+            String y,
+            java.util.Map<String, String> demands) {
         public NodeSpec {
             name = name == null ? "" : name;
             elevation = elevation == null ? "" : elevation;
@@ -323,6 +346,22 @@ public record Project(
             fixedPressure = fixedPressure == null ? "" : fixedPressure;
             x = x == null ? "" : x;
             y = y == null ? "" : y;
+            demands = java.util.Collections.unmodifiableMap(
+                    new java.util.LinkedHashMap<>(demands == null ? java.util.Map.of() : demands));
+        }
+
+        /** A node with at most its one plain demand. */
+        public NodeSpec(
+                String id,
+                String name,
+                String elevation,
+                String demand,
+                String fixedHead,
+                String fixedPressure,
+                boolean reference,
+                String x,
+                String y) {
+            this(id, name, elevation, demand, fixedHead, fixedPressure, reference, x, y, java.util.Map.of());
         }
     }
 
@@ -340,11 +379,45 @@ public record Project(
         }
     }
 
-    /** A network as typed: nodes and links. */
-    public record NetworkSpec(List<NodeSpec> nodes, List<LinkSpec> links) {
+    /** A network as typed: nodes, links and demand cases (which may be none). */
+    public record NetworkSpec(List<NodeSpec> nodes, List<LinkSpec> links, List<DemandCaseSpec> demandCases) {
         public NetworkSpec {
             nodes = List.copyOf(nodes);
             links = List.copyOf(links);
+            demandCases = List.copyOf(demandCases == null ? List.of() : demandCases);
+        }
+
+        /** A network without demand cases. */
+        public NetworkSpec(List<NodeSpec> nodes, List<LinkSpec> links) {
+            this(nodes, links, List.of());
+        }
+
+        /** The same network with these demand cases. */
+        public NetworkSpec withDemandCases(List<DemandCaseSpec> cases) {
+            return new NetworkSpec(nodes, links, cases);
+        }
+    }
+
+    /**
+     * A demand case as typed.
+     *
+     * @param name unique name ({@code peak}, {@code night}, {@code fire}…)
+     * @param multiplier factor on every demand (a ratio as text; blank = 1)
+     * @param demandMultipliers factor on the demands of a category (category → ratio text), on top of
+     *     the multiplier
+     * @param nodeDemands a junction's total demand in this case (node id → flow text), replacing its
+     *     own
+     */
+    public record DemandCaseSpec(
+            String name,
+            String multiplier,
+            java.util.Map<String, String> demandMultipliers,
+            java.util.Map<String, String> nodeDemands) {
+        public DemandCaseSpec {
+            name = name == null ? "" : name;
+            multiplier = multiplier == null ? "" : multiplier;
+            demandMultipliers = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(demandMultipliers));
+            nodeDemands = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(nodeDemands));
         }
     }
 

@@ -18,6 +18,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.headway.caution.InputException;
@@ -159,7 +160,8 @@ public final class ProjectFile {
                     "pressureLimits",
                     "inletLevel",
                     "nodes",
-                    "links");
+                    "links",
+                    "demandCases");
         }
         Project.TitleBlock titleBlock = Project.TitleBlock.EMPTY;
         if (top.has("reference")) {
@@ -272,6 +274,9 @@ public final class ProjectFile {
                         e.path + ".id", "the id \"" + id + "\" is used by an earlier element; ids must be unique");
             }
             elements.add(element(e, id, kind, List.of()));
+        }
+        if (!isNetwork && top.has("demandCases")) {
+            throw new InputException("demandCases", "demand cases belong to a network project (nodes and links)");
         }
         Optional<Project.NetworkSpec> network = isNetwork ? Optional.of(network(top)) : Optional.empty();
         Project.SiteSpec site = Project.SiteSpec.SEA_LEVEL;
@@ -419,7 +424,17 @@ public final class ProjectFile {
         java.util.Set<String> nodeIds = new java.util.HashSet<>();
         for (int i = 0; i < nl.size(); i++) {
             Obj n = new Obj(nl.get(i), "nodes[" + i + "]");
-            n.allow("id", "name", "elevation", "demand", "fixedHead", "fixedPressure", "reference", "x", "y");
+            n.allow(
+                    "id",
+                    "name",
+                    "elevation",
+                    "demand",
+                    "demands",
+                    "fixedHead",
+                    "fixedPressure",
+                    "reference",
+                    "x",
+                    "y");
             String id = n.text("id", true);
             if (id.isBlank() || !nodeIds.add(id)) {
                 throw new InputException(
@@ -435,7 +450,8 @@ public final class ProjectFile {
                     n.quantity("fixedPressure"),
                     n.has("reference") && n.bool("reference"),
                     n.quantity("x"),
-                    n.quantity("y")));
+                    n.quantity("y"),
+                    n.has("demands") ? quantities(n.object("demands")) : Map.of()));
         }
         List<Project.LinkSpec> links = new ArrayList<>();
         ArrayNode ll = top.array("links", true);
@@ -453,7 +469,43 @@ public final class ProjectFile {
             links.add(
                     new Project.LinkSpec(e.text("from", true), e.text("to", true), element, e.quantity("designFlow")));
         }
-        return new Project.NetworkSpec(nodes, links);
+        List<Project.DemandCaseSpec> cases = new ArrayList<>();
+        if (top.has("demandCases")) {
+            ArrayNode cl = top.array("demandCases", false);
+            java.util.Set<String> names = new java.util.HashSet<>();
+            for (int i = 0; i < cl.size(); i++) {
+                Obj c = new Obj(cl.get(i), "demandCases[" + i + "]");
+                c.allow("name", "multiplier", "demandMultipliers", "nodeDemands");
+                String name = c.text("name", true);
+                if (!names.add(name)) {
+                    throw new InputException(c.at("name"), "the case name \"" + name + "\" is used twice");
+                }
+                cases.add(new Project.DemandCaseSpec(
+                        name,
+                        c.quantity("multiplier"),
+                        c.has("demandMultipliers") ? quantities(c.object("demandMultipliers")) : Map.of(),
+                        c.has("nodeDemands") ? quantities(c.object("nodeDemands")) : Map.of()));
+            }
+        }
+        return new Project.NetworkSpec(nodes, links, cases);
+    }
+
+    /** An object whose every value is a quantity (a name → value table), in order. */
+    private static Map<String, String> quantities(Obj o) {
+        Map<String, String> out = new java.util.LinkedHashMap<>();
+        Iterator<String> names = o.node.fieldNames();
+        while (names.hasNext()) {
+            String key = names.next();
+            if (key.isBlank()) {
+                throw new InputException(o.at(key), "a name must not be empty");
+            }
+            String v = o.quantity(key);
+            if (v.isEmpty()) {
+                throw new InputException(o.at(key), "missing value");
+            }
+            out.put(key, v);
+        }
+        return out;
     }
 
     /**
@@ -629,6 +681,10 @@ public final class ProjectFile {
                 putIf(n, "name", node.name());
                 putIf(n, "elevation", node.elevation());
                 putIf(n, "demand", node.demand());
+                if (!node.demands().isEmpty()) {
+                    ObjectNode d = n.putObject("demands");
+                    node.demands().forEach(d::put);
+                }
                 putIf(n, "fixedHead", node.fixedHead());
                 putIf(n, "fixedPressure", node.fixedPressure());
                 if (node.reference()) {
@@ -646,6 +702,22 @@ public final class ProjectFile {
                 n.put("to", link.to());
                 writeElementFields(n, link.element());
                 putIf(n, "designFlow", link.designFlow());
+            }
+            if (!net.demandCases().isEmpty()) {
+                ArrayNode cases = root.putArray("demandCases");
+                for (Project.DemandCaseSpec c : net.demandCases()) {
+                    ObjectNode n = cases.addObject();
+                    n.put("name", c.name());
+                    putIf(n, "multiplier", c.multiplier());
+                    if (!c.demandMultipliers().isEmpty()) {
+                        ObjectNode m = n.putObject("demandMultipliers");
+                        c.demandMultipliers().forEach(m::put);
+                    }
+                    if (!c.nodeDemands().isEmpty()) {
+                        ObjectNode m = n.putObject("nodeDemands");
+                        c.nodeDemands().forEach(m::put);
+                    }
+                }
             }
         }
         if (!p.ends().equals(Project.EndsSpec.OPEN)) {

@@ -108,6 +108,84 @@ public final class ProjectResolver {
         return new ProjectResolver(catalog, baseFolder).network(project);
     }
 
+    /**
+     * Resolves a network project with its demand cases ({@code demandCases}), its gauge-pressure
+     * limits ({@code pressureLimits}, checked at every junction in every case) and its NPSH margin
+     * ({@code limits.npshMargin}, else {@link DesignLimits#USUAL}'s).
+     *
+     * @throws InputException listing every problem with its JSON path
+     */
+    public static org.headway.network.NetworkStudy resolveNetworkStudy(
+            Project project, Catalog catalog, Path baseFolder) {
+        if (project.network().isEmpty()) {
+            throw new InputException("nodes", "this project is a series run, not a network (no nodes and links)");
+        }
+        return new ProjectResolver(catalog, baseFolder).study(project);
+    }
+
+    private org.headway.network.NetworkStudy study(Project p) {
+        org.headway.network.Network net = network(p);
+        double barometric = net.site().pressure();
+        double density = net.context().fluid().density();
+        PressureLimits limits = attempt("pressureLimits", () -> pressureLimits(p.pressureLimits(), barometric));
+        double margin = p.limits().npshMargin().isEmpty()
+                ? DesignLimits.USUAL.npshMargin()
+                : orZero(attempt(
+                        "limits.npshMargin",
+                        () -> InputException.requireNonNegative(
+                                "npshMargin",
+                                Quantities.parse(p.limits().npshMargin(), QuantityKind.HEAD, "npshMargin"))));
+        List<org.headway.network.DemandCase> cases = new ArrayList<>();
+        List<Project.DemandCaseSpec> specs = p.network().orElseThrow().demandCases();
+        for (int i = 0; i < specs.size(); i++) {
+            Project.DemandCaseSpec c = specs.get(i);
+            String path = "demandCases[" + i + "] (" + c.name() + ")";
+            org.headway.network.DemandCase dc = attempt(path, () -> demandCase(c, density));
+            if (dc != null && attempt(path, () -> dc.applyTo(net)) != null) {
+                cases.add(dc);
+            }
+        }
+        if (!problems.isEmpty()) {
+            String message = problems.size() == 1
+                    ? problems.get(0)
+                    : problems.size() + " problems:\n  " + String.join("\n  ", problems);
+            throw new InputException("", message);
+        }
+        return new org.headway.network.NetworkStudy(net, cases, limits, margin);
+    }
+
+    private static org.headway.network.DemandCase demandCase(Project.DemandCaseSpec c, double density) {
+        if (c.name().isBlank()) {
+            throw new InputException("name", "every demand case needs a name");
+        }
+        double multiplier = c.multiplier().isEmpty() ? 1 : multiplier(c.multiplier(), "multiplier");
+        java.util.Map<String, Double> categories = new java.util.LinkedHashMap<>();
+        c.demandMultipliers().forEach((k, v) -> categories.put(k, multiplier(v, "demandMultipliers." + k)));
+        java.util.Map<String, Double> nodes = new java.util.LinkedHashMap<>();
+        c.nodeDemands().forEach((k, v) -> nodes.put(k, flow(v, density, "nodeDemands." + k)));
+        return new org.headway.network.DemandCase(c.name(), multiplier, categories, nodes);
+    }
+
+    /** A demand multiplier: a plain number (0.4) or a percentage ("40 %"). */
+    static double multiplier(String text, String where) {
+        String t = text.strip();
+        double value;
+        try {
+            value = t.endsWith("%")
+                    ? Double.parseDouble(t.substring(0, t.length() - 1).strip()) / 100.0
+                    : Double.parseDouble(t);
+        } catch (NumberFormatException e) {
+            throw new InputException(where, "expected a multiplier such as 0.4 or \"40 %\", got \"" + text + "\"");
+        }
+        if (!Double.isFinite(value) || value < 0 || value > org.headway.network.DemandCase.MAX_MULTIPLIER) {
+            throw new InputException(
+                    where,
+                    "a demand multiplier must lie between 0 and " + (int) org.headway.network.DemandCase.MAX_MULTIPLIER
+                            + ", got \"" + text + "\"");
+        }
+        return value;
+    }
+
     private org.headway.network.Network network(Project p) {
         double barometric = siteForReadings(p.site()).pressure();
         FluidState fluid = attempt("fluid", () -> fluid(p.fluid(), barometric));
@@ -186,6 +264,18 @@ public final class ProjectResolver {
             z = head.getAsDouble();
         }
         double demand = n.demand().isEmpty() ? 0 : flow(n.demand(), density, "demand");
+        List<org.headway.network.Node.Demand> demands = new ArrayList<>();
+        if (demand != 0) {
+            demands.add(new org.headway.network.Node.Demand(org.headway.network.Node.Demand.BASE, demand));
+        }
+        for (var e : n.demands().entrySet()) {
+            if (e.getKey().equals(org.headway.network.Node.Demand.BASE)) {
+                throw new InputException(
+                        "demands." + e.getKey(), "the category \"base\" is the node's plain demand; give it as demand");
+            }
+            double q = flow(e.getValue(), density, "demands." + e.getKey());
+            demands.add(new org.headway.network.Node.Demand(e.getKey(), q));
+        }
         org.headway.network.Node.Kind kind = n.reference()
                 ? org.headway.network.Node.Kind.REFERENCE
                 : head.isPresent() ? org.headway.network.Node.Kind.FIXED_HEAD : org.headway.network.Node.Kind.JUNCTION;
@@ -194,7 +284,7 @@ public final class ProjectResolver {
                 n.name(),
                 kind,
                 z,
-                demand == 0 ? List.of() : List.of(new org.headway.network.Node.Demand("demand", demand)),
+                demands,
                 head,
                 Double.isNaN(x) ? OptionalDouble.empty() : OptionalDouble.of(x),
                 Double.isNaN(y) ? OptionalDouble.empty() : OptionalDouble.of(y));

@@ -263,40 +263,13 @@ public final class HeadLossCalculator {
                 // NPSHa = (p_abs/ρg + V²/2g) − p_v/ρg at the pump suction; energy grade minus elevation is the gauge
                 // pressure head plus the velocity head.
                 double energyAtPump = run.source().head(rho) - lossesBeforePump;
-                double value = energyAtPump
-                        - elevationAtPump
-                        + (run.atmosphericPressure() - fluid.vapourPressure().getAsDouble()) / (rho * g);
+                double value = SuctionHead.available(
+                        energyAtPump - elevationAtPump,
+                        run.atmosphericPressure(),
+                        fluid.vapourPressure().getAsDouble(),
+                        rho);
                 npsh = OptionalDouble.of(value);
-                OptionalDouble requiredGiven = pump.npshRequiredAt(flow);
-                if (pump.curve().npshRequiredOutsideCurve(flow / pump.speedRatio())) {
-                    cautions.add(Caution.warning(
-                                    "npsh-required-extrapolated",
-                                    String.format(
-                                            Locale.ROOT,
-                                            "flow %.4g L/s lies outside the maker's NPSH-required points; the"
-                                                    + " nearest end value %.3g m is used, and NPSH required usually"
-                                                    + " rises steeply beyond the last point",
-                                            flow * 1000.0,
-                                            requiredGiven.orElse(0.0)),
-                                    "common practice, no source")
-                            .about(pump.id()));
-                }
-                double required = requiredGiven.orElse(0.0);
-                double margin = limits.npshMargin();
-                if (value < required + margin) {
-                    String what = requiredGiven.isPresent()
-                            ? String.format(
-                                    Locale.ROOT, "NPSH required %.3g m plus a margin of %.3g m", required, margin)
-                            : String.format(Locale.ROOT, "a margin of %.3g m (NPSH required unknown)", margin);
-                    cautions.add(Caution.serious(
-                            "cavitation-risk",
-                            String.format(
-                                    Locale.ROOT,
-                                    "NPSH available at the pump inlet is %.3g m, less than %s; the pump may cavitate",
-                                    value,
-                                    what),
-                            "margin: common practice, no source; NPSH definition per ISO 17769-1"));
-                }
+                cautions.addAll(SuctionHead.check(pump, flow, value, limits.npshMargin(), "the pump inlet"));
             } else {
                 cautions.add(Caution.note(
                         "npsh-unknown",
