@@ -168,9 +168,9 @@ public final class FrictionCommand implements Callable<Integer> {
                 .get()
                 .print(out);
         printer.printRecord(
-                Double.toString(result.reynolds()),
-                Double.toString(result.relativeRoughness()),
-                Double.toString(result.frictionFactor()),
+                org.headway.units.Decimals.format(result.reynolds()),
+                org.headway.units.Decimals.format(result.relativeRoughness()),
+                org.headway.units.Decimals.format(result.frictionFactor()),
                 regime(result),
                 result.method(),
                 cautionCodes(result),
@@ -255,7 +255,7 @@ public final class FrictionCommand implements Callable<Integer> {
                     }
                     try {
                         FrictionResult result = evaluateRow(correlation, record, rows, inputColumns.size());
-                        row.add(Double.toString(result.frictionFactor()));
+                        row.add(org.headway.units.Decimals.format(result.frictionFactor()));
                         row.add(regime(result));
                         row.add(result.method());
                         row.add(cautionCodes(result));
@@ -351,7 +351,7 @@ public final class FrictionCommand implements Callable<Integer> {
             throw new InputException(where, "not a number: '" + text + "'");
         }
         try {
-            return Double.parseDouble(text);
+            return org.headway.units.Decimals.parse(text);
         } catch (NumberFormatException e) {
             throw new InputException(where, "not a number: '" + text + "'");
         }

@@ -8,8 +8,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.Locale;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.headway.caution.Caution;
 import org.headway.network.Network;
 import org.headway.network.NetworkResult;
@@ -107,42 +105,75 @@ final class NetworkOutput {
     }
 
     static String num(double v) {
-        return Double.isFinite(v) ? Double.toString(v) : "";
+        return Double.isFinite(v) ? org.headway.units.Decimals.format(v) : "";
     }
 
     static void nodesCsv(NetworkResult r, Appendable out) throws IOException {
-        CSVPrinter p = new CSVPrinter(
-                out, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
-        p.printRecord((Object[]) NODE_HEADER);
+        row(out, NODE_HEADER);
+        String[] cells = new String[6];
         for (NetworkResult.NodeResult n : r.nodes()) {
-            p.printRecord(
-                    SafeText.cell(n.id()),
-                    num(n.head()),
-                    num(n.pressure()),
-                    num(n.elevation()),
-                    num(n.demand()),
-                    n.fixed() ? "yes" : "no");
+            cells[0] = SafeText.cell(n.id());
+            cells[1] = num(n.head());
+            cells[2] = num(n.pressure());
+            cells[3] = num(n.elevation());
+            cells[4] = num(n.demand());
+            cells[5] = n.fixed() ? "yes" : "no";
+            row(out, cells);
         }
-        p.flush();
     }
 
     static void linksCsv(NetworkResult r, Appendable out) throws IOException {
-        CSVPrinter p = new CSVPrinter(
-                out, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
-        p.printRecord((Object[]) LINK_HEADER);
+        row(out, LINK_HEADER);
+        String[] cells = new String[9];
         for (NetworkResult.LinkResult l : r.links()) {
-            p.printRecord(
-                    SafeText.cell(l.id()),
-                    l.kind(),
-                    SafeText.cell(l.from()),
-                    SafeText.cell(l.to()),
-                    num(l.flow()),
-                    num(l.velocity()),
-                    num(l.headLoss()),
-                    num(l.frictionFactor()),
-                    l.status());
+            cells[0] = SafeText.cell(l.id());
+            cells[1] = l.kind();
+            cells[2] = SafeText.cell(l.from());
+            cells[3] = SafeText.cell(l.to());
+            cells[4] = num(l.flow());
+            cells[5] = num(l.velocity());
+            cells[6] = num(l.headLoss());
+            cells[7] = num(l.frictionFactor());
+            cells[8] = l.status();
+            row(out, cells);
         }
-        p.flush();
+    }
+
+    /**
+     * One CSV record (RFC 4180), LF-terminated: a cell is quoted, its quotes doubled, only when it
+     * holds a comma, a quote, a line break or surrounding spaces. Written directly rather than
+     * through a CSV library: a 10⁵-node network writes 3·10⁵ records.
+     */
+    static void row(Appendable out, String... cells) throws IOException {
+        for (int i = 0; i < cells.length; i++) {
+            if (i > 0) {
+                out.append(',');
+            }
+            String c = cells[i];
+            if (needsQuotes(c)) {
+                out.append('"').append(c.replace("\"", "\"\"")).append('"');
+            } else {
+                out.append(c);
+            }
+        }
+        out.append('\n');
+    }
+
+    private static boolean needsQuotes(String c) {
+        int n = c.length();
+        if (n == 0) {
+            return false;
+        }
+        if (c.charAt(0) <= ' ' || c.charAt(n - 1) <= ' ') {
+            return true;
+        }
+        for (int i = 0; i < n; i++) {
+            char ch = c.charAt(i);
+            if (ch == ',' || ch == '"' || ch == '\n' || ch == '\r') {
+                return true;
+            }
+        }
+        return false;
     }
 
     static String q(double si, QuantityKind kind, UnitSystem u) {

@@ -275,7 +275,7 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
     private double number(CSVRecord record, int column, long line) {
         String cell = record.get(column);
         try {
-            double v = Double.parseDouble(cell);
+            double v = org.headway.units.Decimals.parse(cell);
             if (Double.isFinite(v)) {
                 return v;
             }

@@ -545,7 +545,7 @@ public final class Quantities {
             }
         }
         String numberText = t.substring(0, numberEnd);
-        return new Typed(Double.parseDouble(numberText), numberText, t.substring(i), t);
+        return new Typed(Decimals.parse(numberText), numberText, t.substring(i), t);
     }
 
     private static Typed split(String text, String expected, String example, String where) {
@@ -567,7 +567,7 @@ public final class Quantities {
                     expected + " expected as a number and unit (e.g. " + example + "), got \"" + abbreviate(trimmed)
                             + "\"");
         }
-        double number = Double.parseDouble(matcher.group(1));
+        double number = Decimals.parse(matcher.group(1));
         if (!Double.isFinite(number)) {
             throw new InputException(where, "number out of range in \"" + abbreviate(trimmed) + "\"");
         }
