@@ -23,6 +23,12 @@ class ArchitectureTest {
         "org.headway.network.."
     };
 
+    /**
+     * The one core class allowed a library outside the core: it borrows jackson-core's number
+     * routines (FastDoubleParser and Schubfach), which are arithmetic, not a file format.
+     */
+    private static final String DECIMALS = "org.headway.units.Decimals";
+
     private static JavaClasses classes;
 
     @BeforeAll
@@ -37,6 +43,8 @@ class ArchitectureTest {
         ArchRule rule = noClasses()
                 .that()
                 .resideInAnyPackage(CORE)
+                .and()
+                .doNotHaveFullyQualifiedName(DECIMALS)
                 .should()
                 .dependOnClassesThat()
                 .resideInAnyPackage(
@@ -50,6 +58,29 @@ class ArchitectureTest {
                         "org.dhatim..")
                 .because("the engines must run headless, in tests and batch jobs, and stay independent of"
                         + " the file formats and user interfaces at the edges");
+        rule.check(classes);
+    }
+
+    @Test
+    void decimalsBorrowsOnlyNumberRoutines() {
+        ArchRule rule = noClasses()
+                .that()
+                .haveFullyQualifiedName(DECIMALS)
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage(
+                        "javafx..",
+                        "java.awt..",
+                        "javax.swing..",
+                        "picocli..",
+                        "com.fasterxml.jackson.databind..",
+                        "com.fasterxml.jackson.core",
+                        "com.fasterxml.jackson.core.json..",
+                        "org.apache.pdfbox..",
+                        "org.jfree..",
+                        "org.dhatim..")
+                .because("the decimal reader and writer may use jackson-core's number routines"
+                        + " (com.fasterxml.jackson.core.io) and nothing else from the edges");
         rule.check(classes);
     }
 

@@ -408,6 +408,20 @@ public final class NetworkSolver {
             }
         }
 
+        /**
+         * Runs a per-link step that writes only its own link's entries: on both cores for a large
+         * network (the element laws are pure), in order otherwise.
+         */
+        void forEachLink(java.util.function.IntConsumer step) {
+            if (nLinks >= PARALLEL_LINKS) {
+                java.util.stream.IntStream.range(0, nLinks).parallel().forEach(step);
+            } else {
+                for (int k = 0; k < nLinks; k++) {
+                    step.accept(k);
+                }
+            }
+        }
+
         /** Nodes reachable from a fixed-head node through links passing the test (breadth first, int arrays). */
         boolean[] reach(java.util.function.IntPredicate usable) {
             return reach(usable, new boolean[nNodes]);
@@ -554,6 +568,11 @@ public final class NetworkSolver {
                 iterations++;
                 java.util.Arrays.fill(diag, 0);
                 java.util.Arrays.fill(off, 0);
+                forEachLink(k -> {
+                    if (status[k] == OPEN) {
+                        g[k] = slope(k, flow[k]);
+                    }
+                });
                 for (int i = 0; i < nNodes; i++) {
                     int j = junction[i];
                     if (j >= 0) {
@@ -576,7 +595,6 @@ public final class NetworkSolver {
                     if (status[k] != OPEN) {
                         continue;
                     }
-                    g[k] = slope(k, flow[k]);
                     double w = 1 / g[k];
                     int jf = junction[from[k]];
                     int jt = junction[to[k]];
@@ -892,11 +910,10 @@ public final class NetworkSolver {
 
         /** Fills h and e for open links; returns the largest |e|. */
         double energyResidual(double[] h, double[] e) {
-            double max = 0;
-            for (int k = 0; k < nLinks; k++) {
+            forEachLink(k -> {
                 if (status[k] != OPEN) {
                     e[k] = 0;
-                    continue;
+                    return;
                 }
                 double hk;
                 try {
@@ -906,6 +923,9 @@ public final class NetworkSolver {
                 }
                 h[k] = hk;
                 e[k] = hk - (head[from[k]] - head[to[k]]);
+            });
+            double max = 0;
+            for (int k = 0; k < nLinks; k++) {
                 double a = Math.abs(e[k]);
                 if (!(a <= max)) {
                     max = a;
@@ -1093,66 +1113,87 @@ public final class NetworkSolver {
                                 + "; air may be drawn in at joints and air valves",
                         "common practice, no source"));
             }
+            // Each link's report depends on its own state only, so the reports are made on both cores
+            // for a large network and gathered in link order.
+            LinkReport[] reports = new LinkReport[nLinks];
+            forEachLink(k -> reports[k] = report(k));
             List<NetworkResult.LinkResult> links = new ArrayList<>(nLinks);
             double maxEnergy = 0;
-            for (int k = 0; k < nLinks; k++) {
-                Element e = element[k];
-                double q = flow[k];
-                double loss = head[from[k]] - head[to[k]];
-                double velocity = Double.NaN;
-                double friction = Double.NaN;
-                Optional<ElementResult> er = Optional.empty();
-                String st = status[k] == OPEN
-                        ? "open"
-                        : status[k] == CLOSED ? "closed" : status[k] == ACTIVE ? "active" : "shut";
-                if (status[k] == ACTIVE) {
-                    er = Optional.of(e.evaluate(Math.max(q, 0), ctx));
-                }
-                if (status[k] == OPEN && Double.isFinite(q)) {
-                    if (e instanceof Segment s) {
-                        velocity = q / (Math.PI * s.innerDiameter() * s.innerDiameter() / 4);
-                    }
-                    maxEnergy = Math.max(maxEnergy, Math.abs(law(k, q) - loss));
-                    // Below the zero-flow threshold the law was linearised; a method such as Colebrook–White
-                    // may refuse so small a Reynolds number, and there is nothing to report about it anyway.
-                    if (Math.abs(q) >= ZERO_FLOW || e instanceof PumpElement) {
-                        try {
-                            double evalFlow = q < 0 && e.blocksReverseFlow() ? 0 : q;
-                            ElementResult r;
-                            if (e instanceof Segment s) {
-                                Element.requireFiniteFlow(s, q);
-                                PipeFlow pf = s.flowAt(Math.abs(q), ctx);
-                                friction = pf.frictionFactor();
-                                r = s.evaluate(q, pf, ctx);
-                            } else {
-                                r = e.evaluate(evalFlow, ctx);
-                            }
-                            er = Optional.of(r);
-                            cautions.addAll(r.cautions());
-                        } catch (InputException ex) {
-                            cautions.add(Caution.serious("element-failed", ex.getMessage(), "element law")
-                                    .about(e.id()));
-                        }
-                    }
-                }
-                links.add(new NetworkResult.LinkResult(
-                        e.id(),
-                        e.kind(),
-                        NetworkSolver.Run.this.net.nodes().get(from[k]).id(),
-                        NetworkSolver.Run.this.net.nodes().get(to[k]).id(),
-                        status[k] == OPEN || status[k] == ACTIVE ? q : 0,
-                        velocity,
-                        loss,
-                        friction,
-                        st,
-                        er));
+            for (LinkReport rep : reports) {
+                links.add(rep.result());
+                cautions.addAll(rep.cautions());
+                maxEnergy = Math.max(maxEnergy, rep.energy());
             }
             List<Caution> all = new ArrayList<>(dedupe(cautions));
             all.add(Caution.GENERAL_REVIEW);
             return new NetworkResult(
                     nodes, links, iterations, converged, lastHeadChange, maxEnergy, continuityResidual(live), all);
         }
+
+        /** One link's report: its result, its element's cautions and |h(Q) − ΔH| when open. */
+        record LinkReport(NetworkResult.LinkResult result, List<Caution> cautions, double energy) {}
+
+        LinkReport report(int k) {
+            Element e = element[k];
+            double q = flow[k];
+            double loss = head[from[k]] - head[to[k]];
+            double velocity = Double.NaN;
+            double friction = Double.NaN;
+            double energyError = 0;
+            List<Caution> own = List.of();
+            Optional<ElementResult> er = Optional.empty();
+            String st = status[k] == OPEN
+                    ? "open"
+                    : status[k] == CLOSED ? "closed" : status[k] == ACTIVE ? "active" : "shut";
+            if (status[k] == ACTIVE) {
+                er = Optional.of(e.evaluate(Math.max(q, 0), ctx));
+            }
+            if (status[k] == OPEN && Double.isFinite(q)) {
+                if (e instanceof Segment s) {
+                    velocity = q / (Math.PI * s.innerDiameter() * s.innerDiameter() / 4);
+                }
+                energyError = Math.abs(law(k, q) - loss);
+                // Below the zero-flow threshold the law was linearised; a method such as Colebrook–White
+                // may refuse so small a Reynolds number, and there is nothing to report about it anyway.
+                if (Math.abs(q) >= ZERO_FLOW || e instanceof PumpElement) {
+                    try {
+                        double evalFlow = q < 0 && e.blocksReverseFlow() ? 0 : q;
+                        ElementResult r;
+                        if (e instanceof Segment s) {
+                            Element.requireFiniteFlow(s, q);
+                            PipeFlow pf = s.flowAt(Math.abs(q), ctx);
+                            friction = pf.frictionFactor();
+                            r = s.evaluate(q, pf, ctx);
+                        } else {
+                            r = e.evaluate(evalFlow, ctx);
+                        }
+                        er = Optional.of(r);
+                        own = r.cautions();
+                    } catch (InputException ex) {
+                        own = List.of(Caution.serious("element-failed", ex.getMessage(), "element law")
+                                .about(e.id()));
+                    }
+                }
+            }
+            return new LinkReport(
+                    new NetworkResult.LinkResult(
+                            e.id(),
+                            e.kind(),
+                            net.nodes().get(from[k]).id(),
+                            net.nodes().get(to[k]).id(),
+                            status[k] == OPEN || status[k] == ACTIVE ? q : 0,
+                            velocity,
+                            loss,
+                            friction,
+                            st,
+                            er),
+                    own,
+                    energyError);
+        }
     }
+
+    /** Links from which per-link work (element laws, slopes, reports) is shared among the cores. */
+    static final int PARALLEL_LINKS = 20_000;
 
     /** Cautions of one code shown in full before the rest are counted in one summary line. */
     static final int CAUTIONS_PER_CODE = 5;
