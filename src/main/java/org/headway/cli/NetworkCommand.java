@@ -139,9 +139,45 @@ public final class NetworkCommand implements Callable<Integer> {
             description = "Draw energy and hydraulic grade and elevation along the index circuit into FILE.png.")
     Path indexChart;
 
+    @Option(
+            names = "--balance",
+            description = {
+                "Balance every valve (kind valve, by kv or cv) that has a design_flow: the Kv",
+                "that carries its design flow, its authority, branches short of head, the",
+                "index valve and the source head needed."
+            })
+    boolean balance;
+
+    @Option(
+            names = "--min-valve-drop",
+            paramLabel = "P",
+            description = "Least pressure drop across a balancing valve at design flow (default 3 kPa).")
+    String minValveDrop;
+
+    @Option(
+            names = "--valve-settings",
+            paramLabel = "FILE.csv",
+            description = "Valve setting table: columns setting,kv and optionally valve (id or name).")
+    Path valveSettings;
+
+    @Option(
+            names = "--fire-flow",
+            paramLabel = "NODE",
+            description = "Find the largest extra demand at junction NODE for which every junction keeps"
+                    + " --residual-pressure.")
+    String fireFlow;
+
+    @Option(
+            names = "--residual-pressure",
+            paramLabel = "P",
+            description = "Least gauge pressure every junction keeps in the fire-flow search, e.g. \"140 kPa\","
+                    + " \"1.4 barg\", \"20 psig\".")
+    String residualPressure;
+
     @Override
     public Integer call() {
         long t0 = System.nanoTime();
+        NetworkDesign design = NetworkDesign.of(balance, minValveDrop, valveSettings, fireFlow, residualPressure);
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
         Project.NetworkSpec spec = LineList.read(nodes, links, catalog, friction.equals("hazen-williams"));
@@ -172,7 +208,7 @@ public final class NetworkCommand implements Callable<Integer> {
         // The typed line list is no longer needed: let it go before the solve needs the heap.
         spec = null;
         project = null;
-        int code = solveStudyAndPrint(spec(), network, format, system, output, force, timings, indexChart);
+        int code = solveStudyAndPrint(spec(), network, format, system, output, force, timings, indexChart, design);
         if (timings) {
             spec().commandLine()
                     .getErr()
@@ -211,19 +247,26 @@ public final class NetworkCommand implements Callable<Integer> {
             Path output,
             boolean force,
             boolean timings,
-            Path indexChart) {
+            Path indexChart,
+            NetworkDesign design) {
         long t0 = System.nanoTime();
         NetworkStudy.Result result = study.solve(NetworkSolver.standard());
         long t1 = System.nanoTime();
+        NetworkDesign.Results designed = design.run(result.base().network());
+        long t2 = System.nanoTime();
         PrintWriter out = spec.commandLine().getOut();
         NetworkResult base = result.base().result();
         try {
             switch (format) {
-                case json -> out.println(NetworkStudyOutput.json(study, result));
+                case json -> out.println(NetworkStudyOutput.json(study, result, designed));
                 case csv -> {
                     NetworkOutput.nodesCsv(base, out);
                     out.println();
-                    NetworkOutput.linksCsv(base, out);
+                    NetworkOutput.linksCsv(base, designed, out);
+                    if (designed.any()) {
+                        out.println();
+                        NetworkOutput.designCsv(designed, out);
+                    }
                     if (!result.cases().isEmpty()) {
                         out.println();
                         NetworkStudyOutput.caseNodesCsv(result, out);
@@ -231,16 +274,20 @@ public final class NetworkCommand implements Callable<Integer> {
                         NetworkStudyOutput.caseLinksCsv(result, out);
                     }
                 }
-                default -> NetworkStudyOutput.text(out, study, result, system);
+                default -> NetworkStudyOutput.text(out, study, result, system, designed);
             }
             if (output != null) {
                 Files.createDirectories(output);
                 write(
                         output.resolve("network.json"),
                         force,
-                        w -> w.append(NetworkStudyOutput.json(study, result)).append('\n'));
+                        w -> w.append(NetworkStudyOutput.json(study, result, designed))
+                                .append('\n'));
                 write(output.resolve("network-nodes.csv"), force, w -> NetworkOutput.nodesCsv(base, w));
-                write(output.resolve("network-links.csv"), force, w -> NetworkOutput.linksCsv(base, w));
+                write(output.resolve("network-links.csv"), force, w -> NetworkOutput.linksCsv(base, designed, w));
+                if (designed.any()) {
+                    write(output.resolve("network-design.csv"), force, w -> NetworkOutput.designCsv(designed, w));
+                }
                 if (!result.base().pumps().pumps().isEmpty()) {
                     write(output.resolve("network-pumps.csv"), force, w -> NetworkStudyOutput.pumpsCsv(result, w));
                 }
@@ -289,9 +336,23 @@ public final class NetworkCommand implements Callable<Integer> {
                             result.cases().isEmpty()
                                     ? ""
                                     : " in the base solve, " + result.cases().size() + " cases more",
-                            (System.nanoTime() - t1) * 1e-9);
+                            (System.nanoTime() - t2) * 1e-9);
+            if (designed.balance() != null || designed.fireFlow() != null) {
+                spec.commandLine()
+                        .getErr()
+                        .printf(
+                                java.util.Locale.ROOT,
+                                "timings: design %.3f s (balancing %s solves, fire flow %s solves)%n",
+                                (t2 - t1) * 1e-9,
+                                designed.balance() == null
+                                        ? "no"
+                                        : String.valueOf(designed.balance().solves()),
+                                designed.fireFlow() == null
+                                        ? "no"
+                                        : String.valueOf(designed.fireFlow().solves()));
+            }
         }
-        return result.converged() ? HeadwayCommand.EXIT_OK : HeadwayCommand.EXIT_FAILED;
+        return result.converged() && designed.complete() ? HeadwayCommand.EXIT_OK : HeadwayCommand.EXIT_FAILED;
     }
 
     /** Solves a network alone (no cases, no limits) and writes the result. */
@@ -302,8 +363,9 @@ public final class NetworkCommand implements Callable<Integer> {
             UnitSystem system,
             Path output,
             boolean force,
-            boolean timings) {
-        return solveStudyAndPrint(spec, NetworkStudy.of(network), format, system, output, force, timings, null);
+            boolean timings,
+            NetworkDesign design) {
+        return solveStudyAndPrint(spec, NetworkStudy.of(network), format, system, output, force, timings, null, design);
     }
 
     private interface Body {

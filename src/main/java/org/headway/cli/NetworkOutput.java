@@ -7,11 +7,18 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
 import org.headway.caution.Caution;
 import org.headway.network.Network;
 import org.headway.network.NetworkResult;
 import org.headway.network.NetworkSolver;
+import org.headway.network.design.BalancingResult;
+import org.headway.network.design.FireFlow;
+import org.headway.network.design.FireFlowResult;
 import org.headway.report.SafeText;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
@@ -46,6 +53,10 @@ final class NetworkOutput {
         return write(tree(net, r));
     }
 
+    static String json(Network net, NetworkResult r, NetworkDesign.Results design) {
+        return write(tree(net, r, design));
+    }
+
     /** The JSON text of a tree, indented. */
     static String write(ObjectNode root) {
         try {
@@ -62,6 +73,12 @@ final class NetworkOutput {
 
     /** The JSON tree of one solve, the keys of {@link #json}. */
     static ObjectNode tree(Network net, NetworkResult r) {
+        return tree(net, r, NetworkDesign.Results.NONE);
+    }
+
+    /** The JSON tree of one solve with the design runs (balancing, fire flow) that ran on it. */
+    static ObjectNode tree(Network net, NetworkResult r, NetworkDesign.Results design) {
+        BalancingResult balance = design.balance();
         ObjectNode root = MAPPER.createObjectNode();
         root.put("title", net.title());
         root.put("fluid", net.context().fluid().fluid());
@@ -99,9 +116,166 @@ final class NetworkOutput {
             put(o, "friction_factor", l.frictionFactor());
             o.put("status", l.status());
             l.element().ifPresent(e -> o.put("law", e.law()));
+            if (balance != null) {
+                var v = balance.valve(l.id());
+                put(
+                        o,
+                        "balancing_kv",
+                        v.map(BalancingResult.BalancedValve::flowCoefficient).orElse(Double.NaN));
+                put(
+                        o,
+                        "balancing_setting",
+                        v.map(BalancingResult.BalancedValve::setting).orElse(Double.NaN));
+            }
         }
-        RunJson.putCautions(root, r.cautions());
+        List<Caution> cautions = new ArrayList<>(r.cautions());
+        cautions.addAll(design.cautions());
+        RunJson.putCautions(root, cautions);
+        if (balance != null) {
+            balanceJson(root.putObject("balance"), balance);
+        }
+        FireFlowResult fire = design.fireFlow();
+        if (fire != null) {
+            put(root, "fire_flow_m3_per_s", fire.fireFlow());
+            putText(root, "fire_flow_limiting_node", fire.limitingNode());
+            ObjectNode f = root.putObject("fire_flow");
+            f.put("node", fire.node());
+            f.put("residual_pressure_pa", fire.residualPressure());
+            f.put("found", fire.found());
+            put(f, "fire_flow_m3_per_s", fire.fireFlow());
+            putText(f, "limiting_node", fire.limitingNode());
+            put(f, "residual_pressure_at_limit_pa", fire.residualAtLimit());
+            put(f, "base_minimum_pressure_pa", fire.baseMinimumPressure());
+            putText(f, "base_limiting_node", fire.baseLimitingNode());
+            f.put("solves", fire.solves());
+            f.put("head_accuracy_m", FireFlow.HEAD_ACCURACY);
+            RunJson.putCautions(f, fire.cautions());
+        }
         return root;
+    }
+
+    private static void putText(ObjectNode n, String key, String v) {
+        if (v == null || v.isEmpty()) {
+            n.putNull(key);
+        } else {
+            n.put(key, v);
+        }
+    }
+
+    private static void balanceJson(ObjectNode b, BalancingResult balance) {
+        b.put("converged", balance.converged());
+        b.put("minimum_valve_drop_pa", balance.minimumValveDrop());
+        putText(b, "index_valve", balance.indexValve().orElse(""));
+        put(b, "index_spare_head_m", balance.indexSpareHead());
+        putText(b, "source", balance.source().orElse(""));
+        putText(b, "source_kind", balance.sourceKind());
+        put(b, "source_head_needed_m", balance.sourceHeadNeeded());
+        put(b, "largest_flow_error", balance.largestFlowError());
+        b.put("solves", balance.solves());
+        ArrayNode valves = b.putArray("valves");
+        for (BalancingResult.BalancedValve v : balance.valves()) {
+            ObjectNode o = valves.addObject();
+            o.put("id", v.id());
+            o.put("from", v.from());
+            o.put("to", v.to());
+            o.put("design_flow_m3_per_s", v.designFlow());
+            o.put("fully_open_kv", v.fullyOpenFlowCoefficient());
+            put(o, "kv", v.flowCoefficient());
+            put(o, "setting", v.setting());
+            put(o, "head_drop_m", v.headDrop());
+            put(o, "pressure_drop_pa", v.pressureDrop());
+            o.put("reached", v.reached());
+            put(o, "extra_head_needed_m", v.extraHeadNeeded());
+            o.put("branch_supply", v.branchSupply());
+            o.put("branch_return", v.branchReturn());
+            put(o, "branch_differential_m", v.branchDifferential());
+            put(o, "authority", v.authority());
+        }
+        ArrayNode shortOnes = b.putArray("short_branches");
+        for (BalancingResult.BalancedValve v : balance.shortBranches()) {
+            ObjectNode o = shortOnes.addObject();
+            o.put("valve", v.id());
+            o.put("branch_supply", v.branchSupply());
+            o.put("branch_return", v.branchReturn());
+            put(o, "extra_head_needed_m", v.extraHeadNeeded());
+        }
+        RunJson.putCautions(b, balance.cautions());
+    }
+
+    /** Valve table columns of the design CSV, units in brackets. */
+    static final String[] VALVE_HEADER = {
+        "valve",
+        "design_flow [m3/s]",
+        "fully_open_kv [m3/h]",
+        "kv [m3/h]",
+        "setting",
+        "pressure_drop [Pa]",
+        "reached",
+        "extra_head_needed [m]",
+        "branch_supply",
+        "branch_return",
+        "branch_differential [m]",
+        "authority [-]"
+    };
+
+    /**
+     * The design runs as CSV: the balanced valves, a blank line, the summary as key,value rows with the
+     * JSON key names, a blank line, the design cautions.
+     */
+    static void designCsv(NetworkDesign.Results design, Appendable out) throws IOException {
+        CSVPrinter p = new CSVPrinter(
+                out, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+        BalancingResult balance = design.balance();
+        if (balance != null) {
+            p.printRecord((Object[]) VALVE_HEADER);
+            for (BalancingResult.BalancedValve v : balance.valves()) {
+                p.printRecord(
+                        SafeText.cell(v.id()),
+                        num(v.designFlow()),
+                        num(v.fullyOpenFlowCoefficient()),
+                        num(v.flowCoefficient()),
+                        num(v.setting()),
+                        num(v.pressureDrop()),
+                        v.reached() ? "yes" : "no",
+                        num(v.extraHeadNeeded()),
+                        SafeText.cell(v.branchSupply()),
+                        SafeText.cell(v.branchReturn()),
+                        num(v.branchDifferential()),
+                        num(v.authority()));
+            }
+            p.println();
+        }
+        p.printRecord("key", "value");
+        if (balance != null) {
+            p.printRecord("balance.minimum_valve_drop_pa", num(balance.minimumValveDrop()));
+            p.printRecord(
+                    "balance.index_valve", SafeText.cell(balance.indexValve().orElse("")));
+            p.printRecord("balance.index_spare_head_m", num(balance.indexSpareHead()));
+            p.printRecord("balance.source", SafeText.cell(balance.source().orElse("")));
+            p.printRecord("balance.source_kind", balance.sourceKind());
+            p.printRecord("balance.source_head_needed_m", num(balance.sourceHeadNeeded()));
+            p.printRecord("balance.largest_flow_error", num(balance.largestFlowError()));
+            p.printRecord("balance.solves", balance.solves());
+        }
+        FireFlowResult fire = design.fireFlow();
+        if (fire != null) {
+            p.printRecord("fire_flow.node", SafeText.cell(fire.node()));
+            p.printRecord("fire_flow.residual_pressure_pa", num(fire.residualPressure()));
+            p.printRecord("fire_flow_m3_per_s", num(fire.fireFlow()));
+            p.printRecord("fire_flow_limiting_node", SafeText.cell(fire.limitingNode()));
+            p.printRecord("fire_flow.residual_pressure_at_limit_pa", num(fire.residualAtLimit()));
+            p.printRecord("fire_flow.solves", fire.solves());
+        }
+        p.println();
+        p.printRecord("severity", "code", "message", "basis");
+        for (Caution c : design.cautions()) {
+            p.printRecord(
+                    c.severity().name().toLowerCase(Locale.ROOT),
+                    c.code(),
+                    SafeText.cell(c.message()),
+                    SafeText.cell(c.basis()));
+        }
+        p.flush();
     }
 
     static String num(double v) {
@@ -123,8 +297,22 @@ final class NetworkOutput {
     }
 
     static void linksCsv(NetworkResult r, Appendable out) throws IOException {
-        row(out, LINK_HEADER);
-        String[] cells = new String[9];
+        linksCsv(r, NetworkDesign.Results.NONE, out);
+    }
+
+    /** Extra link columns when balancing ran. */
+    static final String[] BALANCING_COLUMNS = {"balancing_kv [m3/h]", "balancing_setting"};
+
+    static void linksCsv(NetworkResult r, NetworkDesign.Results design, Appendable out) throws IOException {
+        BalancingResult balance = design.balance();
+        String[] cells = new String[balance == null ? 9 : 11];
+        if (balance == null) {
+            row(out, LINK_HEADER);
+        } else {
+            System.arraycopy(LINK_HEADER, 0, cells, 0, 9);
+            System.arraycopy(BALANCING_COLUMNS, 0, cells, 9, 2);
+            row(out, cells);
+        }
         for (NetworkResult.LinkResult l : r.links()) {
             cells[0] = SafeText.cell(l.id());
             cells[1] = l.kind();
@@ -135,6 +323,12 @@ final class NetworkOutput {
             cells[6] = num(l.headLoss());
             cells[7] = num(l.frictionFactor());
             cells[8] = l.status();
+            if (balance != null) {
+                var v = balance.valve(l.id());
+                cells[9] = num(
+                        v.map(BalancingResult.BalancedValve::flowCoefficient).orElse(Double.NaN));
+                cells[10] = num(v.map(BalancingResult.BalancedValve::setting).orElse(Double.NaN));
+            }
             row(out, cells);
         }
     }
@@ -185,12 +379,24 @@ final class NetworkOutput {
     }
 
     static void text(PrintWriter out, Network net, NetworkResult r, UnitSystem u) {
-        tables(out, net, r, u);
-        cautions(out, r.cautions());
+        text(out, net, r, u, NetworkDesign.Results.NONE);
+    }
+
+    static void text(PrintWriter out, Network net, NetworkResult r, UnitSystem u, NetworkDesign.Results design) {
+        tables(out, net, r, u, design);
+        List<Caution> cautions = new ArrayList<>(r.cautions());
+        cautions.addAll(design.cautions());
+        cautions(out, cautions);
     }
 
     /** The text output without its cautions: title, fluid, solve, node and link tables. */
     static void tables(PrintWriter out, Network net, NetworkResult r, UnitSystem u) {
+        tables(out, net, r, u, NetworkDesign.Results.NONE);
+    }
+
+    /** The tables, with the balancing column and the design sections when they ran. */
+    static void tables(PrintWriter out, Network net, NetworkResult r, UnitSystem u, NetworkDesign.Results design) {
+        BalancingResult balance = design.balance();
         out.println(net.title().isEmpty() ? "Network" : net.title());
         var f = net.context().fluid();
         out.printf(
@@ -236,7 +442,7 @@ final class NetworkOutput {
         out.println();
         out.printf(
                 Locale.ROOT,
-                "%-16s %-19s %-12s %-12s %11s %9s %11s %9s  %s%n",
+                "%-16s %-19s %-12s %-12s %11s %9s %11s %9s  %s%s%n",
                 "link",
                 "kind",
                 "from",
@@ -245,11 +451,12 @@ final class NetworkOutput {
                 "V [" + vu + "]",
                 "h [" + hu + "]",
                 "f",
-                "status");
+                balance == null ? "status" : String.format(Locale.ROOT, "%-7s", "status"),
+                balance == null ? "" : String.format(Locale.ROOT, " %14s", "Kv bal [m³/h]"));
         for (NetworkResult.LinkResult l : r.links()) {
             out.printf(
                     Locale.ROOT,
-                    "%-16s %-19s %-12s %-12s %11s %9s %11s %9s  %s%n",
+                    "%-16s %-19s %-12s %-12s %11s %9s %11s %9s  %s%s%n",
                     clip(l.id(), 16),
                     l.kind(),
                     clip(l.from(), 12),
@@ -258,10 +465,26 @@ final class NetworkOutput {
                     q(l.velocity(), QuantityKind.VELOCITY, u),
                     q(l.headLoss(), QuantityKind.HEAD, u),
                     Double.isFinite(l.frictionFactor()) ? Quantities.formatNumber(l.frictionFactor()) : "—",
-                    l.status());
+                    balance == null ? l.status() : String.format(Locale.ROOT, "%-7s", l.status()),
+                    balance == null
+                            ? ""
+                            : String.format(
+                                    Locale.ROOT,
+                                    " %14s",
+                                    balance.valve(l.id())
+                                            .map(v -> Double.isFinite(v.flowCoefficient())
+                                                    ? Quantities.formatNumber(v.flowCoefficient())
+                                                    : "short")
+                                            .orElse("")));
         }
         out.println("(flow positive from → to; heads are energy heads with node velocity heads neglected; pressures"
                 + " gauge)");
+        if (balance != null) {
+            balanceText(out, balance, u);
+        }
+        if (design.fireFlow() != null) {
+            fireFlowText(out, design.fireFlow(), u);
+        }
     }
 
     /** The cautions, one a line with severity and basis. */
@@ -272,5 +495,92 @@ final class NetworkOutput {
             out.println("  [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + c.message() + " (basis: "
                     + c.basis() + ")");
         }
+    }
+
+    private static void balanceText(PrintWriter out, BalancingResult b, UnitSystem u) {
+        String hu = Quantities.unitSymbol(QuantityKind.HEAD, u);
+        String pu = Quantities.unitSymbol(QuantityKind.PRESSURE, u);
+        String qu = Quantities.unitSymbol(QuantityKind.VOLUMETRIC_FLOW, u);
+        out.println();
+        out.printf(
+                Locale.ROOT,
+                "Balancing (every valve with a design flow held at it; %d solves%s)%n",
+                b.solves(),
+                b.converged() ? "" : ", NOT CONVERGED");
+        out.printf(
+                Locale.ROOT,
+                "%-16s %12s %10s %10s %9s %12s %9s %-25s %s%n",
+                "valve",
+                "Q_d [" + qu + "]",
+                "Kv [m³/h]",
+                "open Kv",
+                "setting",
+                "Δp [" + pu + "]",
+                "authority",
+                "branch",
+                "short by [" + hu + "]");
+        for (BalancingResult.BalancedValve v : b.valves()) {
+            out.printf(
+                    Locale.ROOT,
+                    "%-16s %12s %10s %10s %9s %12s %9s %-25s %s%n",
+                    clip(v.id(), 16),
+                    q(v.designFlow(), QuantityKind.VOLUMETRIC_FLOW, u),
+                    Double.isFinite(v.flowCoefficient()) ? Quantities.formatNumber(v.flowCoefficient()) : "—",
+                    Quantities.formatNumber(v.fullyOpenFlowCoefficient()),
+                    Double.isFinite(v.setting()) ? Quantities.formatNumber(v.setting()) : "—",
+                    q(v.pressureDrop(), QuantityKind.PRESSURE, u),
+                    Double.isFinite(v.authority()) ? String.format(Locale.ROOT, "%.3f", v.authority()) : "—",
+                    clip(v.branchSupply() + " → " + v.branchReturn(), 25),
+                    v.reached() ? "" : q(v.extraHeadNeeded(), QuantityKind.HEAD, u));
+        }
+        out.printf(
+                Locale.ROOT,
+                "Index valve: %s (spare head %s %s over max(minimum drop %s %s, fully open loss))%n",
+                b.indexValve().orElse("—"),
+                q(b.indexSpareHead(), QuantityKind.HEAD, u),
+                hu,
+                q(b.minimumValveDrop(), QuantityKind.PRESSURE, u),
+                pu);
+        if (b.source().isPresent()) {
+            out.printf(
+                    Locale.ROOT,
+                    "Source head needed: %s %s at %s (%s)%n",
+                    q(b.sourceHeadNeeded(), QuantityKind.HEAD, u),
+                    hu,
+                    b.source().get(),
+                    b.sourceKind().equals("pump") ? "head the pump must add at its flow" : "fixed-head node's head");
+        }
+        if (Double.isFinite(b.largestFlowError())) {
+            out.printf(
+                    Locale.ROOT,
+                    "Check: solved again with these Kv values, every design flow is met to %.2g (relative)%n",
+                    b.largestFlowError());
+        }
+    }
+
+    private static void fireFlowText(PrintWriter out, FireFlowResult f, UnitSystem u) {
+        String qu = Quantities.unitSymbol(QuantityKind.VOLUMETRIC_FLOW, u);
+        String pu = Quantities.unitSymbol(QuantityKind.PRESSURE, u);
+        out.println();
+        out.printf(
+                Locale.ROOT,
+                "Fire flow at %s with every junction at %s %s or more (%d solves)%n",
+                f.node(),
+                q(f.residualPressure(), QuantityKind.PRESSURE, u),
+                pu,
+                f.solves());
+        if (!f.found()) {
+            out.println("  not found (see cautions)");
+            return;
+        }
+        out.printf(
+                Locale.ROOT,
+                "  fire flow %s %s; limiting junction %s at %s %s%n",
+                q(f.fireFlow(), QuantityKind.VOLUMETRIC_FLOW, u),
+                qu,
+                f.limitingNode(),
+                q(f.residualAtLimit(), QuantityKind.PRESSURE, u),
+                pu);
+        out.println("  ESTIMATE ONLY: the authority having jurisdiction and the local fire code govern.");
     }
 }

@@ -74,9 +74,16 @@ final class NetworkStudyOutput {
     // ---------------------------------------------------------------- JSON
 
     static String json(NetworkStudy study, NetworkStudy.Result r) {
+        return json(study, r, NetworkDesign.Results.NONE);
+    }
+
+    /** The study's JSON with the design runs (balancing, fire flow) on the base network. */
+    static String json(NetworkStudy study, NetworkStudy.Result r, NetworkDesign.Results design) {
         CaseResult base = r.base();
-        ObjectNode root = NetworkOutput.tree(base.network(), base.result());
-        RunJson.putCautions(root, r.cautions());
+        ObjectNode root = NetworkOutput.tree(base.network(), base.result(), design);
+        java.util.List<org.headway.caution.Caution> all = new java.util.ArrayList<>(r.cautions());
+        all.addAll(design.cautions());
+        RunJson.putCautions(root, all);
         putPumps(root, base.pumps());
         putCircuit(root, base.circuit());
         ArrayNode paths = root.putArray("terminal_paths");
@@ -178,8 +185,14 @@ final class NetworkStudyOutput {
     // ---------------------------------------------------------------- text
 
     static void text(PrintWriter out, NetworkStudy study, NetworkStudy.Result r, UnitSystem u) {
+        text(out, study, r, u, NetworkDesign.Results.NONE);
+    }
+
+    /** The study's text with the design runs (balancing, fire flow) on the base network. */
+    static void text(
+            PrintWriter out, NetworkStudy study, NetworkStudy.Result r, UnitSystem u, NetworkDesign.Results design) {
         CaseResult base = r.base();
-        NetworkOutput.tables(out, base.network(), base.result(), u);
+        NetworkOutput.tables(out, base.network(), base.result(), u, design);
         String hu = Quantities.unitSymbol(QuantityKind.HEAD, u);
         String qu = Quantities.unitSymbol(QuantityKind.VOLUMETRIC_FLOW, u);
         String pu = Quantities.unitSymbol(QuantityKind.PRESSURE, u);
@@ -218,7 +231,9 @@ final class NetworkStudyOutput {
             }
         }
         r.pressureCheck().ifPresent(p -> pressureText(out, r, p, u, pu));
-        NetworkOutput.cautions(out, r.cautions());
+        java.util.List<org.headway.caution.Caution> all = new java.util.ArrayList<>(r.cautions());
+        all.addAll(design.cautions());
+        NetworkOutput.cautions(out, all);
     }
 
     private static void pumpsText(PrintWriter out, PumpDuty.Duties duties, UnitSystem u, String hu, String qu) {

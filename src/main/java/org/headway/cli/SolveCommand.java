@@ -120,7 +120,15 @@ public final class SolveCommand implements Callable<Integer> {
                         "a network is solved for its demands and fixed heads; --mode " + mode + " is for runs");
             }
             return NetworkCommand.solveStudyAndPrint(
-                    spec, network, NetworkCommand.Format.valueOf(format.name()), system, null, false, false, null);
+                    spec,
+                    network,
+                    NetworkCommand.Format.valueOf(format.name()),
+                    system,
+                    null,
+                    false,
+                    false,
+                    null,
+                    NetworkDesign.NONE);
         }
         ResolvedProject resolved = resolve(loaded, catalog);
         PipeRun run = resolved.run();

@@ -576,7 +576,7 @@ public final class LineList {
     }
 
     /** A CSV file read into named columns with optional units. */
-    private static final class Table {
+    static final class Table {
         final String name;
         final Map<String, Integer> column = new LinkedHashMap<>();
         final Map<String, String> unit = new LinkedHashMap<>();
@@ -694,7 +694,7 @@ public final class LineList {
     }
 
     /** One line of a table. */
-    private record Row(Table table, long line, List<String> cells) {
+    record Row(Table table, long line, List<String> cells) {
 
         InputException error(String key, String problem) {
             return new InputException(table.name + " line " + line + ", column " + key, problem);

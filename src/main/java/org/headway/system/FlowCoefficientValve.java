@@ -100,6 +100,23 @@ public record FlowCoefficientValve(String id, String name, double flowCoefficien
         return "valve";
     }
 
+    /**
+     * The flow coefficient that loses a head at a flow: the law above solved for K_v, K_v = Q·3600 ·
+     * √(Δp₀ / (ρ₀ g h)), which is the IEC 60534-2-1 sizing relation K_v = Q[m³/h] · √((ρ/ρ₀) / (Δp /
+     * 1 bar)) with Δp = ρ g h.
+     *
+     * @param flow volumetric flow (m³/s), positive
+     * @param headLoss head lost across the valve at that flow (m), positive
+     * @return K_v (m³/h at 1 bar)
+     */
+    public static double flowCoefficientFor(double flow, double headLoss) {
+        InputException.requirePositive("flow", flow);
+        InputException.requirePositive("head loss", headLoss);
+        return flow
+                * SECONDS_PER_HOUR
+                * Math.sqrt(REFERENCE_PRESSURE_DROP / (REFERENCE_DENSITY * Gravity.STANDARD * headLoss));
+    }
+
     /** Head-loss coefficient c of h = c Q |Q| (m per (m³/s)²). */
     public double resistance() {
         double ratio = SECONDS_PER_HOUR / flowCoefficient;

@@ -1,0 +1,7 @@
+/**
+ * Network design on top of the solver: balancing valves to their design flows (Kv, authority, the
+ * index circuit and the source head it needs, settings from a maker's table) and the fire flow a
+ * junction can draw at a residual pressure. Each runs the network solver several times; none
+ * changes it.
+ */
+package org.headway.network.design;
