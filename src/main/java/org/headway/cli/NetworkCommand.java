@@ -174,6 +174,42 @@ public final class NetworkCommand implements Callable<Integer> {
                     + " \"1.4 barg\", \"20 psig\".")
     String residualPressure;
 
+    @Option(
+            names = "--size",
+            description = {
+                "Size every pipe given by catalog material and size: the smallest size of its",
+                "table and schedule meeting --max-velocity and --max-gradient at its flow,",
+                "re-solved until the sizes settle, then checked against --head-budget."
+            })
+    boolean size;
+
+    @Option(
+            names = "--max-velocity",
+            paramLabel = "V",
+            description = "Velocity limit for --size, with its unit (default \"" + NetworkDesign.DEFAULT_MAX_VELOCITY
+                    + "\").")
+    String maxVelocity;
+
+    @Option(
+            names = "--max-gradient",
+            paramLabel = "G",
+            description = "Friction-loss limit for --size: m/100m, ft/100ft, m/km, Pa/m, kPa/100m, mbar/m or"
+                    + " psi/100ft (default \"" + NetworkDesign.DEFAULT_MAX_GRADIENT + "\").")
+    String maxGradient;
+
+    @Option(
+            names = "--head-budget",
+            paramLabel = "H",
+            description = "For --size: largest loss from a source to any terminal, e.g. \"25 m\"; pipes on the"
+                    + " index circuit grow until it is met.")
+    String headBudget;
+
+    @Option(
+            names = "--min-diameter",
+            paramLabel = "D",
+            description = "For --size: least inner diameter a sized pipe may have, e.g. \"100 mm\" (default none).")
+    String minDiameter;
+
     @Override
     public Integer call() {
         long t0 = System.nanoTime();
@@ -183,6 +219,35 @@ public final class NetworkCommand implements Callable<Integer> {
         Project.NetworkSpec spec = LineList.read(nodes, links, catalog, friction.equals("hazen-williams"));
         if (cases != null) {
             spec = spec.withDemandCases(LineList.readCases(cases, spec));
+        }
+        if (!size && (maxVelocity != null || maxGradient != null || headBudget != null || minDiameter != null)) {
+            throw new InputException(
+                    maxVelocity != null
+                            ? "--max-velocity"
+                            : maxGradient != null
+                                    ? "--max-gradient"
+                                    : headBudget != null ? "--head-budget" : "--min-diameter",
+                    "applies to sizing; give --size as well");
+        }
+        if (size) {
+            if (maxVelocity != null) {
+                Quantities.parse(maxVelocity, org.headway.units.QuantityKind.VELOCITY, "--max-velocity");
+            }
+            if (maxGradient != null) {
+                NetworkDesign.gradient(maxGradient, 1000 * org.headway.system.Gravity.STANDARD);
+            }
+            if (headBudget != null) {
+                Quantities.parse(headBudget, org.headway.units.QuantityKind.HEAD, "--head-budget");
+            }
+            if (minDiameter != null) {
+                Quantities.parse(minDiameter, org.headway.units.QuantityKind.DIAMETER, "--min-diameter");
+            }
+            design = design.withSizing(new NetworkDesign.SizingRequest(
+                    maxVelocity == null ? NetworkDesign.DEFAULT_MAX_VELOCITY : maxVelocity,
+                    maxGradient == null ? NetworkDesign.DEFAULT_MAX_GRADIENT : maxGradient,
+                    headBudget,
+                    minDiameter,
+                    ProjectResolver.networkSizingCandidates(spec, catalog)));
         }
         Project project = Project.network(title, fluid, temperature, friction, spec);
         if (minPressure != null || maxPressure != null) {
@@ -267,6 +332,10 @@ public final class NetworkCommand implements Callable<Integer> {
                         out.println();
                         NetworkOutput.designCsv(designed, out);
                     }
+                    if (designed.sizing() != null) {
+                        out.println();
+                        NetworkOutput.sizingCsv(designed.sizing(), out);
+                    }
                     if (!result.cases().isEmpty()) {
                         out.println();
                         NetworkStudyOutput.caseNodesCsv(result, out);
@@ -287,6 +356,12 @@ public final class NetworkCommand implements Callable<Integer> {
                 write(output.resolve("network-links.csv"), force, w -> NetworkOutput.linksCsv(base, designed, w));
                 if (designed.any()) {
                     write(output.resolve("network-design.csv"), force, w -> NetworkOutput.designCsv(designed, w));
+                }
+                if (designed.sizing() != null) {
+                    write(
+                            output.resolve("network-sizing.csv"),
+                            force,
+                            w -> NetworkOutput.sizingCsv(designed.sizing(), w));
                 }
                 if (!result.base().pumps().pumps().isEmpty()) {
                     write(output.resolve("network-pumps.csv"), force, w -> NetworkStudyOutput.pumpsCsv(result, w));

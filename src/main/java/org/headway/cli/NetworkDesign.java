@@ -9,6 +9,9 @@ import org.headway.network.design.Balancing;
 import org.headway.network.design.BalancingResult;
 import org.headway.network.design.FireFlow;
 import org.headway.network.design.FireFlowResult;
+import org.headway.network.design.NetworkSizing;
+import org.headway.network.design.NetworkSizingResult;
+import org.headway.project.ProjectResolver;
 import org.headway.units.Quantities;
 
 /**
@@ -20,17 +23,53 @@ import org.headway.units.Quantities;
  * @param fireNode the junction for the fire flow, or null
  * @param residualPressure the residual pressure as typed, or null
  */
-record NetworkDesign(Balancing balancing, String fireNode, String residualPressure) {
+record NetworkDesign(Balancing balancing, String fireNode, String residualPressure, SizingRequest sizing) {
 
-    static final NetworkDesign NONE = new NetworkDesign(null, null, null);
+    static final NetworkDesign NONE = new NetworkDesign(null, null, null, null);
+
+    NetworkDesign(Balancing balancing, String fireNode, String residualPressure) {
+        this(balancing, fireNode, residualPressure, null);
+    }
+
+    /** Default velocity limit of network sizing (m/s): common practice for water services, no source. */
+    static final String DEFAULT_MAX_VELOCITY = "1.5 m/s";
+
+    /** Default friction-gradient limit (m per 100 m): common practice for water services, no source. */
+    static final String DEFAULT_MAX_GRADIENT = "4 m/100m";
+
+    /**
+     * Sizing as asked, the limits as typed (the gradient may be in Pa/m, parsed once the fluid is
+     * known).
+     *
+     * @param maxVelocity velocity limit as typed
+     * @param maxGradient gradient limit as typed
+     * @param headBudget head budget as typed, or null
+     * @param candidates candidate sizes of the catalog pipes
+     */
+    record SizingRequest(
+            String maxVelocity,
+            String maxGradient,
+            String headBudget,
+            String minDiameter,
+            ProjectResolver.NetworkSizingCandidates candidates) {}
+
+    /** The same design with sizing. */
+    NetworkDesign withSizing(SizingRequest request) {
+        return new NetworkDesign(balancing, fireNode, residualPressure, request);
+    }
 
     /** The results, each null when not asked for. */
-    record Results(BalancingResult balance, FireFlowResult fireFlow) {
+    record Results(
+            BalancingResult balance, FireFlowResult fireFlow, NetworkSizingResult sizing, List<String> notSized) {
 
-        static final Results NONE = new Results(null, null);
+        static final Results NONE = new Results(null, null, null, List.of());
+
+        Results(BalancingResult balance, FireFlowResult fireFlow) {
+            this(balance, fireFlow, null, List.of());
+        }
 
         boolean any() {
-            return balance != null || fireFlow != null;
+            return balance != null || fireFlow != null || sizing != null;
         }
 
         /** Cautions of the design runs, balancing first. */
@@ -42,12 +81,17 @@ record NetworkDesign(Balancing balancing, String fireNode, String residualPressu
             if (fireFlow != null) {
                 all.addAll(fireFlow.cautions());
             }
+            if (sizing != null) {
+                all.addAll(sizing.cautions());
+            }
             return all;
         }
 
         /** Whether each design run ended with an answer. */
         boolean complete() {
-            return (balance == null || balance.converged()) && (fireFlow == null || fireFlow.found());
+            return (balance == null || balance.converged())
+                    && (fireFlow == null || fireFlow.found())
+                    && (sizing == null || sizing.settled());
         }
     }
 
@@ -117,6 +161,66 @@ record NetworkDesign(Balancing balancing, String fireNode, String residualPressu
                         e);
             }
         }
-        return new Results(balance, fire);
+        NetworkSizingResult sized = null;
+        List<String> notSized = List.of();
+        if (sizing != null) {
+            double rhoG = network.context().fluid().density() * org.headway.system.Gravity.STANDARD;
+            double v =
+                    Quantities.parse(sizing.maxVelocity(), org.headway.units.QuantityKind.VELOCITY, "--max-velocity");
+            double g = gradient(sizing.maxGradient(), rhoG);
+            double budget = sizing.headBudget() == null
+                    ? Double.POSITIVE_INFINITY
+                    : Quantities.parse(sizing.headBudget(), org.headway.units.QuantityKind.HEAD, "--head-budget");
+            double dMin = sizing.minDiameter() == null
+                    ? 0
+                    : Quantities.parse(sizing.minDiameter(), org.headway.units.QuantityKind.DIAMETER, "--min-diameter");
+            if (sizing.candidates().candidates().isEmpty()) {
+                throw new InputException(
+                        "--size",
+                        "no pipe link is given by a catalog material and size, so there is nothing to size (pipes"
+                                + " with an explicit diameter keep it)");
+            }
+            sized = NetworkSizing.standard()
+                    .size(network, sizing.candidates().candidates(), new NetworkSizing.Limits(v, g, budget, dMin));
+            notSized = sizing.candidates().notSized();
+        }
+        return new Results(balance, fire, sized, notSized);
+    }
+
+    /**
+     * A friction-gradient limit with its unit, in metres of head per 100 m of pipe: {@code m/100m},
+     * {@code ft/100ft} (the same ratio), {@code m/km}, {@code Pa/m}, {@code kPa/100m}, {@code mbar/m},
+     * {@code psi/100ft}. A bare number is refused.
+     */
+    static double gradient(String text, double rhoG) {
+        String t = text == null ? "" : text.strip();
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile(
+                        "^([+-]?[0-9]*\\.?[0-9]+(?:[eE][+-]?[0-9]+)?)\\s*(.*)$")
+                .matcher(t);
+        if (!m.matches()) {
+            throw new InputException(
+                    "--max-gradient",
+                    "expected a number and a unit, e.g. \"4 m/100m\" or \"400 Pa/m\", got \"" + text + "\"");
+        }
+        double x = Double.parseDouble(m.group(1));
+        String unit = m.group(2).replace(" ", "");
+        double perHundred;
+        switch (unit) {
+            case "m/100m", "ft/100ft" -> perHundred = x;
+            case "m/km" -> perHundred = x / 10;
+            case "Pa/m" -> perHundred = x * 100 / rhoG;
+            case "kPa/100m" -> perHundred = x * 1000 / rhoG;
+            case "mbar/m" -> perHundred = x * 100 * 100 / rhoG;
+            case "psi/100ft" -> perHundred = x * 6894.757293168361 / 0.3048 / rhoG;
+            default ->
+                throw new InputException(
+                        "--max-gradient",
+                        (unit.isEmpty() ? "a unit is needed" : "unknown unit \"" + m.group(2) + "\"")
+                                + "; use m/100m, ft/100ft, m/km, Pa/m, kPa/100m, mbar/m or psi/100ft, e.g. \"4 m/100m\"");
+        }
+        if (!(perHundred > 0) || !Double.isFinite(perHundred)) {
+            throw new InputException("--max-gradient", "must be above zero, got \"" + text + "\"");
+        }
+        return perHundred;
     }
 }

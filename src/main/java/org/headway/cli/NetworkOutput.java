@@ -19,6 +19,7 @@ import org.headway.network.NetworkSolver;
 import org.headway.network.design.BalancingResult;
 import org.headway.network.design.FireFlow;
 import org.headway.network.design.FireFlowResult;
+import org.headway.network.design.NetworkSizingResult;
 import org.headway.report.SafeText;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
@@ -151,7 +152,96 @@ final class NetworkOutput {
             f.put("head_accuracy_m", FireFlow.HEAD_ACCURACY);
             RunJson.putCautions(f, fire.cautions());
         }
+        if (design.sizing() != null) {
+            sizingJson(root.putObject("sizing"), design.sizing(), design.notSized());
+        }
         return root;
+    }
+
+    private static void sizingJson(ObjectNode o, NetworkSizingResult s, List<String> notSized) {
+        o.put("max_velocity_m_per_s", s.maximumVelocity());
+        o.put("max_gradient_m_per_100m", s.maximumGradient());
+        put(o, "head_budget_m", s.headBudget());
+        o.put("settled", s.settled());
+        o.put("rounds", s.rounds());
+        o.put("solves", s.solves());
+        putText(o, "index_terminal", s.indexPath().map(p -> p.terminal()).orElse(""));
+        put(o, "index_loss_m", s.indexLoss());
+        o.put("within_budget", s.withinBudget());
+        o.put("sized_converged", s.solved().converged());
+        ArrayNode links = o.putArray("links");
+        for (NetworkSizingResult.LinkSizing l : s.links()) {
+            ObjectNode x = links.addObject();
+            x.put("id", l.id());
+            x.put("given_size", l.givenSize());
+            x.put("given_diameter_m", l.givenDiameter());
+            x.put("chosen_size", l.chosenSize());
+            x.put("chosen_diameter_m", l.chosenDiameter());
+            put(x, "flow_m3_per_s", l.flow());
+            put(x, "velocity_m_per_s", l.velocity());
+            put(x, "gradient_m_per_100m", l.gradient());
+            x.put("meets_limits", l.meetsLimits());
+            x.put("basis", l.basis().key());
+            ArrayNode cands = x.putArray("candidates");
+            for (NetworkSizingResult.CandidateCheck c : l.candidates()) {
+                ObjectNode y = cands.addObject();
+                y.put("size", c.size());
+                y.put("inner_diameter_m", c.innerDiameter());
+                put(y, "velocity_m_per_s", c.velocity());
+                put(y, "gradient_m_per_100m", c.gradient());
+                y.put("accepted", c.accepted());
+                ArrayNode reasons = y.putArray("reasons");
+                c.reasons().forEach(reasons::add);
+            }
+        }
+        ArrayNode kept = o.putArray("not_sized");
+        notSized.forEach(kept::add);
+        RunJson.putCautions(o, s.cautions());
+    }
+
+    /** Columns of the sizing CSV, units in brackets. */
+    static final String[] SIZING_HEADER = {
+        "link",
+        "given_size",
+        "chosen_size",
+        "chosen_diameter [m]",
+        "flow [m3/s]",
+        "velocity [m/s]",
+        "gradient [m/100m]",
+        "meets_limits",
+        "basis",
+        "smaller_size_rejected_for"
+    };
+
+    /** The sizing: one row per sized pipe, with why the next smaller size was refused. */
+    static void sizingCsv(NetworkSizingResult s, Appendable out) throws IOException {
+        row(out, SIZING_HEADER);
+        for (NetworkSizingResult.LinkSizing l : s.links()) {
+            row(
+                    out,
+                    SafeText.cell(l.id()),
+                    SafeText.cell(l.givenSize()),
+                    SafeText.cell(l.chosenSize()),
+                    num(l.chosenDiameter()),
+                    num(l.flow()),
+                    num(l.velocity()),
+                    num(l.gradient()),
+                    l.meetsLimits() ? "yes" : "no",
+                    l.basis().key(),
+                    SafeText.cell(smallerRejected(l)));
+        }
+    }
+
+    /** Why the candidate just below the chosen one was refused ("" for the smallest). */
+    static String smallerRejected(NetworkSizingResult.LinkSizing l) {
+        String last = "";
+        for (NetworkSizingResult.CandidateCheck c : l.candidates()) {
+            if (c.innerDiameter() >= l.chosenDiameter()) {
+                break;
+            }
+            last = c.size() + ": " + (c.reasons().isEmpty() ? "meets the limits" : String.join("; ", c.reasons()));
+        }
+        return last;
     }
 
     private static void putText(ObjectNode n, String key, String v) {
@@ -265,6 +355,21 @@ final class NetworkOutput {
             p.printRecord("fire_flow_limiting_node", SafeText.cell(fire.limitingNode()));
             p.printRecord("fire_flow.residual_pressure_at_limit_pa", num(fire.residualAtLimit()));
             p.printRecord("fire_flow.solves", fire.solves());
+        }
+        NetworkSizingResult sized = design.sizing();
+        if (sized != null) {
+            p.printRecord("sizing.max_velocity_m_per_s", num(sized.maximumVelocity()));
+            p.printRecord("sizing.max_gradient_m_per_100m", num(sized.maximumGradient()));
+            p.printRecord("sizing.head_budget_m", num(sized.headBudget()));
+            p.printRecord("sizing.settled", sized.settled());
+            p.printRecord("sizing.rounds", sized.rounds());
+            p.printRecord(
+                    "sizing.index_terminal",
+                    SafeText.cell(sized.indexPath().map(x -> x.terminal()).orElse("")));
+            p.printRecord("sizing.index_loss_m", num(sized.indexLoss()));
+            p.printRecord("sizing.within_budget", sized.withinBudget());
+            p.printRecord("sizing.pipes_sized", sized.links().size());
+            p.printRecord("sizing.pipes_not_sized", design.notSized().size());
         }
         p.println();
         p.printRecord("severity", "code", "message", "basis");
@@ -484,6 +589,77 @@ final class NetworkOutput {
         }
         if (design.fireFlow() != null) {
             fireFlowText(out, design.fireFlow(), u);
+        }
+        if (design.sizing() != null) {
+            sizingText(out, design.sizing(), design.notSized(), u);
+        }
+    }
+
+    /** Most sized pipes listed in text; the JSON and CSV list all. */
+    static final int SIZING_TEXT_ROWS = 40;
+
+    private static void sizingText(PrintWriter out, NetworkSizingResult s, List<String> notSized, UnitSystem u) {
+        String vu = Quantities.unitSymbol(QuantityKind.VELOCITY, u);
+        String qu = Quantities.unitSymbol(QuantityKind.VOLUMETRIC_FLOW, u);
+        out.println();
+        out.printf(
+                Locale.ROOT,
+                "Sizing: velocity at most %s, friction loss at most %s m per 100 m%s; %s after %d round%s%n",
+                Quantities.format(s.maximumVelocity(), QuantityKind.VELOCITY, u),
+                Quantities.formatNumber(s.maximumGradient()),
+                Double.isFinite(s.headBudget())
+                        ? ", head budget " + Quantities.format(s.headBudget(), QuantityKind.HEAD, u)
+                        : "",
+                s.settled() ? "settled" : "NOT SETTLED",
+                s.rounds(),
+                s.rounds() == 1 ? "" : "s");
+        out.printf(
+                Locale.ROOT,
+                "%-16s %-16s %-16s %11s %9s %10s  %s%n",
+                "pipe",
+                "given",
+                "chosen",
+                "Q [" + qu + "]",
+                "V [" + vu + "]",
+                "m/100m",
+                "basis (next size down refused for)");
+        int shown = 0;
+        for (NetworkSizingResult.LinkSizing l : s.links()) {
+            if (shown++ == SIZING_TEXT_ROWS) {
+                out.printf(
+                        Locale.ROOT,
+                        "… %d more pipes in the JSON and CSV output%n",
+                        s.links().size() - SIZING_TEXT_ROWS);
+                break;
+            }
+            String why = smallerRejected(l);
+            out.printf(
+                    Locale.ROOT,
+                    "%-16s %-16s %-16s %11s %9s %10s  %s%s%n",
+                    clip(l.id(), 16),
+                    clip(l.givenSize(), 16),
+                    clip(l.chosenSize(), 16),
+                    q(l.flow(), QuantityKind.VOLUMETRIC_FLOW, u),
+                    q(l.velocity(), QuantityKind.VELOCITY, u),
+                    Quantities.formatNumber(l.gradient()),
+                    l.basis().words(),
+                    why.isEmpty() ? "" : " (" + why + ")");
+        }
+        s.indexPath()
+                .ifPresent(p -> out.printf(
+                        Locale.ROOT,
+                        "Index circuit of the sized network: to %s, loss %s%s%n",
+                        p.terminal(),
+                        Quantities.format(p.headLoss(), QuantityKind.HEAD, u),
+                        Double.isFinite(s.headBudget())
+                                ? (s.withinBudget() ? " (within the budget)" : " (ABOVE THE BUDGET)")
+                                : ""));
+        if (!notSized.isEmpty()) {
+            out.printf(
+                    Locale.ROOT,
+                    "Kept as given (explicit bore, or a material without a size table): %d pipe%s%n",
+                    notSized.size(),
+                    notSized.size() == 1 ? "" : "s");
         }
     }
 

@@ -949,6 +949,61 @@ public final class ProjectResolver {
         }
     }
 
+    /**
+     * The candidate sizes for sizing a network: for every pipe link given by a catalog material and
+     * size (and no bore of its own), the sizes of its material's table in the schedule of the size it
+     * was given, smallest first.
+     *
+     * @param candidates candidate sizes by link id
+     * @param notSized pipe links kept as given (an explicit bore, or a material without a size table)
+     */
+    public record NetworkSizingCandidates(
+            java.util.Map<String, List<SizeSelector.CandidateSize>> candidates, List<String> notSized) {
+        public NetworkSizingCandidates {
+            candidates = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(candidates));
+            notSized = List.copyOf(notSized);
+        }
+    }
+
+    /** The candidate sizes of a network's catalog pipes (see {@link NetworkSizingCandidates}). */
+    public static NetworkSizingCandidates networkSizingCandidates(Project.NetworkSpec network, Catalog catalog) {
+        java.util.Map<String, List<SizeSelector.CandidateSize>> map = new java.util.LinkedHashMap<>();
+        List<String> notSized = new ArrayList<>();
+        for (int i = 0; i < network.links().size(); i++) {
+            Project.ElementSpec e = network.links().get(i).element();
+            if (!(e instanceof Project.SegmentSpec)) {
+                continue;
+            }
+            Project.SegmentSpec s = (Project.SegmentSpec) e;
+            String id = s.id() == null || s.id().isBlank() ? s.name() : s.id();
+            if (s.pipe().isEmpty() || !s.innerDiameter().isEmpty()) {
+                notSized.add(id);
+                continue;
+            }
+            Project.PipeSpec ps = s.pipe().get();
+            Material material;
+            PipeSize given;
+            try {
+                material = catalog.material(ps.material());
+                if (material.sizeTable() == null || material.sizeTable().isEmpty()) {
+                    notSized.add(id);
+                    continue;
+                }
+                given = catalog.size(material, ps.size(), ps.schedule());
+            } catch (InputException ex) {
+                throw ex.at("links[" + i + "] " + id);
+            }
+            List<SizeSelector.CandidateSize> list = new ArrayList<>();
+            for (PipeSize size : catalog.sizes(material.sizeTable(), given.schedule())) {
+                list.add(new SizeSelector.CandidateSize(
+                        sizeLabel(size) + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())),
+                        size.innerDiameter()));
+            }
+            map.put(id, list);
+        }
+        return new NetworkSizingCandidates(map, notSized);
+    }
+
     private List<SizeSelector.CandidateSize> candidates(Project.SizingSpec spec) {
         Material material;
         try {

@@ -60,9 +60,21 @@ public final class NetworkSizing {
      * @param maximumGradient largest friction loss per 100 m of pipe (m)
      * @param headBudget largest loss from a source to any terminal (m); {@code
      *     Double.POSITIVE_INFINITY} for none
+     * @param minimumDiameter smallest inner diameter allowed (m), 0 for none: the owner's least main or
+     *     branch size, which keeps a loop-closing pipe that carries little flow from being sized to the
+     *     smallest size in the table
      */
-    public record Limits(double maximumVelocity, double maximumGradient, double headBudget) {
+    public record Limits(double maximumVelocity, double maximumGradient, double headBudget, double minimumDiameter) {
+
+        /** Limits without a least diameter. */
+        public Limits(double maximumVelocity, double maximumGradient, double headBudget) {
+            this(maximumVelocity, maximumGradient, headBudget, 0);
+        }
+
         public Limits {
+            if (!(minimumDiameter >= 0) || Double.isInfinite(minimumDiameter)) {
+                throw new InputException("--min-diameter", "must be a diameter of 0 or more, got " + minimumDiameter);
+            }
             if (!(maximumVelocity > 0)) {
                 throw new InputException("--max-velocity", "must be a velocity above zero, got " + maximumVelocity);
             }
@@ -348,6 +360,10 @@ public final class NetworkSizing {
         Segment trial = resized(pipe, size);
         double gradient = pipe.length() > 0 ? trial.flowAt(flow, context).majorHeadLoss() / pipe.length() * 100 : 0;
         List<String> reasons = new ArrayList<>();
+        if (d < limits.minimumDiameter() * (1 - SLACK)) {
+            reasons.add(String.format(
+                    Locale.ROOT, "bore %.4g mm below the least %.4g mm", d * 1000, limits.minimumDiameter() * 1000));
+        }
         if (velocity > limits.maximumVelocity() * (1 + SLACK)) {
             reasons.add(
                     String.format(Locale.ROOT, "velocity %.3g m/s above %.3g m/s", velocity, limits.maximumVelocity()));
