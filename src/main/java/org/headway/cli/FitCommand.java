@@ -284,7 +284,8 @@ public final class FitCommand implements Callable<Integer> {
             try (Reader reader = new LineLengthLimit(
                             Files.newBufferedReader(file, StandardCharsets.UTF_8),
                             file.toString(),
-                            LineLengthLimit.MAX_LINE_LENGTH);
+                            LineLengthLimit.MAX_LINE_LENGTH,
+                            file);
                     CSVParser parser = csv.parse(reader)) {
                 boolean header = true;
                 for (CSVRecord record : parser) {

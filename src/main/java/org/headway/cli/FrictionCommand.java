@@ -221,7 +221,8 @@ public final class FrictionCommand implements Callable<Integer> {
         try (Reader reader = new LineLengthLimit(
                         Files.newBufferedReader(input, StandardCharsets.UTF_8),
                         "--input " + input,
-                        LineLengthLimit.MAX_LINE_LENGTH);
+                        LineLengthLimit.MAX_LINE_LENGTH,
+                        input);
                 CSVParser parser = CSVFormat.DEFAULT
                         .builder()
                         .setHeader()
@@ -235,7 +236,14 @@ public final class FrictionCommand implements Callable<Integer> {
             header.addAll(RESULT_COLUMNS);
             Writer target;
             if (output == null) {
-                target = spec.commandLine().getOut();
+                // Standard output belongs to picocli: the printer may flush it but never close it,
+                // not even when a bad row ends the stream early.
+                target = new java.io.FilterWriter(spec.commandLine().getOut()) {
+                    @Override
+                    public void close() throws IOException {
+                        flush();
+                    }
+                };
             } else {
                 Path folder = output.toAbsolutePath().getParent();
                 temporary = Files.createTempFile(folder, "." + output.getFileName(), ".tmp");

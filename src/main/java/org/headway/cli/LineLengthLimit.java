@@ -8,7 +8,8 @@ import org.headway.caution.InputException;
 /**
  * A reader that refuses a physical line longer than a limit, so that a CSV reader fed a file with
  * no line breaks (a binary dump, a runaway quote) stops with a located error instead of growing one
- * record until memory runs out. CR, LF and CRLF all end a line.
+ * record until memory runs out. CR, LF and CRLF all end a line. A leading byte-order mark is
+ * dropped, and bytes of the source that are not UTF-8 are reported with its line.
  */
 final class LineLengthLimit extends FilterReader {
 
@@ -27,14 +28,46 @@ final class LineLengthLimit extends FilterReader {
      * @param limit longest line accepted (characters)
      */
     LineLengthLimit(Reader in, String label, int limit) {
+        this(in, label, limit, null);
+    }
+
+    /**
+     * @param in the underlying reader, a strict UTF-8 decoder of {@code source}
+     * @param label how errors name the source
+     * @param limit longest line accepted (characters)
+     * @param source the file read, so that bytes that are not UTF-8 are located in it; null if none
+     */
+    LineLengthLimit(Reader in, String label, int limit, java.nio.file.Path source) {
         super(in);
         this.label = label;
         this.limit = limit;
+        this.source = source;
+    }
+
+    private final java.nio.file.Path source;
+    private boolean started;
+
+    private IOException located(java.nio.charset.CharacterCodingException e) {
+        if (source == null) {
+            return e;
+        }
+        throw org.headway.caution.TextFiles.notUtf8(source, label);
     }
 
     @Override
     public int read() throws IOException {
-        int c = super.read();
+        int c;
+        try {
+            c = super.read();
+            if (!started) {
+                started = true;
+                if (c == org.headway.caution.TextFiles.BOM) {
+                    c = super.read();
+                }
+            }
+        } catch (java.nio.charset.CharacterCodingException e) {
+            throw located(e);
+        }
         if (c >= 0) {
             count((char) c);
         }
@@ -43,7 +76,23 @@ final class LineLengthLimit extends FilterReader {
 
     @Override
     public int read(char[] buffer, int offset, int length) throws IOException {
-        int n = super.read(buffer, offset, length);
+        int n;
+        try {
+            n = super.read(buffer, offset, length);
+        } catch (java.nio.charset.CharacterCodingException e) {
+            throw located(e);
+        }
+        if (!started && n > 0) {
+            // A spreadsheet's "CSV UTF-8" starts with a byte-order mark: it is not part of the header.
+            started = true;
+            if (buffer[offset] == org.headway.caution.TextFiles.BOM) {
+                System.arraycopy(buffer, offset + 1, buffer, offset, n - 1);
+                n--;
+                if (n == 0) {
+                    return read(buffer, offset, length);
+                }
+            }
+        }
         for (int i = 0; i < n; i++) {
             count(buffer[offset + i]);
         }

@@ -1,7 +1,6 @@
 package org.headway.fluid;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -67,10 +66,7 @@ public final class UserFluidTable {
                         "file is larger than " + MAX_FILE_SIZE / (1024 * 1024)
                                 + " MB; a fluid table has one short line per temperature");
             }
-            text = Files.readString(csv, StandardCharsets.UTF_8);
-            if (text.startsWith("\uFEFF")) {
-                text = text.substring(1);
-            }
+            text = org.headway.caution.TextFiles.decode(Files.readAllBytes(csv), csv.toString());
         } catch (IOException e) {
             throw new InputException(csv.toString(), "cannot read the fluid table: " + e.getMessage(), e);
         }

@@ -188,7 +188,7 @@ public final class Catalog {
                             "file is larger than " + MAX_FILE_SIZE / (1024 * 1024)
                                     + " MB; a catalog file holds one short line per material, size or fitting");
                 }
-                text = Files.readString(file, StandardCharsets.UTF_8);
+                text = org.headway.caution.TextFiles.decode(Files.readAllBytes(file), file.toString());
             } catch (IOException e) {
                 throw new InputException(file.toString(), "cannot read the file: " + e.getMessage(), e);
             }

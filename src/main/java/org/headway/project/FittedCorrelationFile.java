@@ -7,8 +7,6 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
@@ -108,20 +106,8 @@ public final class FittedCorrelationFile {
      *     or the file itself if it is missing or not JSON
      */
     public static FittedCorrelation load(Path file) {
-        String text;
-        try {
-            if (Files.size(file) > ProjectFile.MAX_DOCUMENT_LENGTH) {
-                throw new InputException(
-                        file.toString(),
-                        "file is larger than " + ProjectFile.MAX_DOCUMENT_LENGTH / (1024 * 1024)
-                                + " MB; a fitted-correlation file is a few kilobytes");
-            }
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new InputException(file.toString(), "file not found");
-        } catch (IOException e) {
-            throw new InputException(file.toString(), "cannot read: " + e.getMessage());
-        }
+        String text = org.headway.caution.TextFiles.read(
+                file, ProjectFile.MAX_DOCUMENT_LENGTH, "a fitted-correlation file is a few kilobytes");
         return parse(text, file.toString());
     }
 

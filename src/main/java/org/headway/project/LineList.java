@@ -1,9 +1,6 @@
 package org.headway.project;
 
 import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -592,18 +589,9 @@ public final class LineList {
                 if (Files.size(file) > MAX_BYTES) {
                     throw new InputException(file.toString(), "is larger than " + (MAX_BYTES >> 20) + " MB");
                 }
-                byte[] bytes = Files.readAllBytes(file);
-                text = StandardCharsets.UTF_8
-                        .newDecoder()
-                        .onMalformedInput(CodingErrorAction.REPORT)
-                        .onUnmappableCharacter(CodingErrorAction.REPORT)
-                        .decode(java.nio.ByteBuffer.wrap(bytes))
-                        .toString();
+                text = org.headway.caution.TextFiles.decode(Files.readAllBytes(file), file.toString());
             } catch (NoSuchFileException e) {
                 throw new InputException(file.toString(), "file not found");
-            } catch (CharacterCodingException e) {
-                throw new InputException(
-                        file.toString(), "is not UTF-8 text; save it as CSV UTF-8 (a spreadsheet's \"CSV UTF-8\")");
             } catch (IOException e) {
                 throw new InputException(file.toString(), "cannot be read: " + e.getMessage());
             }

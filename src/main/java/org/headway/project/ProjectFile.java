@@ -56,6 +56,8 @@ public final class ProjectFile {
         ObjectMapper mapper = new ObjectMapper(factory);
         mapper.enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY);
         mapper.enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+        // Text after the closing brace (a merge marker, a second project) is an error, not ignored.
+        mapper.enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
         mapper.enable(SerializationFeature.INDENT_OUTPUT);
         return mapper;
     }
@@ -86,8 +88,9 @@ public final class ProjectFile {
         } catch (IOException e) {
             throw new InputException(file.toString(), "cannot read: " + e.getMessage());
         }
+        String text = org.headway.caution.TextFiles.decode(bytes, name);
         try {
-            return parse(new String(bytes, StandardCharsets.UTF_8));
+            return parse(text);
         } catch (InputException e) {
             throw e.at(name + " ");
         }

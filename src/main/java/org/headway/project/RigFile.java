@@ -9,7 +9,6 @@ import java.io.InputStreamReader;
 import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -74,7 +73,7 @@ public final class RigFile {
     /** Pressure at which fluid properties are evaluated when the file gives none (Pa). */
     public static final double DEFAULT_PRESSURE = 101_325.0;
 
-    private static final ObjectMapper MAPPER = new ObjectMapper();
+    private static final ObjectMapper MAPPER = ProjectFile.mapper();
     private static final Pattern PERCENT =
             Pattern.compile("^\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*%\\s*$");
     private static final Pattern NUMBER_THEN_UNIT =
@@ -119,13 +118,8 @@ public final class RigFile {
      */
     public static RigFile load(Path file) {
         String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new InputException(file.toString(), "file not found");
-        } catch (IOException e) {
-            throw new InputException(file.toString(), "cannot read: " + e.getMessage());
-        }
+        text = org.headway.caution.TextFiles.read(
+                file, ProjectFile.MAX_DOCUMENT_LENGTH, "a rig file is a few kilobytes");
         Path folder = file.toAbsolutePath().getParent();
         return parse(text, file.toString(), file.getFileName().toString(), dataPath -> {
             Path resolved = folder.resolve(dataPath).normalize();
@@ -141,7 +135,7 @@ public final class RigFile {
                 @Override
                 public Reader open() throws IOException {
                     try {
-                        return Files.newBufferedReader(resolved, StandardCharsets.UTF_8);
+                        return org.headway.caution.TextFiles.reader(resolved, shown.toString());
                     } catch (NoSuchFileException e) {
                         throw new InputException(shown.toString(), "data file not found");
                     }
