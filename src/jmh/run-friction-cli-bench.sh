@@ -18,7 +18,7 @@ with open(folder + "/points-1m.csv", "w") as f:
 PY
 for heap in "" "-Xmx64m"; do
   /usr/bin/time -v java $heap -jar target/headway.jar friction --input "$out/points-1m.csv" \
-    --output "$out/out-1m.csv" 2> "$out/cli-time.txt"
+    --output "$out/out-1m.csv" --force 2> "$out/cli-time.txt"
   wall=$(grep 'Elapsed (wall clock)' "$out/cli-time.txt" | awk '{print $NF}')
   user=$(grep 'User time' "$out/cli-time.txt" | awk '{print $NF}')
   rss=$(grep 'Maximum resident' "$out/cli-time.txt" | awk '{print $NF}')

@@ -97,10 +97,16 @@ public final class FitCommand implements Callable<Integer> {
     @Option(names = "--save", paramLabel = "FIT.json", description = "save the (best) fit as a correlation file")
     Path save;
 
+    @Option(names = "--force", description = "replace an existing --save file")
+    boolean force;
+
     @Override
     public Integer call() throws IOException {
         if (!format.equals("text") && !format.equals("json")) {
             throw new InputException("--format", "must be text or json, got '" + format + "'");
+        }
+        if (save != null && !force && java.nio.file.Files.exists(save, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+            throw new InputException("--save " + save, "already exists; give --force to replace it");
         }
         if (form != null && expression != null) {
             throw new InputException("--form", "give either --form or --expression, not both");
@@ -157,7 +163,11 @@ public final class FitCommand implements Callable<Integer> {
             }
         }
         if (save != null) {
-            FittedCorrelationFile.save(save, chosen.toCorrelation());
+            try {
+                FittedCorrelationFile.save(save, chosen.toCorrelation(), force);
+            } catch (InputException e) {
+                throw new InputException("--save " + save, "already exists; give --force to replace it", e);
+            }
             if (format.equals("text")) {
                 out.println("Saved " + chosen.formId() + " fit to " + save);
             }

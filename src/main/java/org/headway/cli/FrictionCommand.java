@@ -11,7 +11,6 @@ import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -105,6 +104,9 @@ public final class FrictionCommand implements Callable<Integer> {
             description = "Where to write the batch result (default: standard output). Written whole or not at all.")
     Path output;
 
+    @Option(names = "--force", description = "Replace an existing --output file.")
+    boolean force;
+
     @Override
     public Integer call() throws IOException {
         FrictionCorrelation correlation = FrictionMethods.byId(method);
@@ -112,6 +114,18 @@ public final class FrictionCommand implements Callable<Integer> {
             if (reynolds != null || relativeRoughness != null || format != null) {
                 throw usage(
                         "--input takes its points from the file: leave out --re, --relative-roughness and --format");
+            }
+            if (output != null) {
+                if (Files.exists(output) && Files.exists(input) && Files.isSameFile(output, input)) {
+                    throw new InputException("--output " + output, "is the input file; write the results elsewhere");
+                }
+                if (!force && Files.exists(output, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+                    throw new InputException("--output " + output, "already exists; give --force to replace it");
+                }
+                Path folder = output.toAbsolutePath().getParent();
+                if (folder != null && !Files.isDirectory(folder)) {
+                    throw new InputException("--output " + output, "its folder " + folder + " does not exist");
+                }
             }
             return batch(correlation);
         }
@@ -245,8 +259,13 @@ public final class FrictionCommand implements Callable<Integer> {
                     }
                 };
             } else {
-                Path folder = output.toAbsolutePath().getParent();
-                temporary = Files.createTempFile(folder, "." + output.getFileName(), ".tmp");
+                try {
+                    temporary = org.headway.project.AtomicFiles.createTemporary(output);
+                } catch (IOException e) {
+                    throw new InputException(
+                            "--output " + output,
+                            "cannot create a file in " + output.toAbsolutePath().getParent() + ": " + e.getMessage());
+                }
                 target = Files.newBufferedWriter(temporary, StandardCharsets.UTF_8);
             }
             try (CSVPrinter printer = CSVFormat.DEFAULT
@@ -290,7 +309,13 @@ public final class FrictionCommand implements Callable<Integer> {
                 }
             }
             if (temporary != null) {
-                Files.move(temporary, output, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+                try {
+                    org.headway.project.AtomicFiles.place(temporary, output.toAbsolutePath(), force);
+                } catch (java.nio.file.FileAlreadyExistsException e) {
+                    throw new InputException(
+                            "--output " + output,
+                            "was created by another program meanwhile; give --force to replace it");
+                }
                 temporary = null;
             }
         } catch (UncheckedIOException e) {
@@ -303,9 +328,15 @@ public final class FrictionCommand implements Callable<Integer> {
         } catch (IllegalArgumentException e) {
             // commons-csv refuses a header row with an empty or repeated column name this way
             throw new InputException("--input " + input, "the header row is not usable: " + e.getMessage(), e);
+        } catch (IOException e) {
+            if (output != null && !(e instanceof java.nio.charset.CharacterCodingException)) {
+                throw new InputException("--output " + output, "not written: " + e.getMessage(), e);
+            }
+            throw e;
         } finally {
             if (temporary != null) {
                 Files.deleteIfExists(temporary);
+                org.headway.project.AtomicFiles.release(temporary);
             }
         }
         if (failedCount == 0) {

@@ -88,17 +88,19 @@ public final class SheetCommand implements Callable<Integer> {
                 throw new InputException(p.toString(), "already exists; use --force to replace it");
             }
         }
-        PdfSheetWriter.write(sheet, pdf, force, system);
-        o.println("wrote " + pdf);
+        // All files or none: every one is written to a temporary before any is moved into place.
+        java.util.List<org.headway.project.AtomicFiles.Entry> files = new java.util.ArrayList<>();
+        files.add(new org.headway.project.AtomicFiles.Entry(pdf, PdfSheetWriter.content(sheet, system)));
         if (workbook) {
-            Path x = sibling(pdf, ".xlsx");
-            WorkbookSheetWriter.write(sheet, x, force);
-            o.println("wrote " + x);
+            files.add(new org.headway.project.AtomicFiles.Entry(
+                    sibling(pdf, ".xlsx"), WorkbookSheetWriter.content(sheet)));
         }
         if (csv) {
-            Path c = sibling(pdf, ".csv");
-            CsvSheetWriter.write(sheet, c, force);
-            o.println("wrote " + c);
+            files.add(new org.headway.project.AtomicFiles.Entry(sibling(pdf, ".csv"), CsvSheetWriter.content(sheet)));
+        }
+        org.headway.project.AtomicFiles.writeAll(files, force);
+        for (org.headway.project.AtomicFiles.Entry f : files) {
+            o.println("wrote " + f.target());
         }
         o.println("input hash " + sheet.inputHash());
         o.flush();

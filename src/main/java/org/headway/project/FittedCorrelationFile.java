@@ -89,9 +89,18 @@ public final class FittedCorrelationFile {
      * @throws IOException if the folder cannot be written
      */
     public static void save(Path file, FittedCorrelation fit) throws IOException {
+        save(file, fit, true);
+    }
+
+    /**
+     * Saves a fitted correlation atomically.
+     *
+     * @param overwrite whether an existing file may be replaced (refused atomically if not)
+     */
+    public static void save(Path file, FittedCorrelation fit, boolean overwrite) throws IOException {
         byte[] bytes = (MAPPER.writeValueAsString(toJson(fit)) + "\n").getBytes(StandardCharsets.UTF_8);
         try {
-            AtomicFiles.write(file, true, out -> out.write(bytes));
+            AtomicFiles.write(file, overwrite, out -> out.write(bytes));
         } catch (java.io.UncheckedIOException e) {
             throw e.getCause();
         }

@@ -39,11 +39,16 @@ public final class CsvSheetWriter {
 
     /** Writes the CSV atomically. */
     public static void write(HeadLossSheet sheet, Path target, boolean overwrite) {
-        AtomicFiles.write(target, overwrite, out -> {
+        AtomicFiles.write(target, overwrite, content(sheet));
+    }
+
+    /** The CSV's content, for writing with other files all or none. */
+    public static AtomicFiles.Writer content(HeadLossSheet sheet) {
+        return out -> {
             Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
             write(sheet.result(), w);
             w.flush();
-        });
+        };
     }
 
     /**

@@ -48,12 +48,17 @@ public final class PdfSheetWriter {
      * @param units units the sheet is printed in
      */
     public static void write(HeadLossSheet sheet, Path target, boolean overwrite, UnitSystem units) {
-        AtomicFiles.write(target, overwrite, out -> {
+        AtomicFiles.write(target, overwrite, content(sheet, units));
+    }
+
+    /** The PDF's content, for writing with other files all or none. */
+    public static AtomicFiles.Writer content(HeadLossSheet sheet, UnitSystem units) {
+        return out -> {
             try (PdfLayout pdf = new PdfLayout()) {
                 compose(pdf, sheet, units);
                 pdf.doc.save(out);
             }
-        });
+        };
     }
 
     private static void compose(PdfLayout pdf, HeadLossSheet sheet, UnitSystem u) throws IOException {

@@ -43,14 +43,19 @@ public final class WorkbookSheetWriter {
      * @param overwrite whether an existing file may be replaced
      */
     public static void write(HeadLossSheet sheet, Path target, boolean overwrite) {
-        AtomicFiles.write(target, overwrite, out -> {
+        AtomicFiles.write(target, overwrite, content(sheet));
+    }
+
+    /** The workbook's content, for writing with other files all or none. */
+    public static AtomicFiles.Writer content(HeadLossSheet sheet) {
+        return out -> {
             Workbook wb = new Workbook(out, "Headway", "1.0");
             writeInputs(wb.newWorksheet("Inputs"), sheet);
             writeResults(wb.newWorksheet("Results"), sheet);
             writeElements(wb.newWorksheet("Elements"), sheet);
             writeNotes(wb.newWorksheet("Methods and cautions"), sheet);
             wb.finish();
-        });
+        };
     }
 
     private static void writeInputs(Worksheet ws, HeadLossSheet sheet) throws IOException {

@@ -60,7 +60,7 @@ class FrictionBatchFuzzTest {
             cl.setOut(new PrintWriter(out));
             cl.setErr(new PrintWriter(err));
             long start = System.nanoTime();
-            int code = cl.execute("friction", "--input", input.toString(), "--output", output.toString());
+            int code = cl.execute("friction", "--input", input.toString(), "--output", output.toString(), "--force");
             long ms = (System.nanoTime() - start) / 1_000_000;
             String m = "case " + i + " (seed " + SEED + ") exit " + code + ", stderr: " + err + "\ninput:\n"
                     + Fuzz.abbreviate(text);
