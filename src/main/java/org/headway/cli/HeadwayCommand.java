@@ -120,7 +120,7 @@ public final class HeadwayCommand implements Runnable {
         StringBuilder b = new StringBuilder(joined.length());
         joined.codePoints().forEach(c -> {
             if (Character.isISOControl(c)) {
-                b.append(String.format("\\u%04x", c));
+                b.append(String.format(java.util.Locale.ROOT, "\\u%04x", c));
             } else {
                 b.appendCodePoint(c);
             }

@@ -183,7 +183,8 @@ public final class AtomicFiles {
         removeStale(folder);
         java.util.concurrent.ThreadLocalRandom random = java.util.concurrent.ThreadLocalRandom.current();
         for (int attempt = 0; ; attempt++) {
-            Path temp = folder.resolve(TEMP_PREFIX + String.format("%016x", random.nextLong()) + TEMP_SUFFIX);
+            Path temp = folder.resolve(
+                    TEMP_PREFIX + String.format(java.util.Locale.ROOT, "%016x", random.nextLong()) + TEMP_SUFFIX);
             try {
                 IN_PROGRESS.add(temp);
                 // An ordinary new file: its permissions follow the umask, unlike createTempFile's 0600.

@@ -66,9 +66,12 @@ public final class FlowSolver {
                     0,
                     0,
                     String.format(
+                            java.util.Locale.ROOT,
                             "the static head %.4g m exceeds the available head %.4g m by %.4g m: flow would run from"
                                     + " delivery back to source",
-                            staticHead, availableHead, -surplus),
+                            staticHead,
+                            availableHead,
+                            -surplus),
                     HeadLossCalculator.solve(run, 0));
         }
         double smallestArea = Double.POSITIVE_INFINITY;
@@ -84,9 +87,11 @@ public final class FlowSolver {
                 throw new InputException(
                         "available head",
                         String.format(
+                                java.util.Locale.ROOT,
                                 "%.4g m of surplus head would drive more than %.0f m/s through the run; it has"
                                         + " almost no resistance (check lengths, diameters and fittings)",
-                                surplus, VELOCITY_CEILING));
+                                surplus,
+                                VELOCITY_CEILING));
             }
             high *= 2;
         }
@@ -104,7 +109,7 @@ public final class FlowSolver {
                 Outcome.FLOWING,
                 flow,
                 evaluations,
-                String.format("%.6g m³/s balances %.4g m of surplus head", flow, surplus),
+                String.format(java.util.Locale.ROOT, "%.6g m³/s balances %.4g m of surplus head", flow, surplus),
                 result);
     }
 }

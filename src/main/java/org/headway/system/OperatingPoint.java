@@ -40,8 +40,10 @@ public record OperatingPoint(boolean found, double flow, double head, String mes
                     0,
                     0,
                     String.format(
+                            java.util.Locale.ROOT,
                             "no intersection: the pump's shut-off head %.4g m does not exceed the static head %.4g m",
-                            shutoff, staticHead),
+                            shutoff,
+                            staticHead),
                     List.of());
         }
         double end = pump.maximumDataFlow();
@@ -54,9 +56,11 @@ public record OperatingPoint(boolean found, double flow, double head, String mes
                         0,
                         0,
                         String.format(
+                                java.util.Locale.ROOT,
                                 "no intersection up to %.4g m³/s (%.0f× the pump's last point): the pump curve stays"
                                         + " above the system curve",
-                                limit, SEARCH_FACTOR),
+                                limit,
+                                SEARCH_FACTOR),
                         List.of());
             }
             high = Math.min(high * 1.5, limit);
@@ -69,18 +73,28 @@ public record OperatingPoint(boolean found, double flow, double head, String mes
             cautions.add(Caution.warning(
                     "pump-curve-extrapolated",
                     String.format(
+                            java.util.Locale.ROOT,
                             "the operating point %.4g m³/s lies beyond the maker's last point %.4g m³/s; the fitted"
                                     + " curve is extrapolated there",
-                            q, end),
+                            q,
+                            end),
                     "pump curve fit"));
         }
         if (q < pump.points().get(0).flow()) {
             cautions.add(Caution.warning(
                     "pump-curve-extrapolated",
-                    String.format("the operating point %.4g m³/s lies below the maker's first point", q),
+                    String.format(
+                            java.util.Locale.ROOT,
+                            "the operating point %.4g m³/s lies below the maker's first point",
+                            q),
                     "pump curve fit"));
         }
-        return new OperatingPoint(true, q, h, String.format("operating point %.5g m³/s at %.4g m", q, h), cautions);
+        return new OperatingPoint(
+                true,
+                q,
+                h,
+                String.format(java.util.Locale.ROOT, "operating point %.5g m³/s at %.4g m", q, h),
+                cautions);
     }
 
     private static double difference(PipeRun run, PumpCurve pump, double flow) {
