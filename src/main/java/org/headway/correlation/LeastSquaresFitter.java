@@ -49,6 +49,11 @@ public final class LeastSquaresFitter {
     public static final double DEFAULT_TOLERANCE = 1e-14;
     /** Iteration budget of Levenberg–Marquardt. */
     public static final int DEFAULT_MAX_ITERATIONS = 10_000;
+    /**
+     * Largest iteration budget accepted: a fit that has not converged in a million
+     * Levenberg–Marquardt steps will not, and the evaluation budget (four per step) stays an int.
+     */
+    public static final int MAX_ITERATIONS_LIMIT = 1_000_000;
     /** Gauss–Newton polishing steps after Levenberg–Marquardt. */
     static final int POLISHING_STEPS = 20;
     /** Steps of iterative refinement after the QR solution of a linear form. */
@@ -97,6 +102,10 @@ public final class LeastSquaresFitter {
     public LeastSquaresFitter withMaxIterations(int iterations) {
         if (iterations < 1) {
             throw new InputException("max iterations", "must be positive, got " + iterations);
+        }
+        if (iterations > MAX_ITERATIONS_LIMIT) {
+            throw new InputException(
+                    "max iterations", "at most " + MAX_ITERATIONS_LIMIT + " are allowed, got " + iterations);
         }
         return new LeastSquaresFitter(tolerance, iterations);
     }

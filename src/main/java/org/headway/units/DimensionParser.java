@@ -47,9 +47,19 @@ public final class DimensionParser {
         "da", "Y", "Z", "E", "P", "T", "G", "M", "k", "h", "d", "c", "m", "µ", "μ", "u", "n", "p", "f", "a", "z", "y"
     };
 
+    /** Largest exponent magnitude accepted, in a factor or in the result: far beyond any physical unit. */
+    public static final int MAX_EXPONENT = 100;
+
+    /** Deepest nesting of parentheses accepted. */
+    public static final int MAX_DEPTH = 20;
+
+    /** Longest unit text accepted (characters). */
+    public static final int MAX_LENGTH = 200;
+
     private final String text;
     private final String where;
     private int pos;
+    private int depth;
 
     private DimensionParser(String text, String where) {
         this.text = text;
@@ -68,6 +78,10 @@ public final class DimensionParser {
         String t = unit.trim();
         if (t.isEmpty() || t.equals("1") || t.equals("-")) {
             return new int[BASE_DIMENSIONS];
+        }
+        if (t.length() > MAX_LENGTH) {
+            throw new InputException(
+                    where, "a unit of " + t.length() + " characters is longer than the " + MAX_LENGTH + " accepted");
         }
         DimensionParser p = new DimensionParser(t, where);
         int[] e = p.product();
@@ -122,6 +136,10 @@ public final class DimensionParser {
             if (digits.isEmpty() || digits.equals("-") || digits.equals("+")) {
                 throw error("expected an integer exponent after '^'");
             }
+            String magnitude = digits.replaceFirst("^[+-]", "").replaceFirst("^0+(?=\\d)", "");
+            if (magnitude.length() > 3 || Integer.parseInt(magnitude) > MAX_EXPONENT) {
+                throw error("exponent " + digits + " is beyond ±" + MAX_EXPONENT);
+            }
             exponent = Integer.parseInt(digits);
             if (paren) {
                 if (pos >= text.length() || text.charAt(pos) != ')') {
@@ -153,8 +171,12 @@ public final class DimensionParser {
         }
         char c = text.charAt(pos);
         if (c == '(') {
+            if (++depth > MAX_DEPTH) {
+                throw error("parentheses nested deeper than " + MAX_DEPTH);
+            }
             pos++;
             int[] inner = product();
+            depth--;
             if (pos >= text.length() || text.charAt(pos) != ')') {
                 throw error("expected ')'");
             }
@@ -190,9 +212,13 @@ public final class DimensionParser {
                         + " rad, with SI prefixes");
     }
 
-    private static void add(int[] into, int[] e, int times) {
+    private void add(int[] into, int[] e, int times) {
         for (int i = 0; i < into.length; i++) {
+            // Each term is bounded by MAX_EXPONENT², so neither step can overflow an int.
             into[i] += times * e[i];
+            if (Math.abs(into[i]) > MAX_EXPONENT) {
+                throw error("a dimension's exponent reaches " + into[i] + ", beyond ±" + MAX_EXPONENT);
+            }
         }
     }
 

@@ -70,4 +70,25 @@ class OutputSafetyTest {
         assertTrue(r.err().contains("out.csv") && r.err().contains("does not exist"), r.err());
         assertTrue(r.err().contains("no-such-folder"), r.err());
     }
+
+    @Test
+    void anIterationBudgetThatWouldOverflowIsRefused() throws Exception {
+        Path data = dir.resolve("d.csv");
+        Files.writeString(data, "x,y\n1,2.1\n2,3.9\n3,6.2\n4,7.8\n");
+        CliRun r = CliRun.of(
+                "fit",
+                data.toString(),
+                "--y",
+                "y",
+                "--x",
+                "x",
+                "--expression",
+                "a*x^b",
+                "--start",
+                "a=1,b=1",
+                "--max-iterations",
+                "600000000");
+        assertEquals(2, r.exitCode(), r.out());
+        assertTrue(r.err().contains("--max-iterations") && r.err().contains("1000000"), r.err());
+    }
 }
