@@ -221,7 +221,11 @@ public final class CatalogCommand implements Callable<Integer> {
         try (CSVPrinter printer = new CSVPrinter(
                 w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get())) {
             for (List<String> row : rows) {
-                printer.printRecord(row);
+                List<String> safe = new java.util.ArrayList<>(row.size());
+                for (String cell : row) {
+                    safe.add(org.headway.report.SafeText.echoedCell(cell));
+                }
+                printer.printRecord(safe);
             }
         } catch (IOException e) {
             throw new UncheckedIOException(e);

@@ -246,7 +246,10 @@ public final class FrictionCommand implements Callable<Integer> {
                         .parse(reader)) {
             List<String> inputColumns = parser.getHeaderNames();
             requireColumns(inputColumns);
-            List<String> header = new ArrayList<>(inputColumns);
+            List<String> header = new ArrayList<>();
+            for (String name : inputColumns) {
+                header.add(org.headway.report.SafeText.echoedCell(name));
+            }
             header.addAll(RESULT_COLUMNS);
             Writer target;
             if (output == null) {
@@ -278,7 +281,7 @@ public final class FrictionCommand implements Callable<Integer> {
                     rows++;
                     row.clear();
                     for (int i = 0; i < inputColumns.size(); i++) {
-                        row.add(i < record.size() ? record.get(i) : "");
+                        row.add(i < record.size() ? org.headway.report.SafeText.echoedCell(record.get(i)) : "");
                     }
                     try {
                         FrictionResult result = evaluateRow(correlation, record, rows, inputColumns.size());

@@ -311,7 +311,9 @@ public final class RigCommand implements Callable<Integer> {
                                 "U_Re",
                                 "U_f",
                                 "dominant_f"));
-                        header.addAll(carriedNames);
+                        for (String name : carriedNames) {
+                            header.add(org.headway.report.SafeText.echoedCell(name));
+                        }
                         csv.printRecord(header);
                         headerWritten[0] = true;
                     }
@@ -347,7 +349,7 @@ public final class RigCommand implements Callable<Integer> {
                                     ? u.dominantFrictionSource().label()
                                     : "");
                     for (String c : r.carried()) {
-                        csv.print(c);
+                        csv.print(org.headway.report.SafeText.echoedCell(c));
                     }
                     csv.println();
                 } catch (IOException e) {

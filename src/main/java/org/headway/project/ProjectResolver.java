@@ -492,12 +492,22 @@ public final class ProjectResolver {
         }
         if (state == null || hasOverrides || !spec.vapourPressure().isEmpty()) {
             double density = !spec.density().isEmpty()
-                    ? positive("density", Quantities.parse(spec.density(), QuantityKind.DENSITY, "density"))
+                    ? plausible(
+                            "density",
+                            positive("density", Quantities.parse(spec.density(), QuantityKind.DENSITY, "density")),
+                            MIN_DENSITY,
+                            MAX_DENSITY,
+                            "kg/m³")
                     : state.density();
             double viscosity = !spec.viscosity().isEmpty()
-                    ? positive(
+                    ? plausible(
                             "viscosity",
-                            Quantities.parse(spec.viscosity(), QuantityKind.DYNAMIC_VISCOSITY, "viscosity"))
+                            positive(
+                                    "viscosity",
+                                    Quantities.parse(spec.viscosity(), QuantityKind.DYNAMIC_VISCOSITY, "viscosity")),
+                            MIN_VISCOSITY,
+                            MAX_VISCOSITY,
+                            "Pa·s")
                     : state.dynamicViscosity();
             OptionalDouble vapour = !spec.vapourPressure().isEmpty()
                     ? OptionalDouble.of(InputException.requireNonNegative(
@@ -524,6 +534,32 @@ public final class ProjectResolver {
 
     private static double positive(String field, double v) {
         return InputException.requirePositive(field, v);
+    }
+
+    /** Least density accepted (kg/m³): far below any liquid, about a hundredth of air. */
+    public static final double MIN_DENSITY = 0.01;
+
+    /** Largest density accepted (kg/m³): above mercury (13,534) with room to spare. */
+    public static final double MAX_DENSITY = 30_000;
+
+    /** Least dynamic viscosity accepted (Pa·s): below any gas at ordinary conditions. */
+    public static final double MIN_VISCOSITY = 1e-7;
+
+    /** Largest dynamic viscosity accepted (Pa·s): a bitumen; beyond it nothing flows in a pipe. */
+    public static final double MAX_VISCOSITY = 1e6;
+
+    /** Largest curve flow accepted (m³/s): above the largest penstocks and mains. */
+    public static final double MAX_CURVE_FLOW = 1e3;
+
+    private static double plausible(String field, double v, double min, double max, String unit) {
+        if (v < min || v > max) {
+            throw new InputException(
+                    field,
+                    "value " + Quantities.formatNumber(v) + " " + unit + " is outside the plausible range "
+                            + Quantities.formatNumber(min) + " to " + Quantities.formatNumber(max) + " " + unit
+                            + "; check the number and its unit");
+        }
+        return v;
     }
 
     /** Prefix of a friction method or fitting kind that names a saved fitted correlation. */
@@ -1029,6 +1065,12 @@ public final class ProjectResolver {
         double max = flow(spec.maximumFlow(), density, "maximumFlow");
         if (max <= min) {
             throw new InputException("maximumFlow", "must exceed the minimum flow");
+        }
+        if (max > MAX_CURVE_FLOW) {
+            throw new InputException(
+                    "maximumFlow",
+                    "value " + Quantities.formatNumber(max) + " m³/s is beyond the plausible limit of "
+                            + Quantities.formatNumber(MAX_CURVE_FLOW) + " m³/s; check the number and its unit");
         }
         if (spec.points() < 2 || spec.points() > 100_000) {
             throw new InputException("points", "must be between 2 and 100000, got " + spec.points());

@@ -23,6 +23,25 @@ public final class SafeText {
     }
 
     /**
+     * A cell echoed from the user's own file: a plain number (which a spreadsheet reads as a number,
+     * never a formula) is kept as it is, so the output still reads back as the input; any other text
+     * is neutralised as by {@link #cell}.
+     */
+    public static String echoedCell(String text) {
+        if (text == null || text.isEmpty()) {
+            return "";
+        }
+        char c = text.charAt(0);
+        if (c != '=' && c != '+' && c != '-' && c != '@' && c != '\t' && c != '\r') {
+            return text;
+        }
+        return PLAIN_NUMBER.matcher(text).matches() ? text : "'" + text;
+    }
+
+    private static final java.util.regex.Pattern PLAIN_NUMBER =
+            java.util.regex.Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
+
+    /**
      * A file-name stem from user text: letters, digits, dot, dash and underscore only, no leading
      * dot, at most 80 characters, so that a name from a project file cannot leave the chosen folder.
      */
