@@ -84,9 +84,16 @@ final class PdfLayout implements AutoCloseable {
 
     /** A heading kept on the same page as at least {@code keepWith} points of what follows it. */
     void heading(String text, float size, float keepWith) throws IOException {
-        ensure(size * 2.2f + keepWith);
+        List<String> lines = wrap(text, bold, size, width());
+        ensure(size * 2.2f + keepWith + (Math.min(lines.size(), 20) - 1) * size * 1.25f);
         y -= size * 0.6f;
-        write(text, bold, size, MARGIN, y - size, INK);
+        for (int i = 0; i < lines.size(); i++) {
+            if (i > 0) {
+                y -= size * 1.25f;
+                ensure(size * 2);
+            }
+            write(lines.get(i), bold, size, MARGIN, y - size, INK);
+        }
         y -= size * 1.5f;
         out.setStrokingColor(RULE);
         out.setLineWidth(0.5f);
@@ -110,7 +117,14 @@ final class PdfLayout implements AutoCloseable {
 
     /** A paragraph in a shaded box that is never split across pages. */
     void note(String text, float size) throws IOException {
-        List<String> lines = wrap(text, bold, size, width() - 12);
+        List<String> all = wrap(text, bold, size, width() - 12);
+        int perPage = (int) Math.floor((PDRectangle.A4.getHeight() - 2 * MARGIN - FOOTER - 16) / (size * 1.35f));
+        for (int from = 0; from < all.size(); from += perPage) {
+            noteBox(all.subList(from, Math.min(all.size(), from + perPage)), size);
+        }
+    }
+
+    private void noteBox(List<String> lines, float size) throws IOException {
         float h = lines.size() * size * 1.35f + 10;
         ensure(h + 4);
         out.setNonStrokingColor(NOTE_FILL);
@@ -141,29 +155,61 @@ final class PdfLayout implements AutoCloseable {
         for (int i = 0; i < widths.length; i++) {
             cols[i] = widths[i] * width();
         }
-        drawRow(header, cols, size, true);
+        List<List<String>> head = wrapCells(header, cols, size, bold);
+        drawLines(head, cols, size, true, 0, lineCount(head));
+        float lineHeight = size * 1.3f;
+        float pageRoom = PDRectangle.A4.getHeight() - 2 * MARGIN - FOOTER - headerHeight(head, size) - 4;
         for (String[] row : rows) {
-            float h = rowHeight(row, cols, size, regular);
-            if (y - h < MARGIN + FOOTER) {
+            List<List<String>> cells = wrapCells(row, cols, size, regular);
+            int n = lineCount(cells);
+            float h = n * lineHeight + 4;
+            if (y - h < MARGIN + FOOTER && h <= pageRoom) {
+                // The row fits on a fresh page: move it whole.
                 newPage();
-                drawRow(header, cols, size, true);
+                drawLines(head, cols, size, true, 0, lineCount(head));
             }
-            drawRow(row, cols, size, false);
+            // A row taller than a page is split between pages, its lines never running into the footer.
+            int from = 0;
+            while (from < n) {
+                int fit = (int) Math.floor((y - (MARGIN + FOOTER) - 4) / lineHeight);
+                if (fit < 1) {
+                    newPage();
+                    drawLines(head, cols, size, true, 0, lineCount(head));
+                    continue;
+                }
+                int take = Math.min(fit, n - from);
+                drawLines(cells, cols, size, false, from, take);
+                from += take;
+            }
         }
         y -= 4;
     }
 
-    private float rowHeight(String[] cells, float[] cols, float size, PDFont font) throws IOException {
-        int lines = 1;
-        for (int i = 0; i < cells.length; i++) {
-            lines = Math.max(lines, wrap(cells[i], font, size, cols[i] - 4).size());
-        }
-        return lines * size * 1.3f + 4;
+    private float headerHeight(List<List<String>> head, float size) {
+        return lineCount(head) * size * 1.3f + 4;
     }
 
-    private void drawRow(String[] cells, float[] cols, float size, boolean header) throws IOException {
+    private List<List<String>> wrapCells(String[] cells, float[] cols, float size, PDFont font) throws IOException {
+        List<List<String>> out = new ArrayList<>(cells.length);
+        for (int i = 0; i < cells.length; i++) {
+            out.add(wrap(cells[i], font, size, cols[i] - 4));
+        }
+        return out;
+    }
+
+    private static int lineCount(List<List<String>> cells) {
+        int lines = 1;
+        for (List<String> c : cells) {
+            lines = Math.max(lines, c.size());
+        }
+        return lines;
+    }
+
+    /** Draws lines [from, from + count) of a row's wrapped cells as one band. */
+    private void drawLines(List<List<String>> cells, float[] cols, float size, boolean header, int from, int count)
+            throws IOException {
         PDFont font = header ? bold : regular;
-        float h = rowHeight(cells, cols, size, font);
+        float h = count * size * 1.3f + 4;
         ensure(h);
         if (header) {
             out.setNonStrokingColor(HEAD_FILL);
@@ -171,10 +217,11 @@ final class PdfLayout implements AutoCloseable {
             out.fill();
         }
         float x = MARGIN;
-        for (int i = 0; i < cells.length; i++) {
+        for (int i = 0; i < cells.size(); i++) {
             float ty = y - 2;
-            for (String line : wrap(cells[i], font, size, cols[i] - 4)) {
-                write(line, font, size, x + 2, ty - size, INK);
+            List<String> lines = cells.get(i);
+            for (int k = from; k < Math.min(lines.size(), from + count); k++) {
+                write(lines.get(k), font, size, x + 2, ty - size, INK);
                 ty -= size * 1.3f;
             }
             x += cols[i];
@@ -231,35 +278,71 @@ final class PdfLayout implements AutoCloseable {
         return b.toString();
     }
 
+    /**
+     * Greedy line breaking at spaces in time linear in the text: each character's width is looked up
+     * once per font (glyph widths add up, so a word's width is the sum of its characters'), and a
+     * word longer than the line is cut into pieces that fit.
+     */
     List<String> wrap(String text, PDFont font, float size, float maxWidth) throws IOException {
         List<String> lines = new ArrayList<>();
+        float max = maxWidth * 1000f / size;
+        float space = charWidth(font, ' ');
         for (String para : (text == null ? "" : text).split("\n", -1)) {
             StringBuilder line = new StringBuilder();
-            for (String word : para.split(" ")) {
-                String trial = line.length() == 0 ? word : line + " " + word;
-                if (widthOf(trial, font, size) <= maxWidth || line.length() == 0) {
-                    line.setLength(0);
-                    line.append(trial);
-                    // A single word longer than the column is cut into pieces that fit.
-                    while (widthOf(line.toString(), font, size) > maxWidth && line.length() > 1) {
-                        int cut = line.length() - 1;
-                        while (cut > 1 && widthOf(line.substring(0, cut), font, size) > maxWidth) {
-                            cut--;
-                        }
-                        lines.add(line.substring(0, cut));
-                        String rest = line.substring(cut);
-                        line.setLength(0);
-                        line.append(rest);
-                    }
-                } else {
+            float lineWidth = 0;
+            for (String word : para.split(" ", -1)) {
+                float w = 0;
+                for (int i = 0; i < word.length(); ) {
+                    int cp = word.codePointAt(i);
+                    w += charWidth(font, cp);
+                    i += Character.charCount(cp);
+                }
+                if (line.length() > 0 && lineWidth + space + w <= max) {
+                    line.append(' ').append(word);
+                    lineWidth += space + w;
+                    continue;
+                }
+                if (line.length() > 0) {
                     lines.add(line.toString());
                     line.setLength(0);
+                    lineWidth = 0;
+                }
+                if (w <= max) {
                     line.append(word);
+                    lineWidth = w;
+                    continue;
+                }
+                // Cut a word wider than the line.
+                for (int i = 0; i < word.length(); ) {
+                    int cp = word.codePointAt(i);
+                    float cw = charWidth(font, cp);
+                    if (line.length() > 0 && lineWidth + cw > max) {
+                        lines.add(line.toString());
+                        line.setLength(0);
+                        lineWidth = 0;
+                    }
+                    line.appendCodePoint(cp);
+                    lineWidth += cw;
+                    i += Character.charCount(cp);
                 }
             }
             lines.add(line.toString());
         }
         return lines;
+    }
+
+    private final java.util.Map<PDFont, java.util.Map<Integer, Float>> charWidths = new java.util.HashMap<>();
+
+    /** Width of one character as drawn (after {@link #printable}), in font units per 1000 em. */
+    private float charWidth(PDFont font, int cp) throws IOException {
+        java.util.Map<Integer, Float> cache = charWidths.computeIfAbsent(font, f -> new java.util.HashMap<>());
+        Float w = cache.get(cp);
+        if (w == null) {
+            String drawn = printable(new String(Character.toChars(cp)), font);
+            w = drawn.isEmpty() ? 0f : font.getStringWidth(drawn);
+            cache.put(cp, w);
+        }
+        return w;
     }
 
     float widthOf(String text, PDFont font, float size) throws IOException {
