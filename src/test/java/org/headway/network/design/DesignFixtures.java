@@ -53,6 +53,19 @@ final class DesignFixtures {
     }
 
     /**
+     * A Darcy–Weisbach pipe (friction by the network's method, Colebrook–White here) with a
+     * roughness range.
+     */
+    static Segment dwPipe(String id, double length, double diameter, double roughness, double low, double high) {
+        return Segment.builder(id)
+                .id(id)
+                .length(length)
+                .bore(diameter, roughness)
+                .roughnessRange(low, high)
+                .build();
+    }
+
+    /**
      * Hazen–Williams head loss written out here, independently of {@link Segment}: V = 0.849 C R^0.63
      * S^0.54 with R = D/4 (the SI form of Williams &amp; Hazen's formula), so h = L (V / (0.849 C
      * R^0.63))^(1/0.54).
