@@ -210,6 +210,31 @@ public final class NetworkCommand implements Callable<Integer> {
             description = "For --size: least inner diameter a sized pipe may have, e.g. \"100 mm\" (default none).")
     String minDiameter;
 
+    @Option(
+            names = "--uncertainty",
+            description = {
+                "Range of every node's pressure and every pump's duty over each pipe's published",
+                "roughness range and --demand-range: the two corners where they are shown to",
+                "bound it (a tree from one source), otherwise a seeded Monte Carlo."
+            })
+    boolean uncertainty;
+
+    @Option(
+            names = "--demand-range",
+            paramLabel = "LOW:HIGH",
+            description = "Multipliers on every junction demand for --uncertainty, e.g. \"0.9:1.1\" (default 1:1).")
+    String demandRange;
+
+    @Option(
+            names = "--samples",
+            paramLabel = "N",
+            description =
+                    "Random samples of the Monte Carlo (default 200; the nominal and both corners are solved too).")
+    Integer samples;
+
+    @Option(names = "--seed", paramLabel = "S", description = "Seed of the Monte Carlo (default 1).")
+    Long seed;
+
     @Override
     public Integer call() {
         long t0 = System.nanoTime();
@@ -228,6 +253,14 @@ public final class NetworkCommand implements Callable<Integer> {
                                     ? "--max-gradient"
                                     : headBudget != null ? "--head-budget" : "--min-diameter",
                     "applies to sizing; give --size as well");
+        }
+        if (!uncertainty && (demandRange != null || samples != null || seed != null)) {
+            throw new InputException(
+                    demandRange != null ? "--demand-range" : samples != null ? "--samples" : "--seed",
+                    "applies to the uncertainty study; give --uncertainty as well");
+        }
+        if (uncertainty) {
+            design = design.withUncertainty(NetworkDesign.uncertaintySpec(demandRange, samples, seed));
         }
         if (size) {
             if (maxVelocity != null) {
@@ -336,6 +369,10 @@ public final class NetworkCommand implements Callable<Integer> {
                         out.println();
                         NetworkOutput.sizingCsv(designed.sizing(), out);
                     }
+                    if (designed.uncertainty() != null) {
+                        out.println();
+                        NetworkOutput.uncertaintyCsv(designed.uncertainty(), out);
+                    }
                     if (!result.cases().isEmpty()) {
                         out.println();
                         NetworkStudyOutput.caseNodesCsv(result, out);
@@ -356,6 +393,12 @@ public final class NetworkCommand implements Callable<Integer> {
                 write(output.resolve("network-links.csv"), force, w -> NetworkOutput.linksCsv(base, designed, w));
                 if (designed.any()) {
                     write(output.resolve("network-design.csv"), force, w -> NetworkOutput.designCsv(designed, w));
+                }
+                if (designed.uncertainty() != null) {
+                    write(
+                            output.resolve("network-uncertainty.csv"),
+                            force,
+                            w -> NetworkOutput.uncertaintyCsv(designed.uncertainty(), w));
                 }
                 if (designed.sizing() != null) {
                     write(

@@ -11,6 +11,8 @@ import org.headway.network.design.FireFlow;
 import org.headway.network.design.FireFlowResult;
 import org.headway.network.design.NetworkSizing;
 import org.headway.network.design.NetworkSizingResult;
+import org.headway.network.design.NetworkUncertainty;
+import org.headway.network.design.NetworkUncertaintyResult;
 import org.headway.project.ProjectResolver;
 import org.headway.units.Quantities;
 
@@ -23,12 +25,55 @@ import org.headway.units.Quantities;
  * @param fireNode the junction for the fire flow, or null
  * @param residualPressure the residual pressure as typed, or null
  */
-record NetworkDesign(Balancing balancing, String fireNode, String residualPressure, SizingRequest sizing) {
+record NetworkDesign(
+        Balancing balancing,
+        String fireNode,
+        String residualPressure,
+        SizingRequest sizing,
+        NetworkUncertainty.Spec uncertainty) {
 
-    static final NetworkDesign NONE = new NetworkDesign(null, null, null, null);
+    static final NetworkDesign NONE = new NetworkDesign(null, null, null, null, null);
 
     NetworkDesign(Balancing balancing, String fireNode, String residualPressure) {
-        this(balancing, fireNode, residualPressure, null);
+        this(balancing, fireNode, residualPressure, null, null);
+    }
+
+    /** The same design with an uncertainty study. */
+    NetworkDesign withUncertainty(NetworkUncertainty.Spec spec) {
+        return new NetworkDesign(balancing, fireNode, residualPressure, sizing, spec);
+    }
+
+    /**
+     * Reads {@code --demand-range LOW:HIGH} (multipliers on every junction demand, e.g. {@code
+     * 0.9:1.1}); null gives 1:1 (roughness ranges only).
+     */
+    static NetworkUncertainty.Spec uncertaintySpec(String demandRange, Integer samples, Long seed) {
+        double low = 1;
+        double high = 1;
+        if (demandRange != null) {
+            String[] parts = demandRange.strip().split(":", -1);
+            if (parts.length != 2) {
+                throw new InputException(
+                        "--demand-range",
+                        "expected LOW:HIGH multipliers on the demands, e.g. \"0.9:1.1\", got \"" + demandRange + "\"");
+            }
+            try {
+                low = org.headway.units.Decimals.parse(parts[0].strip());
+                high = org.headway.units.Decimals.parse(parts[1].strip());
+            } catch (RuntimeException e) {
+                throw new InputException(
+                        "--demand-range",
+                        "expected two plain numbers LOW:HIGH, e.g. \"0.9:1.1\", got \"" + demandRange + "\"");
+            }
+        }
+        NetworkUncertainty.Spec spec = NetworkUncertainty.Spec.of(low, high);
+        if (samples != null) {
+            spec = spec.withSamples(samples);
+        }
+        if (seed != null) {
+            spec = spec.withSeed(seed);
+        }
+        return spec;
     }
 
     /** Default velocity limit of network sizing (m/s): common practice for water services, no source. */
@@ -55,21 +100,25 @@ record NetworkDesign(Balancing balancing, String fireNode, String residualPressu
 
     /** The same design with sizing. */
     NetworkDesign withSizing(SizingRequest request) {
-        return new NetworkDesign(balancing, fireNode, residualPressure, request);
+        return new NetworkDesign(balancing, fireNode, residualPressure, request, uncertainty);
     }
 
     /** The results, each null when not asked for. */
     record Results(
-            BalancingResult balance, FireFlowResult fireFlow, NetworkSizingResult sizing, List<String> notSized) {
+            BalancingResult balance,
+            FireFlowResult fireFlow,
+            NetworkSizingResult sizing,
+            List<String> notSized,
+            NetworkUncertaintyResult uncertainty) {
 
-        static final Results NONE = new Results(null, null, null, List.of());
+        static final Results NONE = new Results(null, null, null, List.of(), null);
 
         Results(BalancingResult balance, FireFlowResult fireFlow) {
-            this(balance, fireFlow, null, List.of());
+            this(balance, fireFlow, null, List.of(), null);
         }
 
         boolean any() {
-            return balance != null || fireFlow != null || sizing != null;
+            return balance != null || fireFlow != null || sizing != null || uncertainty != null;
         }
 
         /** Cautions of the design runs, balancing first. */
@@ -84,6 +133,9 @@ record NetworkDesign(Balancing balancing, String fireNode, String residualPressu
             if (sizing != null) {
                 all.addAll(sizing.cautions());
             }
+            if (uncertainty != null) {
+                all.addAll(uncertainty.cautions());
+            }
             return all;
         }
 
@@ -91,7 +143,8 @@ record NetworkDesign(Balancing balancing, String fireNode, String residualPressu
         boolean complete() {
             return (balance == null || balance.converged())
                     && (fireFlow == null || fireFlow.found())
-                    && (sizing == null || sizing.settled());
+                    && (sizing == null || sizing.settled())
+                    && (uncertainty == null || uncertainty.failedSolves() == 0);
         }
     }
 
@@ -130,7 +183,7 @@ record NetworkDesign(Balancing balancing, String fireNode, String residualPressu
                 b = b.withSettingTables(org.headway.project.ValveSettingsFile.read(valveSettings));
             }
         }
-        return new NetworkDesign(b, fireNode, residual);
+        return new NetworkDesign(b, fireNode, residual, null, null);
     }
 
     /** Runs what was asked on the network. */
@@ -184,7 +237,11 @@ record NetworkDesign(Balancing balancing, String fireNode, String residualPressu
                     .size(network, sizing.candidates().candidates(), new NetworkSizing.Limits(v, g, budget, dMin));
             notSized = sizing.candidates().notSized();
         }
-        return new Results(balance, fire, sized, notSized);
+        NetworkUncertaintyResult spread = null;
+        if (uncertainty != null) {
+            spread = NetworkUncertainty.run(network, uncertainty, org.headway.network.NetworkSolver.standard());
+        }
+        return new Results(balance, fire, sized, notSized, spread);
     }
 
     /**

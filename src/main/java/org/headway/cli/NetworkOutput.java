@@ -20,7 +20,9 @@ import org.headway.network.design.BalancingResult;
 import org.headway.network.design.FireFlow;
 import org.headway.network.design.FireFlowResult;
 import org.headway.network.design.NetworkSizingResult;
+import org.headway.network.design.NetworkUncertaintyResult;
 import org.headway.report.SafeText;
+import org.headway.system.UncertaintyBand;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
 import org.headway.units.UnitSystem;
@@ -155,7 +157,113 @@ final class NetworkOutput {
         if (design.sizing() != null) {
             sizingJson(root.putObject("sizing"), design.sizing(), design.notSized());
         }
+        if (design.uncertainty() != null) {
+            uncertaintyJson(root.putObject("uncertainty"), design.uncertainty());
+        }
         return root;
+    }
+
+    private static void band(ObjectNode o, String prefix, String unit, UncertaintyBand.Band b) {
+        put(o, prefix + "_nominal_" + unit, b.nominal());
+        put(o, prefix + "_low_" + unit, b.low());
+        put(o, prefix + "_high_" + unit, b.high());
+    }
+
+    private static void uncertaintyJson(ObjectNode o, NetworkUncertaintyResult u) {
+        o.put("method", u.method().id());
+        o.put("reason", u.reason());
+        o.put("demand_low", u.demandLow());
+        o.put("demand_high", u.demandHigh());
+        o.put("samples", u.randomSamples());
+        o.put("seed", u.seed());
+        o.put("solves", u.solves());
+        o.put("failed_solves", u.failedSolves());
+        ArrayNode nodes = o.putArray("nodes");
+        for (NetworkUncertaintyResult.NodeRange n : u.nodes()) {
+            ObjectNode x = nodes.addObject();
+            x.put("id", n.id());
+            x.put("fixed_head", n.fixed());
+            band(x, "pressure", "pa", n.pressure());
+            band(x, "head", "m", n.head());
+            putText(x, "low_at", n.lowAt());
+            putText(x, "high_at", n.highAt());
+            x.put("solves_without_head", n.solvesWithoutHead());
+        }
+        ArrayNode pumps = o.putArray("pumps");
+        for (NetworkUncertaintyResult.PumpRange p : u.pumps()) {
+            ObjectNode x = pumps.addObject();
+            x.put("id", p.id());
+            band(x, "flow", "m3_per_s", p.flow());
+            band(x, "head", "m", p.head());
+            putText(x, "low_flow_at", p.lowFlowAt());
+            putText(x, "high_flow_at", p.highFlowAt());
+            x.put("shut_solves", p.shutSolves());
+        }
+        RunJson.putCautions(o, u.cautions());
+    }
+
+    /** Columns of the uncertainty CSV's node table. */
+    static final String[] UNCERTAINTY_NODE_HEADER = {
+        "node",
+        "pressure_nominal [Pa]",
+        "pressure_low [Pa]",
+        "pressure_high [Pa]",
+        "head_nominal [m]",
+        "head_low [m]",
+        "head_high [m]",
+        "low_at",
+        "high_at"
+    };
+
+    /** Columns of the uncertainty CSV's pump table. */
+    static final String[] UNCERTAINTY_PUMP_HEADER = {
+        "pump",
+        "flow_nominal [m3/s]",
+        "flow_low [m3/s]",
+        "flow_high [m3/s]",
+        "head_nominal [m]",
+        "head_low [m]",
+        "head_high [m]",
+        "low_flow_at",
+        "high_flow_at"
+    };
+
+    /** The uncertainty study: junction ranges, then (after a blank line) pump ranges when there are pumps. */
+    static void uncertaintyCsv(NetworkUncertaintyResult u, Appendable out) throws IOException {
+        row(out, UNCERTAINTY_NODE_HEADER);
+        for (NetworkUncertaintyResult.NodeRange n : u.nodes()) {
+            if (n.fixed()) {
+                continue;
+            }
+            row(
+                    out,
+                    SafeText.cell(n.id()),
+                    num(n.pressure().nominal()),
+                    num(n.pressure().low()),
+                    num(n.pressure().high()),
+                    num(n.head().nominal()),
+                    num(n.head().low()),
+                    num(n.head().high()),
+                    SafeText.cell(n.lowAt()),
+                    SafeText.cell(n.highAt()));
+        }
+        if (!u.pumps().isEmpty()) {
+            out.append('\n');
+            row(out, UNCERTAINTY_PUMP_HEADER);
+            for (NetworkUncertaintyResult.PumpRange p : u.pumps()) {
+                row(
+                        out,
+                        SafeText.cell(p.id()),
+                        num(p.flow().nominal()),
+                        num(p.flow().low()),
+                        num(p.flow().high()),
+                        num(p.head().nominal()),
+                        num(p.head().low()),
+                        num(p.head().high()),
+                        SafeText.cell(p.lowFlowAt()),
+                        SafeText.cell(p.highFlowAt()));
+            }
+        }
     }
 
     private static void sizingJson(ObjectNode o, NetworkSizingResult s, List<String> notSized) {
@@ -592,6 +700,79 @@ final class NetworkOutput {
         }
         if (design.sizing() != null) {
             sizingText(out, design.sizing(), design.notSized(), u);
+        }
+        if (design.uncertainty() != null) {
+            uncertaintyText(out, design.uncertainty(), u);
+        }
+    }
+
+    /** Junctions listed in the text uncertainty table; the lowest low pressures first when there are more. */
+    static final int UNCERTAINTY_TEXT_ROWS = 30;
+
+    private static void uncertaintyText(PrintWriter out, NetworkUncertaintyResult r, UnitSystem u) {
+        String pu = Quantities.unitSymbol(QuantityKind.PRESSURE, u);
+        out.println();
+        out.printf(
+                Locale.ROOT,
+                "Uncertainty (%s, demands × %s to %s, %d solves%s): %s%n",
+                r.method().id(),
+                Quantities.formatNumber(r.demandLow()),
+                Quantities.formatNumber(r.demandHigh()),
+                r.solves(),
+                r.failedSolves() == 0 ? "" : ", " + r.failedSolves() + " NOT CONVERGED and left out",
+                r.reason());
+        List<NetworkUncertaintyResult.NodeRange> junctions = new ArrayList<>();
+        for (NetworkUncertaintyResult.NodeRange n : r.nodes()) {
+            if (!n.fixed()) {
+                junctions.add(n);
+            }
+        }
+        boolean cut = junctions.size() > UNCERTAINTY_TEXT_ROWS;
+        if (cut) {
+            junctions.sort(java.util.Comparator.comparingDouble((NetworkUncertaintyResult.NodeRange n) ->
+                    Double.isNaN(n.pressure().low())
+                            ? Double.NEGATIVE_INFINITY
+                            : n.pressure().low()));
+            junctions = junctions.subList(0, UNCERTAINTY_TEXT_ROWS);
+            out.printf(
+                    Locale.ROOT,
+                    "(the %d junctions with the lowest low pressure; all in the JSON and CSV output)%n",
+                    UNCERTAINTY_TEXT_ROWS);
+        }
+        out.printf(Locale.ROOT, "%-20s %12s %12s %12s  %s%n", "junction", "p [" + pu + "]", "low", "high", "low at");
+        for (NetworkUncertaintyResult.NodeRange n : junctions) {
+            out.printf(
+                    Locale.ROOT,
+                    "%-20s %12s %12s %12s  %s%n",
+                    clip(n.id(), 20),
+                    q(n.pressure().nominal(), QuantityKind.PRESSURE, u),
+                    q(n.pressure().low(), QuantityKind.PRESSURE, u),
+                    q(n.pressure().high(), QuantityKind.PRESSURE, u),
+                    n.lowAt());
+        }
+        if (!r.pumps().isEmpty()) {
+            String qu = Quantities.unitSymbol(QuantityKind.VOLUMETRIC_FLOW, u);
+            String hu = Quantities.unitSymbol(QuantityKind.HEAD, u);
+            out.printf(
+                    Locale.ROOT,
+                    "%-20s %12s %12s %12s %12s %12s%n",
+                    "pump",
+                    "Q [" + qu + "]",
+                    "Q low",
+                    "Q high",
+                    "H low [" + hu + "]",
+                    "H high");
+            for (NetworkUncertaintyResult.PumpRange p : r.pumps()) {
+                out.printf(
+                        Locale.ROOT,
+                        "%-20s %12s %12s %12s %12s %12s%n",
+                        clip(p.id(), 20),
+                        q(p.flow().nominal(), QuantityKind.VOLUMETRIC_FLOW, u),
+                        q(p.flow().low(), QuantityKind.VOLUMETRIC_FLOW, u),
+                        q(p.flow().high(), QuantityKind.VOLUMETRIC_FLOW, u),
+                        q(p.head().low(), QuantityKind.HEAD, u),
+                        q(p.head().high(), QuantityKind.HEAD, u));
+            }
         }
     }
 
