@@ -193,8 +193,8 @@ public final class NetworkCommand implements Callable<Integer> {
     @Option(
             names = "--max-gradient",
             paramLabel = "G",
-            description = "Friction-loss limit for --size: m/100m, ft/100ft, m/km, Pa/m, kPa/100m, mbar/m or"
-                    + " psi/100ft (default \"" + NetworkDesign.DEFAULT_MAX_GRADIENT + "\").")
+            description = "Friction-loss limit for --size, a head or pressure per length: \"4 m/100m\", \"4 ft/100ft\","
+                    + " \"400 Pa/m\", \"1.2 psi/100ft\" (default \"" + NetworkDesign.DEFAULT_MAX_GRADIENT + "\").")
     String maxGradient;
 
     @Option(

@@ -245,39 +245,24 @@ record NetworkDesign(
     }
 
     /**
-     * A friction-gradient limit with its unit, in metres of head per 100 m of pipe: {@code m/100m},
-     * {@code ft/100ft} (the same ratio), {@code m/km}, {@code Pa/m}, {@code kPa/100m}, {@code mbar/m},
-     * {@code psi/100ft}. A bare number is refused.
+     * A friction-gradient limit with its unit, in metres of head per 100 m of pipe, read by the shared
+     * gradient parser ({@code 4 m/100m}, {@code 4 m per 100 m}, {@code 4 ft/100ft}, {@code 400 Pa/m},
+     * {@code 1.2 psi/100ft}); a pressure gradient is converted with the fluid's ρ g.
      */
     static double gradient(String text, double rhoG) {
-        String t = text == null ? "" : text.strip();
-        java.util.regex.Matcher m = java.util.regex.Pattern.compile(
-                        "^([+-]?[0-9]*\\.?[0-9]+(?:[eE][+-]?[0-9]+)?)\\s*(.*)$")
-                .matcher(t);
-        if (!m.matches()) {
+        if (text != null && text.strip().matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
             throw new InputException(
                     "--max-gradient",
-                    "expected a number and a unit, e.g. \"4 m/100m\" or \"400 Pa/m\", got \"" + text + "\"");
+                    "a unit is needed, e.g. \"4 m/100m\" or \"400 Pa/m\"; got the bare number \"" + text + "\"");
         }
-        double x = Double.parseDouble(m.group(1));
-        String unit = m.group(2).replace(" ", "");
-        double perHundred;
-        switch (unit) {
-            case "m/100m", "ft/100ft" -> perHundred = x;
-            case "m/km" -> perHundred = x / 10;
-            case "Pa/m" -> perHundred = x * 100 / rhoG;
-            case "kPa/100m" -> perHundred = x * 1000 / rhoG;
-            case "mbar/m" -> perHundred = x * 100 * 100 / rhoG;
-            case "psi/100ft" -> perHundred = x * 6894.757293168361 / 0.3048 / rhoG;
-            default ->
-                throw new InputException(
-                        "--max-gradient",
-                        (unit.isEmpty() ? "a unit is needed" : "unknown unit \"" + m.group(2) + "\"")
-                                + "; use m/100m, ft/100ft, m/km, Pa/m, kPa/100m, mbar/m or psi/100ft, e.g. \"4 m/100m\"");
-        }
-        if (!(perHundred > 0) || !Double.isFinite(perHundred)) {
+        double g = Quantities.parseGradient(text, "--max-gradient")
+                .headPer100m(
+                        rhoG / org.headway.system.Gravity.STANDARD,
+                        org.headway.system.Gravity.STANDARD,
+                        "--max-gradient");
+        if (!(g > 0) || !Double.isFinite(g)) {
             throw new InputException("--max-gradient", "must be above zero, got \"" + text + "\"");
         }
-        return perHundred;
+        return g;
     }
 }
