@@ -45,9 +45,6 @@ public record DataTable(Path file, List<Column> columns) {
      * would also take hexadecimal ({@code 0x1p3}) and type suffixes ({@code 2f}), so a typo such as
      * {@code 1028f} would pass as 1028.
      */
-    private static final java.util.regex.Pattern DECIMAL =
-            java.util.regex.Pattern.compile("[+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?");
-
     public DataTable {
         columns = List.copyOf(columns);
     }
@@ -142,7 +139,7 @@ public record DataTable(Path file, List<Column> columns) {
                     String cell = record.get(c);
                     double v;
                     try {
-                        if (!DECIMAL.matcher(cell).matches()) {
+                        if (!org.headway.units.Decimals.isPlainDecimal(cell)) {
                             throw new NumberFormatException(cell);
                         }
                         v = Double.parseDouble(cell);

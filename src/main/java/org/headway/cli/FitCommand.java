@@ -265,8 +265,6 @@ public final class FitCommand implements Callable<Integer> {
          * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
          * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
          */
-        private static final java.util.regex.Pattern DECIMAL =
-                java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
 
         /** Widest table read: each column reserves its own array up front. */
         static final int MAX_COLUMNS = 1_000;
@@ -332,10 +330,7 @@ public final class FitCommand implements Callable<Integer> {
                     for (int c = 0; c < record.size(); c++) {
                         String cell = record.get(c);
                         try {
-                            if (!DECIMAL.matcher(cell).matches()) {
-                                throw new NumberFormatException(cell);
-                            }
-                            values.get(c)[rows] = Double.parseDouble(cell);
+                            values.get(c)[rows] = org.headway.units.Decimals.parseDecimal(cell);
                         } catch (NumberFormatException e) {
                             throw new InputException(
                                     file + " line " + line + ", column " + names.get(c),

@@ -46,6 +46,10 @@ import picocli.CommandLine.Option;
         })
 public final class FrictionCommand implements Callable<Integer> {
 
+    /** Non-finite values the file may hold: a row with one is reported, not refused as unreadable. */
+    private static final java.util.Set<String> NON_FINITE =
+            java.util.Set.of("NaN", "+NaN", "-NaN", "Infinity", "+Infinity", "-Infinity");
+
     /** Input columns a batch file must have. */
     static final String REYNOLDS_COLUMN = "re";
 
@@ -67,9 +71,6 @@ public final class FrictionCommand implements Callable<Integer> {
      * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
      * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
      */
-    private static final java.util.regex.Pattern DECIMAL =
-            java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
-
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -389,7 +390,7 @@ public final class FrictionCommand implements Callable<Integer> {
     }
 
     private static double number(String text, String where) {
-        if (!DECIMAL.matcher(text.strip()).matches()) {
+        if (!org.headway.units.Decimals.isPlainDecimal(text) && !NON_FINITE.contains(text.strip())) {
             throw new InputException(where, "not a number: '" + text + "'");
         }
         try {

@@ -58,8 +58,8 @@ record NetworkDesign(
                         "expected LOW:HIGH multipliers on the demands, e.g. \"0.9:1.1\", got \"" + demandRange + "\"");
             }
             try {
-                low = org.headway.units.Decimals.parse(parts[0].strip());
-                high = org.headway.units.Decimals.parse(parts[1].strip());
+                low = org.headway.units.Decimals.parseDecimal(parts[0].strip());
+                high = org.headway.units.Decimals.parseDecimal(parts[1].strip());
             } catch (RuntimeException e) {
                 throw new InputException(
                         "--demand-range",

@@ -160,7 +160,7 @@ public final class RigAnalysis {
             sink.accept(result);
         }
         if (acc.count == 0) {
-            throw new InputException(description.name(), "there are no data points");
+            throw new InputException("data", "there are no data points");
         }
         return acc.finish();
     }

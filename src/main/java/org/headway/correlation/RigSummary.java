@@ -59,6 +59,9 @@ public record RigSummary(
         Map<UncertaintySource, Double> frictionVarianceShares) {
 
     public RigSummary {
-        frictionVarianceShares = Map.copyOf(frictionVarianceShares);
+        // In the sources' declared order, so that every output lists them the same way each run.
+        java.util.EnumMap<UncertaintySource, Double> ordered = new java.util.EnumMap<>(UncertaintySource.class);
+        ordered.putAll(frictionVarianceShares);
+        frictionVarianceShares = java.util.Collections.unmodifiableMap(ordered);
     }
 }

@@ -39,9 +39,6 @@ public final class UserFluidTable {
      * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
      * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
      */
-    private static final java.util.regex.Pattern DECIMAL =
-            java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
-
     private static final String[] COLUMNS = {"temperature", "density", "viscosity"};
 
     private UserFluidTable() {}
@@ -194,10 +191,7 @@ public final class UserFluidTable {
         String where = fileName + " line " + line + ", column " + COLUMNS[column];
         double value;
         try {
-            if (!DECIMAL.matcher(cell).matches()) {
-                throw new NumberFormatException(cell);
-            }
-            value = Double.parseDouble(cell);
+            value = org.headway.units.Decimals.parseDecimal(cell);
         } catch (NumberFormatException e) {
             throw new InputException(where, "not a number: \"" + cell + "\"");
         }

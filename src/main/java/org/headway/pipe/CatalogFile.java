@@ -22,6 +22,10 @@ import org.headway.caution.InputException;
  */
 final class CatalogFile {
 
+    /** Non-finite values the file may hold: a row with one is reported, not refused as unreadable. */
+    private static final java.util.Set<String> NON_FINITE =
+            java.util.Set.of("NaN", "+NaN", "-NaN", "Infinity", "+Infinity", "-Infinity");
+
     /** A data row with its 1-based physical line number. */
     record Row(int line, Map<String, String> cells) {}
 
@@ -35,10 +39,8 @@ final class CatalogFile {
      * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
      * Java's own parser would also take hexadecimal ("0x1p3") and type suffixes ("2f", "1d").
      */
-    private static final java.util.regex.Pattern DECIMAL =
-            java.util.regex.Pattern.compile("[+-]?(?:(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?|NaN|Infinity)");
-
     private final String label;
+
     private final String source;
     private final List<Row> rows;
 
@@ -222,7 +224,7 @@ final class CatalogFile {
         String value = text(row, column);
         double parsed;
         try {
-            if (!DECIMAL.matcher(value).matches()) {
+            if (!org.headway.units.Decimals.isPlainDecimal(value) && !NON_FINITE.contains(value.strip())) {
                 throw new NumberFormatException(value);
             }
             parsed = Double.parseDouble(value);

@@ -275,7 +275,7 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
     private double number(CSVRecord record, int column, long line) {
         String cell = record.get(column);
         try {
-            double v = org.headway.units.Decimals.parse(cell);
+            double v = org.headway.units.Decimals.parseDecimal(cell);
             if (Double.isFinite(v)) {
                 return v;
             }

@@ -461,6 +461,9 @@ public final class RigFile {
                 if (e.where().startsWith("point at line")) {
                     throw e.at(data.name() + " ");
                 }
+                if (e.where().equals("data")) {
+                    throw new InputException(data.name(), "has no data rows after its header");
+                }
                 throw e;
             }
             List<Caution> cautions = new ArrayList<>(report.cautions());

@@ -86,7 +86,7 @@ public final class ValveSettingsFile {
             throw r.error(key, "is blank; every row needs a setting and a kv");
         }
         try {
-            double d = Double.parseDouble(v);
+            double d = org.headway.units.Decimals.parseDecimal(v);
             if (!Double.isFinite(d)) {
                 throw new NumberFormatException();
             }

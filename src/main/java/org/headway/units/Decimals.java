@@ -36,6 +36,78 @@ public final class Decimals {
         return NumberInput.parseDouble(text, true);
     }
 
+    /**
+     * The decimal rule of every file Headway reads: an optional sign, digits with an optional decimal
+     * point (or a point and digits), and an optional exponent; surrounding spaces allowed. Refused:
+     * Java's {@code f}/{@code d} suffixes, hexadecimal floats, {@code NaN}, {@code Infinity}, a
+     * decimal comma, thousands separators.
+     *
+     * @param text the text, e.g. {@code -1.5e-3}
+     * @return whether it follows the rule
+     */
+    public static boolean isPlainDecimal(String text) {
+        if (text == null) {
+            return false;
+        }
+        int n = text.length();
+        int i = 0;
+        while (i < n && text.charAt(i) == ' ') {
+            i++;
+        }
+        while (n > i && text.charAt(n - 1) == ' ') {
+            n--;
+        }
+        if (i < n && (text.charAt(i) == '+' || text.charAt(i) == '-')) {
+            i++;
+        }
+        int digits = 0;
+        while (i < n && isDigit(text.charAt(i))) {
+            i++;
+            digits++;
+        }
+        if (i < n && text.charAt(i) == '.') {
+            i++;
+            while (i < n && isDigit(text.charAt(i))) {
+                i++;
+                digits++;
+            }
+        }
+        if (digits == 0) {
+            return false;
+        }
+        if (i < n && (text.charAt(i) == 'e' || text.charAt(i) == 'E')) {
+            i++;
+            if (i < n && (text.charAt(i) == '+' || text.charAt(i) == '-')) {
+                i++;
+            }
+            int exponent = 0;
+            while (i < n && isDigit(text.charAt(i))) {
+                i++;
+                exponent++;
+            }
+            if (exponent == 0) {
+                return false;
+            }
+        }
+        return i == n;
+    }
+
+    private static boolean isDigit(char c) {
+        return c >= '0' && c <= '9';
+    }
+
+    /**
+     * A number by the decimal rule of {@link #isPlainDecimal}.
+     *
+     * @throws NumberFormatException for any other text
+     */
+    public static double parseDecimal(String text) {
+        if (!isPlainDecimal(text)) {
+            throw new NumberFormatException("not a plain decimal number: \"" + text + "\"");
+        }
+        return parse(text.strip());
+    }
+
     /** The shortest decimal text that reads back as {@code value}, in {@link Double#toString}'s layout. */
     public static String format(double value) {
         return NumberOutput.toString(value, true);

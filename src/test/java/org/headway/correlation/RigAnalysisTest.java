@@ -121,7 +121,7 @@ class RigAnalysisTest {
         RigDescription rig = RigTestData.rig(0.0254, 2.0, 0, RigUncertainty.NONE);
         InputException e =
                 assertThrows(InputException.class, () -> RigAnalysis.of(rig).analyse(List.of()));
-        assertEquals("test rig: there are no data points", e.getMessage());
+        assertEquals("data: there are no data points", e.getMessage());
     }
 
     @Test

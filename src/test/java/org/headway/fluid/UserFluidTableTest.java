@@ -59,7 +59,7 @@ class UserFluidTableTest {
                 "20, -5, 2.0 | bad.csv line 3, column density: must be greater than zero, got -5",
                 "0, 1090, 2.0 | bad.csv line 3, column temperature: temperatures must increase row by row, got 0",
                 "20, 1090 | bad.csv line 3: expected 3 values (temperature, density, viscosity), got 2: \"20, 1090\"",
-                "20, NaN, 2.0 | bad.csv line 3, column density: must be a finite number, got \"NaN\""
+                "20, NaN, 2.0 | bad.csv line 3, column density: not a number: \"NaN\""
             })
     void namesFileLineColumnAndValue(String badRow, String message) throws IOException {
         Path csv = write("bad.csv", "temperature [degC], density [kg/m3], viscosity [mPa*s]", "0, 1100, 4.0", badRow);
