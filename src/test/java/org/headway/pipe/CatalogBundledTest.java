@@ -20,6 +20,7 @@ import org.headway.caution.InputException;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvFileSource;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 
 class CatalogBundledTest {
@@ -68,6 +69,29 @@ class CatalogBundledTest {
             assertTrue(m.roughnessLow() <= m.roughness() && m.roughness() <= m.roughnessHigh(), m.id());
             assertFalse(m.source().isBlank(), m.id());
         }
+    }
+
+    /**
+     * Darby's 90° elbow rows: each row's description names the bend radius of the coefficients it
+     * carries. SOURCE: Darby, R., Chemical Engineering Fluid Mechanics, 2nd ed. (2001), 3-K table
+     * (Table 7-3, table number from memory), 90° elbows, from memory: r/D = 1 threaded 800, 0.14,
+     * 4.0; r/D = 1 flanged/welded 800, 0.091, 4.0; long radius r/D = 1.5 800, 0.071, 4.2;
+     * flanged/welded bend r/D = 2 800, 0.056, 3.9.
+     */
+    @ParameterizedTest
+    @CsvSource({
+        "darby-elbow-90-standard-threaded, r/D = 1, 800, 0.14, 4.0",
+        "darby-elbow-90-standard-flanged, r/D = 1, 800, 0.091, 4.0",
+        "darby-elbow-90-long-radius, r/D = 1.5, 800, 0.071, 4.2",
+        "darby-elbow-90-bend-r2, r/D = 2, 800, 0.056, 3.9"
+    })
+    void darbyNinetyDegreeElbowsCarryTheCoefficientsOfTheirRadius(
+            String id, String radius, double k1, double ki, double kd) {
+        ThreeK elbow = (ThreeK) catalog.fitting(id);
+        assertTrue(elbow.description().contains("(" + radius + ")"), elbow.description());
+        assertEquals(k1, elbow.laminarCoefficient(), 0.0, id);
+        assertEquals(ki, elbow.turbulentCoefficient(), 0.0, id);
+        assertEquals(kd, elbow.sizeCoefficient(), 0.0, id);
     }
 
     @Test
