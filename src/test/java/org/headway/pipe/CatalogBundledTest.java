@@ -94,6 +94,45 @@ class CatalogBundledTest {
         assertEquals(kd, elbow.sizeCoefficient(), 0.0, id);
     }
 
+    /**
+     * The nominal diameter Darby's 3-K size term takes. SOURCE: NPS is the size in inches and DN the
+     * size in millimetres (ISO 6708 for DN; ASME B36.10M for NPS; from memory); NPS 1/2 has OD 21.3
+     * mm, copper tube 1/2 has OD 5/8 in (ASTM B88, from memory).
+     */
+    @ParameterizedTest(name = "{0} with OD {1} mm is {2} mm nominal")
+    @CsvSource({
+        "1/2,     21.3,   12.7",
+        "1-1/2,   48.3,   38.1",
+        "1 1/2,   48.3,   38.1",
+        "2,       60.3,   50.8",
+        "24,      610,    609.6",
+        "DN 50,   60.3,   50",
+        "dn15,    21.3,   15",
+        "50,      60.3,   50",
+        "1/2,     15.875, 12.7"
+    })
+    void nominalSizesReadAsInchesOrDn(String nominal, double outsideMillimetres, double expectedMillimetres) {
+        PipeSize size = new PipeSize("t", nominal, "40", outsideMillimetres * MM, 0.002, 0.01, "test");
+        assertEquals(expectedMillimetres * MM, size.nominalDiameter().getAsDouble(), 1e-12);
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"large", "", "80", "1-1"})
+    void nominalSizeWithNoPlausibleReadingIsUnknown(String nominal) {
+        // "80" beside an OD of 21.3 mm is neither 80 in nor DN 80
+        PipeSize size = new PipeSize("t", nominal, "40", 21.3 * MM, 0.002, 0.0173, "test");
+        assertTrue(size.nominalDiameter().isEmpty(), nominal);
+    }
+
+    @Test
+    void everyBundledSizeHasANominalDiameter() {
+        for (String table : catalog.tables()) {
+            for (PipeSize size : catalog.sizes(table, null)) {
+                assertTrue(size.nominalDiameter().isPresent(), table + " " + size.nominal());
+            }
+        }
+    }
+
     @Test
     void unknownMaterialNamesCloseIds() {
         InputException e = assertThrows(InputException.class, () -> catalog.material("steel-comercial-new"));
