@@ -33,7 +33,10 @@ final class RunText {
             UncertaintyBand band,
             List<SizeSelector.SizeCheck> sizes) {
         out.println(run.title().isEmpty() ? "Pipe run" : run.title());
-        out.println("Fluid: " + run.fluid().fluid() + " at " + q(run.fluid().temperature(), QuantityKind.TEMPERATURE, u)
+        out.println("Fluid: " + run.fluid().fluid()
+                + (run.fluid().temperatureGiven()
+                        ? " at " + q(run.fluid().temperature(), QuantityKind.TEMPERATURE, u)
+                        : " (temperature not given)")
                 + ", ρ = " + q(run.fluid().density(), QuantityKind.DENSITY, u) + ", μ = "
                 + q(run.fluid().dynamicViscosity(), QuantityKind.DYNAMIC_VISCOSITY, u));
         out.println("Friction method: " + run.friction().displayName());

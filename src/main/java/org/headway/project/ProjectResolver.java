@@ -517,7 +517,8 @@ public final class ProjectResolver {
                     spec.density().isEmpty() ? state.densitySource() : given,
                     spec.viscosity().isEmpty() ? state.viscositySource() : given,
                     spec.vapourPressure().isEmpty() ? (state == null ? "" : state.vapourPressureSource()) : given,
-                    cautions);
+                    cautions,
+                    !Double.isNaN(temperature));
         }
         return state;
     }

@@ -89,7 +89,10 @@ public final class PdfSheetWriter {
         var f = run.fluid();
         List<String[]> fluid = new ArrayList<>();
         fluid.add(row("Fluid", f.fluid(), ""));
-        fluid.add(row("Temperature", q(f.temperature(), QuantityKind.TEMPERATURE, u), "as given"));
+        fluid.add(
+                f.temperatureGiven()
+                        ? row("Temperature", q(f.temperature(), QuantityKind.TEMPERATURE, u), "as given")
+                        : row("Temperature", "not given", "density and viscosity given directly; none needed"));
         fluid.add(row(
                 "Pressure (absolute)",
                 q(f.pressure(), QuantityKind.PRESSURE, u),
