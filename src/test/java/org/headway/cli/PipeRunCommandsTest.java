@@ -118,6 +118,44 @@ class PipeRunCommandsTest {
         assertTrue(text.contains("licensed or otherwise qualified engineer"));
     }
 
+    /**
+     * CSV keeps the segment table as it was and adds the curve after a blank line, as the network
+     * command does with its two tables. Flows are evenly spaced from 0 to 12 L/s (4 points: 0, 4, 8,
+     * 12 L/s, computed here); each head agrees with a head-loss solve at that flow.
+     */
+    @Test
+    void solveCsvIncludesTheCurve() throws Exception {
+        assertEquals(
+                0, run("solve", project.toString(), "--format", "csv", "--curve", "0 L/s:12 L/s:4"), err::toString);
+        String[] tables = out.toString().split("\n\n");
+        assertEquals(2, tables.length, out.toString());
+        assertTrue(tables[0].startsWith(String.join(",", org.headway.report.CsvSheetWriter.HEADER)), tables[0]);
+        java.util.List<String> curve = tables[1].strip().lines().toList();
+        assertEquals("flow [m3/s],total_head [m],head_loss [m]", curve.get(0));
+        assertEquals(5, curve.size(), tables[1]);
+        var run = ProjectResolver.resolve(ProjectFile.load(project), Catalog.bundled(), dir)
+                .run();
+        for (int i = 1; i <= 4; i++) {
+            String[] cells = curve.get(i).split(",");
+            double q = 0.004 * (i - 1);
+            assertEquals(q, Double.parseDouble(cells[0]), 1e-15);
+            if (q > 0) {
+                assertEquals(
+                        HeadLossCalculator.solve(run, q).totals().totalHead(),
+                        Double.parseDouble(cells[1]),
+                        1e-9 * Math.abs(Double.parseDouble(cells[1])));
+            }
+        }
+    }
+
+    @Test
+    void curveWithBareNumbersIsRefused() {
+        assertEquals(2, run("solve", project.toString(), "--curve", "0:6:4"));
+        String e = err.toString().strip();
+        assertTrue(e.startsWith("headway: --curve QMAX:"), e);
+        assertTrue(e.contains("\"6\" has no unit"), e);
+    }
+
     @Test
     void badProjectExitsTwoWithOneLine() throws Exception {
         Files.writeString(project, Files.readString(project).replace("\"6 m\"", "\"-6 m\""));
