@@ -188,9 +188,12 @@ public final class ResultsModel {
         list.add(new TotalRow("Total head loss", Quantities.format(t.headLoss(), QuantityKind.HEAD, u)));
         list.add(new TotalRow("Static head", Quantities.format(t.staticHead(), QuantityKind.HEAD, u)));
         double scale = Math.abs(t.staticHead()) + Math.abs(t.frictionHeadLoss()) + Math.abs(t.minorHeadLoss());
-        list.add(new TotalRow(
-                "Head required",
-                Quantities.format(Quantities.withoutNoise(t.totalHead(), scale), QuantityKind.HEAD, u)));
+        double totalHead = Quantities.withoutNoise(t.totalHead(), scale);
+        // a negative total head is not a requirement: the ends give that much beyond the losses
+        list.add(
+                totalHead < 0
+                        ? new TotalRow("Surplus head", Quantities.format(-totalHead, QuantityKind.HEAD, u))
+                        : new TotalRow("Head required", Quantities.format(totalHead, QuantityKind.HEAD, u)));
         list.add(new TotalRow("Pressure drop", Quantities.format(t.pressureDrop(), QuantityKind.PRESSURE, u)));
         list.add(new TotalRow(
                 "Site air pressure",

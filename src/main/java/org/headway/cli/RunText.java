@@ -108,8 +108,12 @@ final class RunText {
         double scale = Math.abs(r.totals().staticHead())
                 + Math.abs(r.totals().frictionHeadLoss())
                 + Math.abs(r.totals().minorHeadLoss());
-        out.println(
-                "Total head:       " + q(Quantities.withoutNoise(r.totals().totalHead(), scale), QuantityKind.HEAD, u));
+        double totalHead = Quantities.withoutNoise(r.totals().totalHead(), scale);
+        out.println("Total head:       " + q(totalHead, QuantityKind.HEAD, u)
+                + (totalHead < 0
+                        ? " (surplus head " + q(-totalHead, QuantityKind.HEAD, u)
+                                + ": the ends give more head than the run loses)"
+                        : ""));
         out.println("Pressure drop:    " + q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u)
                 + " (friction and fittings)");
         r.npshAvailable().ifPresent(x -> out.println("NPSH available:   " + q(x, QuantityKind.HEAD, u)));

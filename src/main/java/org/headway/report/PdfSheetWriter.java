@@ -298,12 +298,14 @@ public final class PdfSheetWriter {
         double scale = Math.abs(r.totals().staticHead())
                 + Math.abs(r.totals().frictionHeadLoss())
                 + Math.abs(r.totals().minorHeadLoss());
+        double totalHead = Quantities.withoutNoise(r.totals().totalHead(), scale);
         totals.add(row(
                 "Total head H",
-                q(Quantities.withoutNoise(r.totals().totalHead(), scale), QuantityKind.HEAD, u),
-                run.pump().isPresent()
-                        ? "what the pump must supply"
-                        : "what a pump would have to supply; negative: head the ends give beyond the losses"));
+                q(totalHead, QuantityKind.HEAD, u),
+                totalHead < 0
+                        ? "negative: surplus head of " + q(-totalHead, QuantityKind.HEAD, u)
+                                + " that the ends give beyond the losses; no pump head is needed at this flow"
+                        : run.pump().isPresent() ? "what the pump must supply" : "what a pump would have to supply"));
         totals.add(row("Pressure drop", q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u), "ρ g (Σh_f + Σh_m)"));
         r.npshAvailable()
                 .ifPresent(v -> totals.add(row("NPSH available", q(v, QuantityKind.HEAD, u), "at the pump inlet")));

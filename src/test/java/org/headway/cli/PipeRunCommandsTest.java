@@ -156,6 +156,23 @@ class PipeRunCommandsTest {
         assertTrue(e.contains("\"6\" has no unit"), e);
     }
 
+    /** Energy balance: a total head below zero is head the ends give beyond the losses. */
+    @Test
+    void negativeTotalHeadIsCalledSurplusHead() throws Exception {
+        Path gravity = Path.of("fluids-data", "examples", "gravity-spring-line.json");
+        assertEquals(0, run("solve", gravity.toString()), err::toString);
+        double h = ProjectResolver.resolve(ProjectFile.load(gravity), Catalog.bundled(), gravity.getParent())
+                .run()
+                .designFlow();
+        var run = ProjectResolver.resolve(ProjectFile.load(gravity), Catalog.bundled(), gravity.getParent())
+                .run();
+        double total = HeadLossCalculator.solve(run, h).totals().totalHead();
+        assertTrue(total < 0, "the example must be a surplus case");
+        String surplus = org.headway.units.Quantities.format(
+                -total, org.headway.units.QuantityKind.HEAD, org.headway.units.UnitSystem.SI);
+        assertTrue(out.toString().contains("(surplus head " + surplus), out.toString());
+    }
+
     @Test
     void badProjectExitsTwoWithOneLine() throws Exception {
         Files.writeString(project, Files.readString(project).replace("\"6 m\"", "\"-6 m\""));

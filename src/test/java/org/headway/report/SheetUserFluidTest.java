@@ -56,4 +56,35 @@ class SheetUserFluidTest {
         String text = pdfText(", \"temperature\": \"15 degC\"", dir);
         assertTrue(text.contains("Temperature 15.00 °C as given"), text);
     }
+
+    /**
+     * A gravity line with a pump whose ends give more than the losses: the sheet must not call the
+     * negative total head "what the pump must supply" (energy balance: H < 0 is a surplus).
+     */
+    @Test
+    void negativeTotalHeadIsASurplusEvenWithAPump(@TempDir Path dir) throws Exception {
+        String json = """
+                {
+                  "format": "headway-project", "version": 2, "title": "invented falling line with a booster",
+                  "fluid": { "name": "water", "temperature": "10 degC" },
+                  "flow": "2 L/s",
+                  "elements": [
+                    { "id": "pump", "kind": "pump", "points": [ { "flow": "0 L/s", "head": "20 m" },
+                      { "flow": "3 L/s", "head": "15 m" }, { "flow": "6 L/s", "head": "5 m" } ] },
+                    { "id": "main", "length": "200 m", "innerDiameter": "52.5 mm", "roughness": "0.045 mm",
+                      "elevationChange": "-40 m" } ]
+                }
+                """;
+        HeadLossSheet s = HeadLossSheet.of(
+                ProjectResolver.resolve(ProjectFile.parse(json), Catalog.bundled(), Path.of(".")), "test");
+        assertTrue(s.result().totals().totalHead() < 0, "the project must be a surplus case");
+        Path pdf = dir.resolve("sheet.pdf");
+        PdfSheetWriter.write(s, pdf, true, UnitSystem.SI);
+        String text;
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+        }
+        assertFalse(text.contains("what the pump must supply"), text);
+        assertTrue(text.contains("surplus head"), text);
+    }
 }
