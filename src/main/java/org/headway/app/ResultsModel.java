@@ -225,10 +225,18 @@ public final class ResultsModel {
         List<SegmentResult> segments = sheet.result().segments();
         for (Caution c : sheet.cautions()) {
             int index = -1;
-            for (int i = 0; i < segments.size(); i++) {
+            for (int i = 0; i < segments.size() && index < 0; i++) {
                 if (segments.get(i).cautions().contains(c)) {
                     index = i;
-                    break;
+                }
+            }
+            // a caution several segments share is listed once ("a, b: …"): it points at the first of them
+            int split = c.message().indexOf(": ");
+            for (int i = 0; i < segments.size() && index < 0 && split > 0; i++) {
+                String own = segments.get(i).name() + ": " + c.message().substring(split + 2);
+                if (segments.get(i).cautions().stream()
+                        .anyMatch(x -> x.code().equals(c.code()) && x.message().equals(own))) {
+                    index = i;
                 }
             }
             items.add(new CautionItem(index, c.severity(), c.message(), c.basis()));
