@@ -154,7 +154,7 @@ public final class ResultsModel {
         rows.setAll(newRows);
         elementRows.setAll(elementRows(sheet, u));
         totals.setAll(totalRows(sheet, u));
-        cautions.setAll(cautionItems(sheet));
+        cautions.setAll(cautionItems(sheet, u));
         gradeChart.set(o.grades());
         systemChart.set(o.system());
         frictionChart.set(o.friction());
@@ -173,7 +173,7 @@ public final class ResultsModel {
                     Quantities.format(Quantities.withoutNoise(e.inletPressure(), scale), QuantityKind.PRESSURE, u),
                     Quantities.format(Quantities.withoutNoise(e.outletPressure(), scale), QuantityKind.PRESSURE, u),
                     Quantities.format(e.lowestPressure() + air, QuantityKind.PRESSURE, u),
-                    e.result().law()));
+                    Quantities.inSystem(e.result().law(), u)));
         }
         return list;
     }
@@ -215,12 +215,17 @@ public final class ResultsModel {
                     op.found()
                             ? Quantities.format(op.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
                                     + Quantities.format(op.head(), QuantityKind.HEAD, u)
-                            : op.message()));
+                            : Quantities.inSystem(op.message(), u)));
         }
         return list;
     }
 
     static List<CautionItem> cautionItems(HeadLossSheet sheet) {
+        return cautionItems(sheet, UnitSystem.SI);
+    }
+
+    /** The sheet's cautions, their SI text shown in the chosen system. */
+    static List<CautionItem> cautionItems(HeadLossSheet sheet, UnitSystem u) {
         List<CautionItem> items = new ArrayList<>();
         List<SegmentResult> segments = sheet.result().segments();
         for (Caution c : sheet.cautions()) {
@@ -239,7 +244,7 @@ public final class ResultsModel {
                     index = i;
                 }
             }
-            items.add(new CautionItem(index, c.severity(), c.message(), c.basis()));
+            items.add(new CautionItem(index, c.severity(), Quantities.inSystem(c.message(), u), c.basis()));
         }
         // The standing caution goes last and stays reachable even when nothing else is raised.
         items.sort((a, b) -> Boolean.compare(isGeneral(a), isGeneral(b)));

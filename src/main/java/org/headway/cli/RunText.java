@@ -42,7 +42,7 @@ final class RunText {
         out.println("Friction method: " + run.friction().displayName());
         out.println("Flow: " + q(r.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + "   (mode: " + mode + ")");
         if (!modeNote.isEmpty()) {
-            out.println("Result: " + modeNote);
+            out.println("Result: " + Quantities.inSystem(modeNote, u));
         }
         out.println();
         String v = Quantities.unitSymbol(QuantityKind.VELOCITY, u);
@@ -91,7 +91,7 @@ final class RunText {
                     n(Quantities.fromSi(e.result().headLoss(), QuantityKind.HEAD, u)),
                     n(Quantities.fromSi(e.inletPressure(), QuantityKind.PRESSURE, u)),
                     n(Quantities.fromSi(e.outletPressure(), QuantityKind.PRESSURE, u)),
-                    e.result().law());
+                    Quantities.inSystem(e.result().law(), u));
         }
         out.println(
                 "(pressures are gauge; barometric pressure " + q(run.atmosphericPressure(), QuantityKind.PRESSURE, u)
@@ -132,9 +132,9 @@ final class RunText {
                     + (operating.found()
                             ? "operating point " + q(operating.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
                                     + q(operating.head(), QuantityKind.HEAD, u)
-                            : operating.message()));
+                            : Quantities.inSystem(operating.message(), u)));
             for (Caution c : operating.cautions()) {
-                out.println("  caution: " + c.message());
+                out.println("  caution: " + Quantities.inSystem(c.message(), u));
             }
         }
         if (!sizes.isEmpty()) {
@@ -178,8 +178,10 @@ final class RunText {
         out.println();
         out.println("Cautions:");
         for (Caution c : r.cautions()) {
-            out.println("  [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + c.message() + " (basis: "
-                    + c.basis() + ")");
+            out.println(
+                    "  [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + Quantities.inSystem(c.message(), u)
+                            + " (basis: "
+                            + c.basis() + ")");
         }
     }
 

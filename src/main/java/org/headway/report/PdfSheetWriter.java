@@ -206,7 +206,9 @@ public final class PdfSheetWriter {
                 continue;
             }
             ElementProfile ep = r.element(e.id()).orElseThrow();
-            components.add(new String[] {e.id(), e.kind(), e.name(), ep.result().law()});
+            components.add(new String[] {
+                e.id(), e.kind(), e.name(), Quantities.inSystem(ep.result().law(), u)
+            });
         }
         if (!components.isEmpty()) {
             pdf.space(4);
@@ -317,7 +319,7 @@ public final class PdfSheetWriter {
                             ? q(op.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
                                     + q(op.head(), QuantityKind.HEAD, u)
                             : "none",
-                    op.message()));
+                    Quantities.inSystem(op.message(), u)));
         }
         if (sheet.band() != null) {
             var b = sheet.band();
@@ -363,7 +365,8 @@ public final class PdfSheetWriter {
         pdf.heading("Cautions", 12);
         for (Caution c : sheet.cautions()) {
             pdf.paragraph(
-                    "• [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + c.message() + " (basis: " + c.basis()
+                    "• [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + Quantities.inSystem(c.message(), u)
+                            + " (basis: " + c.basis()
                             + ")",
                     BODY);
         }

@@ -173,6 +173,21 @@ class PipeRunCommandsTest {
         assertTrue(out.toString().contains("(surplus head " + surplus), out.toString());
     }
 
+    /** In US output no SI unit is left in the result line, element laws or cautions. */
+    @Test
+    void usOutputCarriesNoSiUnits() throws Exception {
+        Path gravity = Path.of("fluids-data", "examples", "gravity-spring-line.json");
+        assertEquals(0, run("solve", gravity.toString(), "--mode", "flow", "--units", "us"), err::toString);
+        assertEquals(0, run("solve", project.toString(), "--units", "us"), err::toString);
+        java.util.regex.Pattern si = java.util.regex.Pattern.compile("\\d (m³/s|L/s|m/s|kPa|mm|m)(?![\\w²³/])");
+        for (String line : out.toString().lines().toList()) {
+            if (line.startsWith("Result:") || line.startsWith("  [") || line.contains("supplies the")) {
+                assertTrue(!si.matcher(line).find(), line);
+            }
+        }
+        assertTrue(out.toString().contains("Result: "), out.toString());
+    }
+
     @Test
     void badProjectExitsTwoWithOneLine() throws Exception {
         Files.writeString(project, Files.readString(project).replace("\"6 m\"", "\"-6 m\""));
