@@ -1053,6 +1053,21 @@ public final class Quantities {
     }
 
     /**
+     * A value converted between units, for machine-readable output: rounded to 15 significant
+     * digits (below a double's 15.95), which drops the binary noise a conversion adds (291.16 K →
+     * 18.00999999999999 °C prints 18.01) and keeps every digit a measurement carries.
+     *
+     * @param value the converted value
+     * @return its shortest decimal text at 15 significant digits
+     */
+    public static String formatConverted(double value) {
+        if (!Double.isFinite(value) || value == 0) {
+            return Double.toString(value);
+        }
+        return Double.toString(new BigDecimal(value).round(new MathContext(15)).doubleValue());
+    }
+
+    /**
      * The unit a kind is shown in.
      *
      * @param kind the quantity kind
