@@ -186,7 +186,10 @@ public final class ResultsModel {
         list.add(new TotalRow("Friction loss", Quantities.format(t.frictionHeadLoss(), QuantityKind.HEAD, u)));
         list.add(new TotalRow("Fittings loss", Quantities.format(t.minorHeadLoss(), QuantityKind.HEAD, u)));
         list.add(new TotalRow("Total head loss", Quantities.format(t.headLoss(), QuantityKind.HEAD, u)));
-        list.add(new TotalRow("Static head", Quantities.format(t.staticHead(), QuantityKind.HEAD, u)));
+        list.add(new TotalRow(
+                "Static head",
+                Quantities.format(
+                        Quantities.withoutNoise(t.staticHead(), sheet.run().staticHeadScale()), QuantityKind.HEAD, u)));
         double scale = Math.abs(t.staticHead()) + Math.abs(t.frictionHeadLoss()) + Math.abs(t.minorHeadLoss());
         double totalHead = Quantities.withoutNoise(t.totalHead(), scale);
         // a negative total head is not a requirement: the ends give that much beyond the losses

@@ -89,8 +89,16 @@ final class RunText {
                     clip(e.id(), 28),
                     e.kind(),
                     n(Quantities.fromSi(e.result().headLoss(), QuantityKind.HEAD, u)),
-                    n(Quantities.fromSi(e.inletPressure(), QuantityKind.PRESSURE, u)),
-                    n(Quantities.fromSi(e.outletPressure(), QuantityKind.PRESSURE, u)),
+                    n(Quantities.fromSi(
+                            Quantities.withoutNoise(
+                                    e.inletPressure(), Math.abs(e.inletPressure()) + Math.abs(e.outletPressure())),
+                            QuantityKind.PRESSURE,
+                            u)),
+                    n(Quantities.fromSi(
+                            Quantities.withoutNoise(
+                                    e.outletPressure(), Math.abs(e.inletPressure()) + Math.abs(e.outletPressure())),
+                            QuantityKind.PRESSURE,
+                            u)),
                     Quantities.inSystem(e.result().law(), u));
         }
         out.println(
@@ -104,7 +112,8 @@ final class RunText {
                         ? " (pipe fittings " + q(r.totals().minorHeadLoss() - components, QuantityKind.HEAD, u)
                                 + ", valves and components " + q(components, QuantityKind.HEAD, u) + ")"
                         : ""));
-        out.println("Static head:      " + q(r.totals().staticHead(), QuantityKind.HEAD, u));
+        out.println("Static head:      "
+                + q(Quantities.withoutNoise(r.totals().staticHead(), run.staticHeadScale()), QuantityKind.HEAD, u));
         double scale = Math.abs(r.totals().staticHead())
                 + Math.abs(r.totals().frictionHeadLoss())
                 + Math.abs(r.totals().minorHeadLoss());

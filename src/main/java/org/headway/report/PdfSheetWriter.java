@@ -267,8 +267,16 @@ public final class PdfSheetWriter {
                 ep.id(),
                 ep.kind(),
                 n(Quantities.fromSi(ep.result().headLoss(), QuantityKind.HEAD, u)),
-                n(Quantities.fromSi(ep.inletPressure(), QuantityKind.PRESSURE, u)),
-                n(Quantities.fromSi(ep.outletPressure(), QuantityKind.PRESSURE, u)),
+                n(Quantities.fromSi(
+                        Quantities.withoutNoise(
+                                ep.inletPressure(), Math.abs(ep.inletPressure()) + Math.abs(ep.outletPressure())),
+                        QuantityKind.PRESSURE,
+                        u)),
+                n(Quantities.fromSi(
+                        Quantities.withoutNoise(
+                                ep.outletPressure(), Math.abs(ep.inletPressure()) + Math.abs(ep.outletPressure())),
+                        QuantityKind.PRESSURE,
+                        u)),
                 ep.highPointPressure().isPresent()
                         ? n(Quantities.fromSi(ep.highPointPressure().getAsDouble(), QuantityKind.PRESSURE, u))
                         : "—",
@@ -296,7 +304,10 @@ public final class PdfSheetWriter {
                 "Fitting and component loss Σh_m",
                 q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u),
                 "pipe fittings plus valves, rated components and diameter changes"));
-        totals.add(row("Static head", q(r.totals().staticHead(), QuantityKind.HEAD, u), "elevation and end heads"));
+        totals.add(row(
+                "Static head",
+                q(Quantities.withoutNoise(r.totals().staticHead(), run.staticHeadScale()), QuantityKind.HEAD, u),
+                "elevation and end heads"));
         double scale = Math.abs(r.totals().staticHead())
                 + Math.abs(r.totals().frictionHeadLoss())
                 + Math.abs(r.totals().minorHeadLoss());

@@ -188,6 +188,25 @@ class PipeRunCommandsTest {
         assertTrue(out.toString().contains("Result: "), out.toString());
     }
 
+    /**
+     * Rises of 0.1 m and 0.2 m against a source 0.3 m up: the static head is exactly 0 (arithmetic),
+     * but 0.1 + 0.2 − 0.3 is 5.55e-17 in binary; the display must show 0, not the noise.
+     */
+    @Test
+    void roundingNoiseIsShownAsZero() throws Exception {
+        Path p = dir.resolve("noise.json");
+        Files.writeString(p, """
+                { "format": "headway-project", "version": 2, "title": "invented noise check",
+                  "fluid": { "name": "water", "temperature": "17.3 degC" }, "flow": "3.7 L/s",
+                  "elements": [
+                    { "id": "a", "length": "37.1 m", "innerDiameter": "52.5 mm", "roughness": "0.045 mm", "elevationChange": "0.1 m" },
+                    { "id": "b", "length": "12.9 m", "innerDiameter": "40.9 mm", "roughness": "0.045 mm", "elevationChange": "0.2 m" } ],
+                  "ends": { "source": { "level": "0.3 m" }, "delivery": { "level": "0 m" } } }
+                """);
+        assertEquals(0, run("solve", p.toString()), err::toString);
+        assertTrue(out.toString().contains("Static head:      0 m\n"), out.toString());
+    }
+
     @Test
     void badProjectExitsTwoWithOneLine() throws Exception {
         Files.writeString(project, Files.readString(project).replace("\"6 m\"", "\"-6 m\""));
