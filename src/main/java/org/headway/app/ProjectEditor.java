@@ -766,8 +766,19 @@ public final class ProjectEditor {
         }
         List<Project.SegmentSpec> segments = new ArrayList<>(p.segments());
         segments.remove(index);
+        // The pump stays on the segment it feeds; when that one goes, on the next one down (or the
+        // new last one). A pump after every pipe stays after every pipe.
+        Optional<Project.PumpSpec> pump = p.pump().map(old -> {
+            int at = old.position();
+            if (index < at) {
+                at--;
+            } else if (index == at) {
+                at = Math.min(at, segments.size() - 1);
+            }
+            return at == old.position() ? old : movedPump(old, at);
+        });
         clearSegmentMessages();
-        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments));
+        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments, pump));
         return true;
     }
 
@@ -788,13 +799,33 @@ public final class ProjectEditor {
         List<Project.SegmentSpec> segments = new ArrayList<>(p.segments());
         Project.SegmentSpec s = segments.remove(index);
         segments.add(target, s);
+        // The pump moves with the segment it feeds (its position counts the pipes upstream of it).
+        int count = segments.size();
+        Optional<Project.PumpSpec> pump = p.pump().map(old -> {
+            int fed = old.position();
+            if (fed >= count) {
+                return old;
+            }
+            int at;
+            if (fed == index) {
+                at = target;
+            } else {
+                at = fed > index ? fed - 1 : fed;
+                at = at >= target ? at + 1 : at;
+            }
+            return at == fed ? old : movedPump(old, at);
+        });
         clearSegmentMessages();
-        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments));
+        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments, pump));
         return target;
     }
 
     private void clearSegmentMessages() {
         messages.keySet().removeIf(k -> k.startsWith("segments["));
+    }
+
+    private static Project.PumpSpec movedPump(Project.PumpSpec old, int position) {
+        return new Project.PumpSpec(old.id(), old.name(), position, old.points(), old.npshRequired(), old.speedRatio());
     }
 
     private static Project with(
@@ -804,6 +835,17 @@ public final class ProjectEditor {
             String flow,
             String friction,
             List<Project.SegmentSpec> segments) {
+        return with(p, title, fluid, flow, friction, segments, p.pump());
+    }
+
+    private static Project with(
+            Project p,
+            String title,
+            Project.FluidSpec fluid,
+            String flow,
+            String friction,
+            List<Project.SegmentSpec> segments,
+            Optional<Project.PumpSpec> pump) {
         return Project.of(
                         title,
                         p.titleBlock(),
@@ -813,7 +855,7 @@ public final class ProjectEditor {
                         friction,
                         segments,
                         p.ends(),
-                        p.pump(),
+                        pump,
                         p.limits(),
                         p.sizing(),
                         p.curve())

@@ -154,7 +154,7 @@ public final class ResultsModel {
         rows.setAll(newRows);
         elementRows.setAll(elementRows(sheet, u));
         totals.setAll(totalRows(sheet, u));
-        cautions.setAll(cautionItems(sheet));
+        cautions.setAll(cautionItems(sheet, u));
         gradeChart.set(o.grades());
         systemChart.set(o.system());
         frictionChart.set(o.friction());
@@ -173,7 +173,7 @@ public final class ResultsModel {
                     Quantities.format(Quantities.withoutNoise(e.inletPressure(), scale), QuantityKind.PRESSURE, u),
                     Quantities.format(Quantities.withoutNoise(e.outletPressure(), scale), QuantityKind.PRESSURE, u),
                     Quantities.format(e.lowestPressure() + air, QuantityKind.PRESSURE, u),
-                    e.result().law()));
+                    Quantities.inSystem(e.result().law(), u)));
         }
         return list;
     }
@@ -186,11 +186,17 @@ public final class ResultsModel {
         list.add(new TotalRow("Friction loss", Quantities.format(t.frictionHeadLoss(), QuantityKind.HEAD, u)));
         list.add(new TotalRow("Fittings loss", Quantities.format(t.minorHeadLoss(), QuantityKind.HEAD, u)));
         list.add(new TotalRow("Total head loss", Quantities.format(t.headLoss(), QuantityKind.HEAD, u)));
-        list.add(new TotalRow("Static head", Quantities.format(t.staticHead(), QuantityKind.HEAD, u)));
-        double scale = Math.abs(t.staticHead()) + Math.abs(t.frictionHeadLoss()) + Math.abs(t.minorHeadLoss());
         list.add(new TotalRow(
-                "Head required",
-                Quantities.format(Quantities.withoutNoise(t.totalHead(), scale), QuantityKind.HEAD, u)));
+                "Static head",
+                Quantities.format(
+                        Quantities.withoutNoise(t.staticHead(), sheet.run().staticHeadScale()), QuantityKind.HEAD, u)));
+        double scale = Math.abs(t.staticHead()) + Math.abs(t.frictionHeadLoss()) + Math.abs(t.minorHeadLoss());
+        double totalHead = Quantities.withoutNoise(t.totalHead(), scale);
+        // a negative total head is not a requirement: the ends give that much beyond the losses
+        list.add(
+                totalHead < 0
+                        ? new TotalRow("Surplus head", Quantities.format(-totalHead, QuantityKind.HEAD, u))
+                        : new TotalRow("Head required", Quantities.format(totalHead, QuantityKind.HEAD, u)));
         list.add(new TotalRow("Pressure drop", Quantities.format(t.pressureDrop(), QuantityKind.PRESSURE, u)));
         list.add(new TotalRow(
                 "Site air pressure",
@@ -212,23 +218,36 @@ public final class ResultsModel {
                     op.found()
                             ? Quantities.format(op.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
                                     + Quantities.format(op.head(), QuantityKind.HEAD, u)
-                            : op.message()));
+                            : Quantities.inSystem(op.message(), u)));
         }
         return list;
     }
 
     static List<CautionItem> cautionItems(HeadLossSheet sheet) {
+        return cautionItems(sheet, UnitSystem.SI);
+    }
+
+    /** The sheet's cautions, their SI text shown in the chosen system. */
+    static List<CautionItem> cautionItems(HeadLossSheet sheet, UnitSystem u) {
         List<CautionItem> items = new ArrayList<>();
         List<SegmentResult> segments = sheet.result().segments();
         for (Caution c : sheet.cautions()) {
             int index = -1;
-            for (int i = 0; i < segments.size(); i++) {
+            for (int i = 0; i < segments.size() && index < 0; i++) {
                 if (segments.get(i).cautions().contains(c)) {
                     index = i;
-                    break;
                 }
             }
-            items.add(new CautionItem(index, c.severity(), c.message(), c.basis()));
+            // a caution several segments share is listed once ("a, b: …"): it points at the first of them
+            int split = c.message().indexOf(": ");
+            for (int i = 0; i < segments.size() && index < 0 && split > 0; i++) {
+                String own = segments.get(i).name() + ": " + c.message().substring(split + 2);
+                if (segments.get(i).cautions().stream()
+                        .anyMatch(x -> x.code().equals(c.code()) && x.message().equals(own))) {
+                    index = i;
+                }
+            }
+            items.add(new CautionItem(index, c.severity(), Quantities.inSystem(c.message(), u), c.basis()));
         }
         // The standing caution goes last and stays reachable even when nothing else is raised.
         items.sort((a, b) -> Boolean.compare(isGeneral(a), isGeneral(b)));

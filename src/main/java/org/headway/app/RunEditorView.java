@@ -506,7 +506,11 @@ final class RunEditorView extends VBox {
             box.setValue(match);
             message.setText(editor.messages().getOrDefault(key, ""));
         });
+        // A long name (the auto friction method's) may be cut by the column: the tooltip shows it whole.
+        Tooltip whole = new Tooltip();
+        box.setTooltip(whole);
         box.valueProperty().addListener((o, a, b) -> {
+            whole.setText(b == null ? "" : b.label());
             if (!refreshing && b != null) {
                 setter.test(b.id());
             }

@@ -1,5 +1,9 @@
 package org.headway.caution;
 
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 
 /**
@@ -46,5 +50,50 @@ public record Caution(String code, Severity severity, String message, String bas
     /** The same caution with its message prefixed by the thing it concerns, e.g. a segment name. */
     public Caution about(String subject) {
         return new Caution(code, severity, subject + ": " + message, basis);
+    }
+
+    /**
+     * The same cautions with those that differ only in their subject (the text before the first
+     * ": ", as {@link #about} writes it) merged into one naming every subject, e.g. five pipes'
+     * identical fitted-correlation warnings become one "p1, p2, p3, p4, p5: …". Code, severity,
+     * basis and the rest of the message must all agree; order is that of each group's first member.
+     *
+     * @param cautions cautions in the order raised
+     * @return grouped cautions, never longer than the input
+     */
+    public static List<Caution> grouped(List<Caution> cautions) {
+        Map<List<Object>, List<String>> subjects = new LinkedHashMap<>();
+        Map<List<Object>, Caution> first = new LinkedHashMap<>();
+        int alone = 0;
+        for (Caution c : cautions) {
+            int split = c.message.indexOf(": ");
+            List<Object> key;
+            String subject = null;
+            if (split > 0) {
+                subject = c.message.substring(0, split);
+                key = List.of(c.code, c.severity, c.basis, c.message.substring(split + 2));
+            } else {
+                key = List.of(c.code, c.severity, c.basis, c.message, alone++);
+            }
+            first.putIfAbsent(key, c);
+            List<String> names = subjects.computeIfAbsent(key, k -> new ArrayList<>());
+            if (subject != null && !names.contains(subject)) {
+                names.add(subject);
+            }
+        }
+        List<Caution> out = new ArrayList<>();
+        for (Map.Entry<List<Object>, Caution> e : first.entrySet()) {
+            List<String> names = subjects.get(e.getKey());
+            Caution c = e.getValue();
+            out.add(
+                    names.size() < 2
+                            ? c
+                            : new Caution(
+                                    c.code,
+                                    c.severity,
+                                    String.join(", ", names) + ": " + e.getKey().get(3),
+                                    c.basis));
+        }
+        return out;
     }
 }

@@ -35,6 +35,8 @@ final class CliSupport {
             throw new InputException(
                     "--curve", "expected QMIN:QMAX:N such as \"0 L/s:20 L/s:11\", got \"" + text + "\"");
         }
+        requireFlowUnit(parts[0].strip(), "--curve QMIN");
+        requireFlowUnit(parts[1].strip(), "--curve QMAX");
         double min = Quantities.parseFlow(parts[0].strip(), "--curve QMIN").volumetric(density, "--curve QMIN");
         double max = Quantities.parseFlow(parts[1].strip(), "--curve QMAX").volumetric(density, "--curve QMAX");
         int n;
@@ -44,5 +46,19 @@ final class CliSupport {
             throw new InputException("--curve N", "expected a whole number of points, got \"" + parts[2] + "\"");
         }
         return new double[] {min, max, n};
+    }
+
+    private static final java.util.regex.Pattern BARE_NUMBER =
+            java.util.regex.Pattern.compile("[+-]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][+-]?\\d+)?");
+
+    /**
+     * A curve end must carry its unit: a bare "6" would be read as 6 m³/s, a thousand times what
+     * was meant if the engineer thought in L/s. Zero needs none.
+     */
+    private static void requireFlowUnit(String text, String where) {
+        if (BARE_NUMBER.matcher(text).matches() && Double.parseDouble(text) != 0) {
+            throw new InputException(
+                    where, "\"" + text + "\" has no unit; give the flow with its unit, e.g. \"" + text + " L/s\"");
+        }
     }
 }

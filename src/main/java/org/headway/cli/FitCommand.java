@@ -117,7 +117,13 @@ public final class FitCommand implements Callable<Integer> {
         if (expression == null && start != null) {
             throw new InputException("--start", "starting values go with --expression");
         }
-        Table table = Table.read(data);
+        List<String> used = new ArrayList<>();
+        used.add(y.trim());
+        x.forEach(c -> used.add(c.trim()));
+        if (weights != null) {
+            used.add(weights.trim());
+        }
+        Table table = Table.read(data, java.util.Set.copyOf(used));
         Observations observations = observations(table);
         List<FitForm> forms = new ArrayList<>();
         if (form != null) {
@@ -259,7 +265,11 @@ public final class FitCommand implements Callable<Integer> {
         }
     }
 
-    /** A numeric CSV table with names taken from the header (text before a bracketed unit). */
+    /**
+     * A numeric CSV table with names taken from the header (text before a bracketed unit). Only the
+     * columns asked for are read as numbers; the others (a regime, a run label) are skipped, so the
+     * CSV that {@code rig --format csv} writes can be fitted as it is.
+     */
     static final class Table {
         /**
          * A decimal number as people write it, or NaN/Infinity (refused later with their own message).
@@ -279,7 +289,16 @@ public final class FitCommand implements Callable<Integer> {
             this.columns = columns;
         }
 
+        /** Reads every column as numbers. */
         static Table read(Path file) throws IOException {
+            return read(file, null);
+        }
+
+        /**
+         * @param file the CSV file
+         * @param wanted names of the columns to read as numbers; null for all
+         */
+        static Table read(Path file, java.util.Set<String> wanted) throws IOException {
             CSVFormat csv = CSVFormat.DEFAULT
                     .builder()
                     .setIgnoreSurroundingSpaces(true)
@@ -328,6 +347,9 @@ public final class FitCommand implements Callable<Integer> {
                         }
                     }
                     for (int c = 0; c < record.size(); c++) {
+                        if (wanted != null && !wanted.contains(names.get(c))) {
+                            continue;
+                        }
                         String cell = record.get(c);
                         try {
                             values.get(c)[rows] = org.headway.units.Decimals.parseDecimal(cell);

@@ -319,15 +319,17 @@ public final class RigCommand implements Callable<Integer> {
                     }
                     PointUncertainty u = r.uncertainty();
                     csv.print(r.line());
-                    csv.print(Double.toString(q.convert(r.flow())));
-                    csv.print(Double.toString(p.convert(r.pressureDrop())));
+                    // converted columns: 15 significant digits, without the conversion's binary noise
+                    csv.print(Quantities.formatConverted(q.convert(r.flow())));
+                    csv.print(Quantities.formatConverted(p.convert(r.pressureDrop())));
                     csv.print(
                             r.temperature().isPresent()
-                                    ? Double.toString(t.convert(r.temperature().getAsDouble()))
+                                    ? Quantities.formatConverted(
+                                            t.convert(r.temperature().getAsDouble()))
                                     : "");
-                    csv.print(Double.toString(rho.convert(r.density())));
-                    csv.print(Double.toString(mu.convert(r.dynamicViscosity())));
-                    csv.print(Double.toString(v.convert(r.velocity())));
+                    csv.print(Quantities.formatConverted(rho.convert(r.density())));
+                    csv.print(Quantities.formatConverted(mu.convert(r.dynamicViscosity())));
+                    csv.print(Quantities.formatConverted(v.convert(r.velocity())));
                     csv.print(Double.toString(r.reynolds()));
                     csv.print(Double.toString(r.frictionFactor()));
                     csv.print(Double.toString(r.relativeRoughness()));

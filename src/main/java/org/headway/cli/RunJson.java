@@ -55,6 +55,10 @@ final class RunJson {
         ObjectNode fluid = root.putObject("fluid");
         fluid.put("name", run.fluid().fluid());
         fluid.put("temperature_k", run.fluid().temperature());
+        if (!run.fluid().temperatureGiven()) {
+            // the key stays (contract); this says its value is only the 20 °C the checks assume
+            fluid.put("temperature_given", false);
+        }
         fluid.put("density_kg_per_m3", run.fluid().density());
         fluid.put("dynamic_viscosity_pa_s", run.fluid().dynamicViscosity());
         run.fluid().vapourPressure().ifPresent(v -> fluid.put("vapour_pressure_pa", v));

@@ -33,13 +33,16 @@ final class RunText {
             UncertaintyBand band,
             List<SizeSelector.SizeCheck> sizes) {
         out.println(run.title().isEmpty() ? "Pipe run" : run.title());
-        out.println("Fluid: " + run.fluid().fluid() + " at " + q(run.fluid().temperature(), QuantityKind.TEMPERATURE, u)
+        out.println("Fluid: " + run.fluid().fluid()
+                + (run.fluid().temperatureGiven()
+                        ? " at " + q(run.fluid().temperature(), QuantityKind.TEMPERATURE, u)
+                        : " (temperature not given)")
                 + ", ρ = " + q(run.fluid().density(), QuantityKind.DENSITY, u) + ", μ = "
                 + q(run.fluid().dynamicViscosity(), QuantityKind.DYNAMIC_VISCOSITY, u));
         out.println("Friction method: " + run.friction().displayName());
         out.println("Flow: " + q(r.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + "   (mode: " + mode + ")");
         if (!modeNote.isEmpty()) {
-            out.println("Result: " + modeNote);
+            out.println("Result: " + Quantities.inSystem(modeNote, u));
         }
         out.println();
         String v = Quantities.unitSymbol(QuantityKind.VELOCITY, u);
@@ -86,9 +89,17 @@ final class RunText {
                     clip(e.id(), 28),
                     e.kind(),
                     n(Quantities.fromSi(e.result().headLoss(), QuantityKind.HEAD, u)),
-                    n(Quantities.fromSi(e.inletPressure(), QuantityKind.PRESSURE, u)),
-                    n(Quantities.fromSi(e.outletPressure(), QuantityKind.PRESSURE, u)),
-                    e.result().law());
+                    n(Quantities.fromSi(
+                            Quantities.withoutNoise(
+                                    e.inletPressure(), Math.abs(e.inletPressure()) + Math.abs(e.outletPressure())),
+                            QuantityKind.PRESSURE,
+                            u)),
+                    n(Quantities.fromSi(
+                            Quantities.withoutNoise(
+                                    e.outletPressure(), Math.abs(e.inletPressure()) + Math.abs(e.outletPressure())),
+                            QuantityKind.PRESSURE,
+                            u)),
+                    Quantities.inSystem(e.result().law(), u));
         }
         out.println(
                 "(pressures are gauge; barometric pressure " + q(run.atmosphericPressure(), QuantityKind.PRESSURE, u)
@@ -101,12 +112,17 @@ final class RunText {
                         ? " (pipe fittings " + q(r.totals().minorHeadLoss() - components, QuantityKind.HEAD, u)
                                 + ", valves and components " + q(components, QuantityKind.HEAD, u) + ")"
                         : ""));
-        out.println("Static head:      " + q(r.totals().staticHead(), QuantityKind.HEAD, u));
+        out.println("Static head:      "
+                + q(Quantities.withoutNoise(r.totals().staticHead(), run.staticHeadScale()), QuantityKind.HEAD, u));
         double scale = Math.abs(r.totals().staticHead())
                 + Math.abs(r.totals().frictionHeadLoss())
                 + Math.abs(r.totals().minorHeadLoss());
-        out.println(
-                "Total head:       " + q(Quantities.withoutNoise(r.totals().totalHead(), scale), QuantityKind.HEAD, u));
+        double totalHead = Quantities.withoutNoise(r.totals().totalHead(), scale);
+        out.println("Total head:       " + q(totalHead, QuantityKind.HEAD, u)
+                + (totalHead < 0
+                        ? " (surplus head " + q(-totalHead, QuantityKind.HEAD, u)
+                                + ": the ends give more head than the run loses)"
+                        : ""));
         out.println("Pressure drop:    " + q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u)
                 + " (friction and fittings)");
         r.npshAvailable().ifPresent(x -> out.println("NPSH available:   " + q(x, QuantityKind.HEAD, u)));
@@ -125,9 +141,9 @@ final class RunText {
                     + (operating.found()
                             ? "operating point " + q(operating.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
                                     + q(operating.head(), QuantityKind.HEAD, u)
-                            : operating.message()));
+                            : Quantities.inSystem(operating.message(), u)));
             for (Caution c : operating.cautions()) {
-                out.println("  caution: " + c.message());
+                out.println("  caution: " + Quantities.inSystem(c.message(), u));
             }
         }
         if (!sizes.isEmpty()) {
@@ -171,8 +187,10 @@ final class RunText {
         out.println();
         out.println("Cautions:");
         for (Caution c : r.cautions()) {
-            out.println("  [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + c.message() + " (basis: "
-                    + c.basis() + ")");
+            out.println(
+                    "  [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + Quantities.inSystem(c.message(), u)
+                            + " (basis: "
+                            + c.basis() + ")");
         }
     }
 

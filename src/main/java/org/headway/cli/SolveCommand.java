@@ -183,6 +183,11 @@ public final class SolveCommand implements Callable<Integer> {
             case csv -> {
                 try {
                     org.headway.report.CsvSheetWriter.write(result, out);
+                    if (!curvePoints.isEmpty()) {
+                        // a blank line, then the curve: two tables as the network command writes them
+                        out.println();
+                        org.headway.report.CsvSheetWriter.writeCurve(curvePoints, out);
+                    }
                 } catch (java.io.IOException e) {
                     throw new java.io.UncheckedIOException(e);
                 }

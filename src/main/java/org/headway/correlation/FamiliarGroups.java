@@ -9,6 +9,12 @@ import java.util.Locale;
  * velocity, length…), judged from each variable's dimensions. Definitions of the groups: White,
  * F. M., Fluid Mechanics, ch. 5, table of dimensionless groups (from memory); pump coefficients
  * as in the pump similarity rules of the same text, ch. 11 (from memory).
+ *
+ * <p>Matching by kind alone would call any group of the right dimensions by a familiar name: with a
+ * pipe diameter D, Q²/(gD⁵) has the kinds of the weir discharge group Q²/(gH⁵), which is defined on
+ * the head H over the crest. Where a group is defined on one particular length (the head of a weir,
+ * the impeller diameter of a pump), its template says so and the variable's name must read as that
+ * length (H, h, head…; D, d, diameter, impeller…); otherwise the group stays unnamed (π1, π2…).
  */
 final class FamiliarGroups {
 
@@ -43,7 +49,21 @@ final class FamiliarGroups {
         }
     }
 
-    private record Term(Kind kind, int exponent) {}
+    /** Which length a template term stands for. */
+    enum Role {
+        ANY,
+        HEAD,
+        DIAMETER
+    }
+
+    private record Term(Kind kind, int exponent, Role role) {
+        Term(Kind kind, int exponent) {
+            this(kind, exponent, Role.ANY);
+        }
+    }
+
+    /** A term of the group being named: kind, exponent and the variable's name. */
+    private record Observed(Kind kind, int exponent, String variable) {}
 
     private record Template(String name, List<Term> terms) {}
 
@@ -56,7 +76,7 @@ final class FamiliarGroups {
                     1,
                     Kind.ROTATIONAL_SPEED,
                     1,
-                    Kind.LENGTH,
+                    Role.DIAMETER,
                     2,
                     Kind.DYNAMIC_VISCOSITY,
                     -1),
@@ -85,8 +105,15 @@ final class FamiliarGroups {
                     -2,
                     Kind.LENGTH,
                     -2),
-            template("flow coefficient Q/(ND³)", Kind.FLOW_RATE, 1, Kind.ROTATIONAL_SPEED, -1, Kind.LENGTH, -3),
-            template("head coefficient gH/(N²D²)", Kind.SPECIFIC_ENERGY, 1, Kind.ROTATIONAL_SPEED, -2, Kind.LENGTH, -2),
+            template("flow coefficient Q/(ND³)", Kind.FLOW_RATE, 1, Kind.ROTATIONAL_SPEED, -1, Role.DIAMETER, -3),
+            template(
+                    "head coefficient gH/(N²D²)",
+                    Kind.SPECIFIC_ENERGY,
+                    1,
+                    Kind.ROTATIONAL_SPEED,
+                    -2,
+                    Role.DIAMETER,
+                    -2),
             template(
                     "power coefficient P/(ρN³D⁵)",
                     Kind.POWER,
@@ -95,23 +122,28 @@ final class FamiliarGroups {
                     -1,
                     Kind.ROTATIONAL_SPEED,
                     -3,
-                    Kind.LENGTH,
+                    Role.DIAMETER,
                     -5),
-            template(
-                    "weir discharge group squared Q²/(gH⁵)", Kind.FLOW_RATE, 2, Kind.ACCELERATION, -1, Kind.LENGTH, -5),
+            template("weir discharge group squared Q²/(gH⁵)", Kind.FLOW_RATE, 2, Kind.ACCELERATION, -1, Role.HEAD, -5),
             template(
                     "weir discharge group squared q²/(gH³)",
                     Kind.FLOW_PER_WIDTH,
                     2,
                     Kind.ACCELERATION,
                     -1,
-                    Kind.LENGTH,
+                    Role.HEAD,
                     -3));
 
+    /** Pairs of a kind (or a length role) and its exponent. */
     private static Template template(String name, Object... kindsAndExponents) {
         List<Term> terms = new ArrayList<>();
         for (int i = 0; i < kindsAndExponents.length; i += 2) {
-            terms.add(new Term((Kind) kindsAndExponents[i], (Integer) kindsAndExponents[i + 1]));
+            int exponent = (Integer) kindsAndExponents[i + 1];
+            if (kindsAndExponents[i] instanceof Role role) {
+                terms.add(new Term(Kind.LENGTH, exponent, role));
+            } else {
+                terms.add(new Term((Kind) kindsAndExponents[i], exponent));
+            }
         }
         return new Template(name, terms);
     }
@@ -135,11 +167,12 @@ final class FamiliarGroups {
 
     /** A familiar name for the group with these exponents (in this orientation), or null. */
     static String name(List<DimensionalVariable> variables, int[] exponents) {
-        List<Term> terms = new ArrayList<>();
+        List<Observed> terms = new ArrayList<>();
         List<Integer> involved = new ArrayList<>();
         for (int j = 0; j < exponents.length; j++) {
             if (exponents[j] != 0) {
-                terms.add(new Term(kind(variables.get(j)), exponents[j]));
+                terms.add(new Observed(
+                        kind(variables.get(j)), exponents[j], variables.get(j).name()));
                 involved.add(j);
             }
         }
@@ -169,17 +202,50 @@ final class FamiliarGroups {
         return null;
     }
 
-    private static boolean sameBag(List<Term> a, List<Term> b) {
-        if (a.size() != b.size()) {
+    /** Every template term matched by its own observed term (kind, exponent, role), with backtracking. */
+    private static boolean sameBag(List<Term> template, List<Observed> observed) {
+        if (template.size() != observed.size()) {
             return false;
         }
-        List<Term> rest = new ArrayList<>(b);
-        for (Term t : a) {
-            if (!rest.remove(t)) {
-                return false;
+        return match(template, 0, observed, new boolean[observed.size()]);
+    }
+
+    private static boolean match(List<Term> template, int next, List<Observed> observed, boolean[] used) {
+        if (next == template.size()) {
+            return true;
+        }
+        Term t = template.get(next);
+        for (int i = 0; i < observed.size(); i++) {
+            Observed o = observed.get(i);
+            if (!used[i] && o.kind == t.kind && o.exponent == t.exponent && fills(t.role, o.variable)) {
+                used[i] = true;
+                if (match(template, next + 1, observed, used)) {
+                    return true;
+                }
+                used[i] = false;
             }
         }
-        return true;
+        return false;
+    }
+
+    private static boolean fills(Role role, String variable) {
+        return switch (role) {
+            case ANY -> true;
+            case HEAD -> looksLikeHead(variable);
+            case DIAMETER -> looksLikeDiameter(variable);
+        };
+    }
+
+    /** H, h, H1, h_w, head…: the head of a weir or a pump as engineers name it (common practice, no source). */
+    static boolean looksLikeHead(String name) {
+        String n = name.toLowerCase(Locale.ROOT);
+        return n.matches("h(\\d+|_.*)?") || n.startsWith("head");
+    }
+
+    /** D, d, D2, d_i, diameter, impeller…: a diameter as engineers name it (common practice, no source). */
+    static boolean looksLikeDiameter(String name) {
+        String n = name.toLowerCase(Locale.ROOT);
+        return n.matches("d(\\d+|_.*|n|i)?") || n.startsWith("diam") || n.startsWith("impeller");
     }
 
     private static boolean looksLikeRoughness(String name) {

@@ -18,6 +18,9 @@ import org.headway.caution.Caution;
  * @param viscositySource source of the viscosity value
  * @param vapourPressureSource source of the vapour pressure, empty string if none
  * @param cautions e.g. near the edge of the property model's range
+ * @param temperatureGiven false for a fluid of the engineer's own given by density and viscosity
+ *     without a temperature: {@code temperature} is then only the 20 °C that temperature-dependent
+ *     checks assume, and is not shown as an input
  */
 public record FluidState(
         String fluid,
@@ -30,9 +33,38 @@ public record FluidState(
         String densitySource,
         String viscositySource,
         String vapourPressureSource,
-        List<Caution> cautions) {
+        List<Caution> cautions,
+        boolean temperatureGiven) {
 
     public FluidState {
         cautions = List.copyOf(cautions);
+    }
+
+    /** A state at a temperature that was given (every property model's state). */
+    public FluidState(
+            String fluid,
+            double temperature,
+            double pressure,
+            double density,
+            double dynamicViscosity,
+            double kinematicViscosity,
+            OptionalDouble vapourPressure,
+            String densitySource,
+            String viscositySource,
+            String vapourPressureSource,
+            List<Caution> cautions) {
+        this(
+                fluid,
+                temperature,
+                pressure,
+                density,
+                dynamicViscosity,
+                kinematicViscosity,
+                vapourPressure,
+                densitySource,
+                viscositySource,
+                vapourPressureSource,
+                cautions,
+                true);
     }
 }

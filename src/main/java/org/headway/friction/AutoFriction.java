@@ -58,7 +58,8 @@ public final class AutoFriction implements FrictionCorrelation {
 
     @Override
     public String displayName() {
-        return "Auto (laminar 64/Re, Colebrook–White, straight-line blend between)";
+        return "Auto (laminar 64/Re, Colebrook–White, straight-line blend between Re "
+                + Math.round(FlowRegimes.LAMINAR_LIMIT) + " and " + Math.round(FlowRegimes.TURBULENT_LIMIT) + ")";
     }
 
     @Override

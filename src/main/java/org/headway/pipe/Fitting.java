@@ -1,6 +1,7 @@
 package org.headway.pipe;
 
 import java.util.List;
+import java.util.OptionalDouble;
 import org.headway.caution.Caution;
 
 /**
@@ -69,5 +70,17 @@ public interface Fitting {
      */
     default double laminarCoefficient() {
         return 0;
+    }
+
+    /**
+     * The same fitting in a pipe of the given nominal size. Only methods published on the nominal
+     * size (Darby's 3-K) use it; the others return themselves.
+     *
+     * @param nominalDiameter nominal diameter of the pipe (m; NPS × 0.0254, DN × 0.001), empty when
+     *     unknown
+     * @return the fitting bound to that size
+     */
+    default Fitting atNominalSize(OptionalDouble nominalDiameter) {
+        return this;
     }
 }

@@ -527,7 +527,8 @@ public final class ProjectResolver {
                     spec.density().isEmpty() ? state.densitySource() : given,
                     spec.viscosity().isEmpty() ? state.viscositySource() : given,
                     spec.vapourPressure().isEmpty() ? (state == null ? "" : state.vapourPressureSource()) : given,
-                    cautions);
+                    cautions,
+                    !Double.isNaN(temperature));
         }
         return state;
     }
@@ -611,6 +612,8 @@ public final class ProjectResolver {
             Project.SegmentSpec spec, FluidState fluid, boolean hazenWilliamsRun, Double inletLevel, double level) {
         Segment.Builder b = Segment.builder(spec.name()).id(spec.id());
         Material catalogMaterial = null;
+        // Darby's 3-K size term takes the nominal size (Darby 2001); unknown for an explicit bore.
+        OptionalDouble nominalDiameter = OptionalDouble.empty();
         b.length(InputException.requireNonNegative(
                 "length", Quantities.parse(spec.length(), QuantityKind.LENGTH, "length")));
         double diameter;
@@ -632,6 +635,7 @@ public final class ProjectResolver {
                 throw e.at("pipe.size");
             }
             catalogMaterial = material;
+            nominalDiameter = size.nominalDiameter();
             diameter = size.innerDiameter();
             roughness = material.roughness();
             low = material.roughnessLow();
@@ -698,7 +702,7 @@ public final class ProjectResolver {
                 throw new InputException(
                         path + (fs.lossCoefficient().isEmpty() ? ".kind" : ".lossCoefficient"), e.problem());
             }
-            b.fitting(new FittingUse(fitting, fs.count()));
+            b.fitting(new FittingUse(fitting.atNominalSize(nominalDiameter), fs.count()));
         }
         if (!spec.lossCoefficient().isEmpty()) {
             b.extraLossCoefficient(InputException.requireNonNegative(
@@ -1033,7 +1037,8 @@ public final class ProjectResolver {
             for (PipeSize size : catalog.sizes(material.sizeTable(), given.schedule())) {
                 list.add(new SizeSelector.CandidateSize(
                         sizeLabel(size) + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())),
-                        size.innerDiameter()));
+                        size.innerDiameter(),
+                        size.nominalDiameter()));
             }
             map.put(id, list);
         }
@@ -1051,7 +1056,8 @@ public final class ProjectResolver {
         for (PipeSize size : catalog.sizes(material.sizeTable(), spec.schedule())) {
             list.add(new SizeSelector.CandidateSize(
                     sizeLabel(size) + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())),
-                    size.innerDiameter()));
+                    size.innerDiameter(),
+                    size.nominalDiameter()));
         }
         if (list.isEmpty()) {
             throw new InputException(

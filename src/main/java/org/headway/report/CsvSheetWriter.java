@@ -84,4 +84,27 @@ public final class CsvSheetWriter {
         }
         p.flush();
     }
+
+    /** Column headers of the system-curve table, units in brackets. */
+    public static final String[] CURVE_HEADER = {"flow [m3/s]", "total_head [m]", "head_loss [m]"};
+
+    /**
+     * Writes a system curve as a table of its own (SI, round-trippable numbers).
+     *
+     * @param curve points of the curve
+     * @param w where to write
+     */
+    public static void writeCurve(java.util.List<org.headway.system.SystemCurve.Point> curve, Appendable w)
+            throws java.io.IOException {
+        CSVPrinter p = new CSVPrinter(
+                w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+        p.printRecord((Object[]) CURVE_HEADER);
+        for (org.headway.system.SystemCurve.Point point : curve) {
+            p.printRecord(
+                    Double.toString(point.flow()),
+                    Double.toString(point.totalHead()),
+                    Double.toString(point.headLoss()));
+        }
+        p.flush();
+    }
 }

@@ -96,7 +96,7 @@ public record HeadLossSheet(
                 op,
                 band,
                 methods(run),
-                new ArrayList<>(cautions),
+                Caution.grouped(new ArrayList<>(cautions)),
                 inputHash(resolved.project()),
                 version);
     }

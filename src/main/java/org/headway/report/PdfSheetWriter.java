@@ -94,7 +94,10 @@ public final class PdfSheetWriter {
         var f = run.fluid();
         List<String[]> fluid = new ArrayList<>();
         fluid.add(row("Fluid", f.fluid(), ""));
-        fluid.add(row("Temperature", q(f.temperature(), QuantityKind.TEMPERATURE, u), "as given"));
+        fluid.add(
+                f.temperatureGiven()
+                        ? row("Temperature", q(f.temperature(), QuantityKind.TEMPERATURE, u), "as given")
+                        : row("Temperature", "not given", "density and viscosity given directly; none needed"));
         fluid.add(row(
                 "Pressure (absolute)",
                 q(f.pressure(), QuantityKind.PRESSURE, u),
@@ -208,7 +211,9 @@ public final class PdfSheetWriter {
                 continue;
             }
             ElementProfile ep = r.element(e.id()).orElseThrow();
-            components.add(new String[] {e.id(), e.kind(), e.name(), ep.result().law()});
+            components.add(new String[] {
+                e.id(), e.kind(), e.name(), Quantities.inSystem(ep.result().law(), u)
+            });
         }
         if (!components.isEmpty()) {
             pdf.space(4);
@@ -267,8 +272,16 @@ public final class PdfSheetWriter {
                 ep.id(),
                 ep.kind(),
                 n(Quantities.fromSi(ep.result().headLoss(), QuantityKind.HEAD, u)),
-                n(Quantities.fromSi(ep.inletPressure(), QuantityKind.PRESSURE, u)),
-                n(Quantities.fromSi(ep.outletPressure(), QuantityKind.PRESSURE, u)),
+                n(Quantities.fromSi(
+                        Quantities.withoutNoise(
+                                ep.inletPressure(), Math.abs(ep.inletPressure()) + Math.abs(ep.outletPressure())),
+                        QuantityKind.PRESSURE,
+                        u)),
+                n(Quantities.fromSi(
+                        Quantities.withoutNoise(
+                                ep.outletPressure(), Math.abs(ep.inletPressure()) + Math.abs(ep.outletPressure())),
+                        QuantityKind.PRESSURE,
+                        u)),
                 ep.highPointPressure().isPresent()
                         ? n(Quantities.fromSi(ep.highPointPressure().getAsDouble(), QuantityKind.PRESSURE, u))
                         : "—",
@@ -296,16 +309,21 @@ public final class PdfSheetWriter {
                 "Fitting and component loss Σh_m",
                 q(r.totals().minorHeadLoss(), QuantityKind.HEAD, u),
                 "pipe fittings plus valves, rated components and diameter changes"));
-        totals.add(row("Static head", q(r.totals().staticHead(), QuantityKind.HEAD, u), "elevation and end heads"));
+        totals.add(row(
+                "Static head",
+                q(Quantities.withoutNoise(r.totals().staticHead(), run.staticHeadScale()), QuantityKind.HEAD, u),
+                "elevation and end heads"));
         double scale = Math.abs(r.totals().staticHead())
                 + Math.abs(r.totals().frictionHeadLoss())
                 + Math.abs(r.totals().minorHeadLoss());
+        double totalHead = Quantities.withoutNoise(r.totals().totalHead(), scale);
         totals.add(row(
                 "Total head H",
-                q(Quantities.withoutNoise(r.totals().totalHead(), scale), QuantityKind.HEAD, u),
-                run.pump().isPresent()
-                        ? "what the pump must supply"
-                        : "what a pump would have to supply; negative: head the ends give beyond the losses"));
+                q(totalHead, QuantityKind.HEAD, u),
+                totalHead < 0
+                        ? "negative: surplus head of " + q(-totalHead, QuantityKind.HEAD, u)
+                                + " that the ends give beyond the losses; no pump head is needed at this flow"
+                        : run.pump().isPresent() ? "what the pump must supply" : "what a pump would have to supply"));
         totals.add(row("Pressure drop", q(r.totals().pressureDrop(), QuantityKind.PRESSURE, u), "ρ g (Σh_f + Σh_m)"));
         r.npshAvailable()
                 .ifPresent(v -> totals.add(row("NPSH available", q(v, QuantityKind.HEAD, u), "at the pump inlet")));
@@ -317,7 +335,7 @@ public final class PdfSheetWriter {
                             ? q(op.flow(), QuantityKind.VOLUMETRIC_FLOW, u) + " at "
                                     + q(op.head(), QuantityKind.HEAD, u)
                             : "none",
-                    op.message()));
+                    Quantities.inSystem(op.message(), u)));
         }
         if (sheet.band() != null) {
             var b = sheet.band();
@@ -363,7 +381,8 @@ public final class PdfSheetWriter {
         pdf.heading("Cautions", 12);
         for (Caution c : sheet.cautions()) {
             pdf.paragraph(
-                    "• [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + c.message() + " (basis: " + c.basis()
+                    "• [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + Quantities.inSystem(c.message(), u)
+                            + " (basis: " + c.basis()
                             + ")",
                     BODY);
         }

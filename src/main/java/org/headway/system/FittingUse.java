@@ -1,5 +1,6 @@
 package org.headway.system;
 
+import java.util.OptionalDouble;
 import org.headway.caution.InputException;
 import org.headway.pipe.Fitting;
 
@@ -18,5 +19,13 @@ public record FittingUse(Fitting fitting, int count) {
         if (count < 1) {
             throw new InputException("count", "must be at least 1, got " + count);
         }
+    }
+
+    /**
+     * @param nominalDiameter nominal diameter of the pipe (m), empty when unknown
+     * @return the same count of the fitting bound to that nominal size
+     */
+    public FittingUse atNominalSize(OptionalDouble nominalDiameter) {
+        return new FittingUse(fitting.atNominalSize(nominalDiameter), count);
     }
 }

@@ -278,7 +278,8 @@ public final class HeadLossCalculator {
             }
         }
         cautions.add(Caution.GENERAL_REVIEW);
-        return new RunResult(flow, results, profiles, totals, npsh, new ArrayList<>(cautions));
+        // identical cautions of several elements are listed once, naming them; each SegmentResult keeps its own
+        return new RunResult(flow, results, profiles, totals, npsh, Caution.grouped(new ArrayList<>(cautions)));
     }
 
     private static List<Caution> designCautions(Segment s, PipeFlow p, double flow, DesignLimits limits) {

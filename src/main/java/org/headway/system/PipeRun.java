@@ -317,4 +317,19 @@ public record PipeRun(
         }
         return rise + delivery.head(fluid.density()) - source.head(fluid.density());
     }
+
+    /**
+     * Size of the terms the static head is summed from, Σ|rise| + |delivery head| + |source head|,
+     * against which a static head of rounding size is zero for display ({@code
+     * Quantities.withoutNoise}).
+     *
+     * @return scale (m)
+     */
+    public double staticHeadScale() {
+        double scale = 0;
+        for (Element e : elements) {
+            scale += Math.abs(e.rise());
+        }
+        return scale + Math.abs(delivery.head(fluid.density())) + Math.abs(source.head(fluid.density()));
+    }
 }

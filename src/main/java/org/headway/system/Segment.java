@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 import org.headway.friction.FlowRegime;
@@ -164,8 +165,36 @@ public record Segment(
         return Math.PI * innerDiameter * innerDiameter / 4.0;
     }
 
-    /** A copy with another bore and roughness (used by sizing). */
+    /**
+     * A copy with another bore and roughness of unknown nominal size: Darby 3-K fittings fall back
+     * to the inner diameter.
+     */
     public Segment withPipe(double newInnerDiameter, double newRoughness, double low, double high, String description) {
+        return withPipe(newInnerDiameter, newRoughness, low, high, description, OptionalDouble.empty());
+    }
+
+    /**
+     * A copy with another pipe (used by sizing): bore, roughness and the nominal size its fittings
+     * are evaluated at.
+     *
+     * @param newInnerDiameter inner diameter (m)
+     * @param newRoughness absolute roughness (m)
+     * @param low low end of the roughness range (m)
+     * @param high high end of the roughness range (m)
+     * @param description the pipe in words
+     * @param nominalDiameter nominal diameter (m), empty when unknown
+     */
+    public Segment withPipe(
+            double newInnerDiameter,
+            double newRoughness,
+            double low,
+            double high,
+            String description,
+            OptionalDouble nominalDiameter) {
+        List<FittingUse> resized = new ArrayList<>();
+        for (FittingUse use : fittings) {
+            resized.add(use.atNominalSize(nominalDiameter));
+        }
         return new Segment(
                 id,
                 name,
@@ -177,7 +206,7 @@ public record Segment(
                 roughnessSource,
                 description,
                 pipeCondition,
-                fittings,
+                resized,
                 extraLossCoefficient,
                 elevationChange,
                 frictionOverride,

@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import org.headway.caution.InputException;
 
 /**
@@ -20,8 +21,20 @@ public final class SizeSelector {
      *
      * @param label how the engineer knows it, e.g. "NPS 4 Sch 40"
      * @param innerDiameter inner diameter (m)
+     * @param nominalDiameter nominal diameter (m; NPS × 0.0254, DN × 0.001), empty when unknown; the
+     *     size term of Darby's 3-K fittings uses it
      */
-    public record CandidateSize(String label, double innerDiameter) {}
+    public record CandidateSize(String label, double innerDiameter, OptionalDouble nominalDiameter) {
+
+        public CandidateSize {
+            nominalDiameter = nominalDiameter == null ? OptionalDouble.empty() : nominalDiameter;
+        }
+
+        /** A candidate of unknown nominal size. */
+        public CandidateSize(String label, double innerDiameter) {
+            this(label, innerDiameter, OptionalDouble.empty());
+        }
+    }
 
     /**
      * One candidate's figures at the design flow.
@@ -118,8 +131,13 @@ public final class SizeSelector {
     public static PipeRun apply(PipeRun run, CandidateSize size) {
         List<Segment> segments = new ArrayList<>();
         for (Segment s : run.segments()) {
-            segments.add(
-                    s.withPipe(size.innerDiameter(), s.roughness(), s.roughnessLow(), s.roughnessHigh(), size.label()));
+            segments.add(s.withPipe(
+                    size.innerDiameter(),
+                    s.roughness(),
+                    s.roughnessLow(),
+                    s.roughnessHigh(),
+                    size.label(),
+                    size.nominalDiameter()));
         }
         return run.withSegments(segments);
     }

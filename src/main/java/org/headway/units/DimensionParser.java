@@ -11,7 +11,9 @@ import org.headway.caution.InputException;
  * <p>Symbols: m, g, s, K, mol, A, cd (base); N, Pa, J, W, Hz, L (litre), bar, min, h, rad, rpm;
  * {@code 1} or {@code -} for dimensionless. Prefixes Y Z E P T G M k h da d c m µ u n p f a z y.
  * Operators {@code *} {@code ·} {@code /} (left to right: {@code kg/m/s} is kg·m⁻¹·s⁻¹), {@code ^}
- * with an integer exponent (also {@code ^(-1)}, and the superscripts ⁻¹²³⁴), and parentheses.
+ * with an integer exponent (also {@code ^(-1)}, and the superscripts ⁻¹²³⁴), a digit written
+ * straight after a symbol as projects write it ({@code m3/h}, {@code kg/m3}, {@code mm2/s}), and
+ * parentheses.
  *
  * <p>Lives at the edge with the other unit text so that both the command line and the desktop app
  * can read the units engineers type; it returns plain exponents so that {@code units} stays free of
@@ -117,9 +119,18 @@ public final class DimensionParser {
     }
 
     private int[] power() {
+        int before = pos;
         int[] base = factor();
+        boolean symbol = Character.isLetter(text.charAt(before)) || text.charAt(before) == 'µ';
         int exponent = 1;
-        if (pos < text.length() && text.charAt(pos) == '^') {
+        if (symbol && pos < text.length() && text.charAt(pos) >= '2' && text.charAt(pos) <= '9') {
+            // m3, kg/m3: one digit after a symbol is its power, as in the project's unit text
+            exponent = text.charAt(pos) - '0';
+            pos++;
+            if (pos < text.length() && Character.isDigit(text.charAt(pos))) {
+                throw error("a power written after a symbol is one digit 2–9");
+            }
+        } else if (pos < text.length() && text.charAt(pos) == '^') {
             pos++;
             boolean paren = pos < text.length() && text.charAt(pos) == '(';
             if (paren) {

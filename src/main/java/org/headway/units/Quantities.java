@@ -1007,6 +1007,66 @@ public final class Quantities {
         return Math.abs(value) <= 1e-9 * Math.abs(scale) ? 0.0 : value;
     }
 
+    /** A number with an SI unit as the core writes them into messages (longest symbols first). */
+    private static final java.util.regex.Pattern SI_IN_TEXT = java.util.regex.Pattern.compile(
+            "(?<![\\w.])(-?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][-+]?\\d+)?) ?(m³/s|L/s|m/s|kPa|Pa|mm|°C|m)"
+                    + "(?![\\w²³/·])( per 100 m(?![\\w²³/·]))?");
+
+    /**
+     * A message written in SI by the core (cautions, notes, laws) shown in the chosen system: each
+     * number with an SI unit (m³/s, L/s, m/s, kPa, Pa, mm, °C, m) is converted and printed with
+     * {@value #SIGNIFICANT_DIGITS} significant digits in the system's display unit; "X m per 100 m"
+     * is a ratio and keeps its number. In SI only flows change (m³/s to the display L/s); other SI
+     * text is left as written.
+     *
+     * @param text message text in SI
+     * @param system the system to show it in
+     * @return the text in that system
+     */
+    public static String inSystem(String text, UnitSystem system) {
+        java.util.regex.Matcher m = SI_IN_TEXT.matcher(text);
+        StringBuilder out = new StringBuilder();
+        while (m.find()) {
+            double value = Double.parseDouble(m.group(1));
+            String unit = m.group(2);
+            String replacement;
+            if (m.group(3) != null) {
+                replacement = system == UnitSystem.US_CUSTOMARY ? m.group(1) + " ft per 100 ft" : m.group();
+            } else if (system != UnitSystem.US_CUSTOMARY && !unit.equals("m³/s")) {
+                replacement = m.group();
+            } else {
+                replacement = switch (unit) {
+                    case "m³/s" -> format(value, QuantityKind.VOLUMETRIC_FLOW, system);
+                    case "L/s" -> format(value / 1000.0, QuantityKind.VOLUMETRIC_FLOW, system);
+                    case "m/s" -> format(value, QuantityKind.VELOCITY, system);
+                    case "kPa" -> format(value * 1000.0, QuantityKind.PRESSURE, system);
+                    case "Pa" -> format(value, QuantityKind.PRESSURE, system);
+                    case "mm" -> format(value / 1000.0, QuantityKind.DIAMETER, system);
+                    case "°C" -> format(value + 273.15, QuantityKind.TEMPERATURE, system);
+                    default -> format(value, QuantityKind.HEAD, system);
+                };
+            }
+            m.appendReplacement(out, java.util.regex.Matcher.quoteReplacement(replacement));
+        }
+        m.appendTail(out);
+        return out.toString();
+    }
+
+    /**
+     * A value converted between units, for machine-readable output: rounded to 15 significant
+     * digits (below a double's 15.95), which drops the binary noise a conversion adds (291.16 K →
+     * 18.00999999999999 °C prints 18.01) and keeps every digit a measurement carries.
+     *
+     * @param value the converted value
+     * @return its shortest decimal text at 15 significant digits
+     */
+    public static String formatConverted(double value) {
+        if (!Double.isFinite(value) || value == 0) {
+            return Double.toString(value);
+        }
+        return Double.toString(new BigDecimal(value).round(new MathContext(15)).doubleValue());
+    }
+
     /**
      * The unit a kind is shown in.
      *

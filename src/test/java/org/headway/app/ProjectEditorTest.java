@@ -33,6 +33,39 @@ class ProjectEditorTest {
         assertTrue(editor.openFile(demo));
     }
 
+    /** Name of the segment the pump feeds (the first pipe after it in flow order). */
+    private String segmentThePumpFeeds() {
+        int upstream = editor.project().pump().orElseThrow().position();
+        return editor.project().segments().get(upstream).name();
+    }
+
+    /**
+     * The pump stays on the segment it feeds when segments move or go: the demo's pump feeds the
+     * discharge header (the invented demo file's element order is the reference).
+     */
+    @Test
+    void thePumpFollowsTheSegmentItFeeds() {
+        String fed = segmentThePumpFeeds();
+        String before = editor.pumpPositionText();
+        int from = Integer.parseInt(before) - 1;
+        assertEquals(from + 1, editor.moveSegment(from, +1));
+        assertEquals(fed, segmentThePumpFeeds());
+        assertEquals(String.valueOf(from + 2), editor.pumpPositionText());
+        // moving a segment from upstream of the pump to below it moves the pump up one
+        assertEquals(1, editor.moveSegment(0, +1));
+        assertEquals(fed, segmentThePumpFeeds());
+        // removing a segment upstream of the pump keeps it on the same segment
+        int upstream = editor.project().pump().orElseThrow().position();
+        assertTrue(upstream > 0);
+        assertTrue(editor.removeSegment(0));
+        assertEquals(fed, segmentThePumpFeeds());
+        // removing the segment it feeds puts it on the next one down
+        int at = editor.project().pump().orElseThrow().position();
+        String next = editor.project().segments().get(at + 1).name();
+        assertTrue(editor.removeSegment(at));
+        assertEquals(next, segmentThePumpFeeds());
+    }
+
     @Test
     void aBadQuantityIsRejectedWithAMessageAndThePreviousValueKept() {
         assertFalse(editor.setSegmentField(2, SegmentField.LENGTH, "420 kPa"));

@@ -95,6 +95,23 @@ class ResultsModelTest {
         assertEquals("turbulent", results.rows().get(2).regime());
     }
 
+    /**
+     * A gravity line whose ends give more head than it loses has a negative total head; the app
+     * calls it a surplus (energy balance: H = static + losses, negative when the fall exceeds them).
+     */
+    @Test
+    void aNegativeTotalHeadIsShownAsSurplusHead() throws Exception {
+        Path gravity = dir.resolve("gravity.json");
+        java.nio.file.Files.copy(Path.of("fluids-data", "examples", "gravity-spring-line.json"), gravity);
+        editor.openFile(gravity);
+        RunResult expected = engine(gravity, null);
+        assertTrue(expected.totals().totalHead() < 0, "the example must be a surplus case");
+        assertEquals("", results.total("Head required"));
+        assertEquals(
+                Quantities.format(-expected.totals().totalHead(), QuantityKind.HEAD, UnitSystem.SI),
+                results.total("Surplus head"));
+    }
+
     @Test
     void aLengthEditRecomputesTheTotals() {
         String before = results.total("Total head loss");

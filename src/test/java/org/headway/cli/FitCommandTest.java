@@ -104,6 +104,42 @@ class FitCommandTest {
         assertEquals(-0.25, fit.parameters().get(1).value(), 0.01);
     }
 
+    /**
+     * Columns not named by --y, --x or --weights are not read, so text columns (a regime, a run
+     * label) do not stop a fit. The data lie exactly on y = 3 + 2x, so the linear fit must return
+     * those (closed form: a straight line through exact points is itself).
+     */
+    @Test
+    void columnsNotNamedAreIgnoredEvenWhenTheyHoldText() throws Exception {
+        Path csv = dir.resolve("rig-out.csv");
+        Files.writeString(
+                csv,
+                "line,x [-],regime,y [-],dominant_f,run\n"
+                        + "7,1,laminar,5,pressure drop,R01\n"
+                        + "8,2,transitional,7,flow,R02\n"
+                        + "9,4,turbulent,11,temperature,R03\n");
+        CliRun run = CliRun.of("fit", csv.toString(), "--y", "y", "--x", "x", "--form", "linear", "--format", "json");
+        assertEquals(0, run.exitCode(), run.err());
+        JsonNode json = new ObjectMapper().readTree(run.out());
+        assertEquals(3.0, json.get("parameters").get(0).get("value").doubleValue(), 1e-12);
+        assertEquals(2.0, json.get("parameters").get(1).get("value").doubleValue(), 1e-12);
+        // a text cell in a column that IS named is still refused, naming it
+        CliRun bad = CliRun.of("fit", csv.toString(), "--y", "y", "--x", "regime", "--form", "linear");
+        assertEquals(2, bad.exitCode());
+        assertEquals(
+                "headway: " + csv + " line 2, column regime: 'laminar' is not a number",
+                bad.err().trim());
+    }
+
+    /** The bundled demo rig points (with a text "run" column) fit as they are. */
+    @Test
+    void bundledDemoRigPointsFit() {
+        // surefire runs in the project folder, where fluids-data/ is the source of truth
+        CliRun run = CliRun.of(
+                "fit", "fluids-data/examples/demo-rig-points.csv", "--y", "dp", "--x", "flow", "--form", "power");
+        assertEquals(0, run.exitCode(), run.err());
+    }
+
     @Test
     void badCellNamesFileLineColumnAndValue() throws Exception {
         Path csv = dir.resolve("bad.csv");

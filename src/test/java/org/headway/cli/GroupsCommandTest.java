@@ -49,6 +49,41 @@ class GroupsCommandTest {
         assertEquals(-1, re.get("exponents").get("mu").intValue());
     }
 
+    /**
+     * Q²/(gD⁵) with D a pipe diameter is not the weir discharge group: that group is defined on the
+     * head H over the crest (White, Fluid Mechanics, ch. 10, weirs, from memory). With H also given,
+     * the group on D gets no familiar name; the same variables with H repeating do name it.
+     */
+    @Test
+    void familiarNameOnlyWhenTheVariablesAreThoseItIsDefinedOn() throws Exception {
+        CliRun onDiameter = CliRun.of(
+                "groups", "--var", "Q=m3/h", "--var", "D=m", "--var", "g=m/s^2", "--var", "H=m", "--format", "json");
+        assertEquals(0, onDiameter.exitCode(), onDiameter.err());
+        JsonNode groups = new ObjectMapper().readTree(onDiameter.out()).get("groups");
+        JsonNode first = groups.get(0);
+        assertEquals(2, first.get("exponents").get("Q").intValue(), first.toString());
+        assertEquals(-5, first.get("exponents").get("D").intValue(), first.toString());
+        assertTrue(first.get("name").asText().startsWith("π"), first.toString());
+        assertTrue(!onDiameter.out().contains("weir"), onDiameter.out());
+
+        CliRun onHead = CliRun.of(
+                "groups",
+                "--var",
+                "Q=m^3/s",
+                "--var",
+                "g=m/s^2",
+                "--var",
+                "H=m",
+                "--var",
+                "b=m",
+                "--repeating",
+                "g,H",
+                "--format",
+                "json");
+        assertEquals(0, onHead.exitCode(), onHead.err());
+        assertTrue(onHead.out().contains("weir discharge group squared"), onHead.out());
+    }
+
     @Test
     void dependentRepeatingVariablesAreBadInputWithExplanation() {
         CliRun run = CliRun.of(
@@ -87,6 +122,9 @@ class GroupsCommandTest {
                 "N·m; 1; 2; -2",
                 "kW; 1; 2; -3",
                 "m³/h; 0; 3; -1",
+                "m3/h; 0; 3; -1",
+                "kg/m3; 1; -3; 0",
+                "mm2/s; 0; 2; -1",
                 "L/min; 0; 3; -1",
                 "m^2/s; 0; 2; -1",
                 "kg/(m*s); 1; -1; -1",

@@ -118,6 +118,95 @@ class PipeRunCommandsTest {
         assertTrue(text.contains("licensed or otherwise qualified engineer"));
     }
 
+    /**
+     * CSV keeps the segment table as it was and adds the curve after a blank line, as the network
+     * command does with its two tables. Flows are evenly spaced from 0 to 12 L/s (4 points: 0, 4, 8,
+     * 12 L/s, computed here); each head agrees with a head-loss solve at that flow.
+     */
+    @Test
+    void solveCsvIncludesTheCurve() throws Exception {
+        assertEquals(
+                0, run("solve", project.toString(), "--format", "csv", "--curve", "0 L/s:12 L/s:4"), err::toString);
+        String[] tables = out.toString().split("\n\n");
+        assertEquals(2, tables.length, out.toString());
+        assertTrue(tables[0].startsWith(String.join(",", org.headway.report.CsvSheetWriter.HEADER)), tables[0]);
+        java.util.List<String> curve = tables[1].strip().lines().toList();
+        assertEquals("flow [m3/s],total_head [m],head_loss [m]", curve.get(0));
+        assertEquals(5, curve.size(), tables[1]);
+        var run = ProjectResolver.resolve(ProjectFile.load(project), Catalog.bundled(), dir)
+                .run();
+        for (int i = 1; i <= 4; i++) {
+            String[] cells = curve.get(i).split(",");
+            double q = 0.004 * (i - 1);
+            assertEquals(q, Double.parseDouble(cells[0]), 1e-15);
+            if (q > 0) {
+                assertEquals(
+                        HeadLossCalculator.solve(run, q).totals().totalHead(),
+                        Double.parseDouble(cells[1]),
+                        1e-9 * Math.abs(Double.parseDouble(cells[1])));
+            }
+        }
+    }
+
+    @Test
+    void curveWithBareNumbersIsRefused() {
+        assertEquals(2, run("solve", project.toString(), "--curve", "0:6:4"));
+        String e = err.toString().strip();
+        assertTrue(e.startsWith("headway: --curve QMAX:"), e);
+        assertTrue(e.contains("\"6\" has no unit"), e);
+    }
+
+    /** Energy balance: a total head below zero is head the ends give beyond the losses. */
+    @Test
+    void negativeTotalHeadIsCalledSurplusHead() throws Exception {
+        Path gravity = Path.of("fluids-data", "examples", "gravity-spring-line.json");
+        assertEquals(0, run("solve", gravity.toString()), err::toString);
+        double h = ProjectResolver.resolve(ProjectFile.load(gravity), Catalog.bundled(), gravity.getParent())
+                .run()
+                .designFlow();
+        var run = ProjectResolver.resolve(ProjectFile.load(gravity), Catalog.bundled(), gravity.getParent())
+                .run();
+        double total = HeadLossCalculator.solve(run, h).totals().totalHead();
+        assertTrue(total < 0, "the example must be a surplus case");
+        String surplus = org.headway.units.Quantities.format(
+                -total, org.headway.units.QuantityKind.HEAD, org.headway.units.UnitSystem.SI);
+        assertTrue(out.toString().contains("(surplus head " + surplus), out.toString());
+    }
+
+    /** In US output no SI unit is left in the result line, element laws or cautions. */
+    @Test
+    void usOutputCarriesNoSiUnits() throws Exception {
+        Path gravity = Path.of("fluids-data", "examples", "gravity-spring-line.json");
+        assertEquals(0, run("solve", gravity.toString(), "--mode", "flow", "--units", "us"), err::toString);
+        assertEquals(0, run("solve", project.toString(), "--units", "us"), err::toString);
+        java.util.regex.Pattern si = java.util.regex.Pattern.compile("\\d (m³/s|L/s|m/s|kPa|mm|m)(?![\\w²³/])");
+        for (String line : out.toString().lines().toList()) {
+            if (line.startsWith("Result:") || line.startsWith("  [") || line.contains("supplies the")) {
+                assertTrue(!si.matcher(line).find(), line);
+            }
+        }
+        assertTrue(out.toString().contains("Result: "), out.toString());
+    }
+
+    /**
+     * Rises of 0.1 m and 0.2 m against a source 0.3 m up: the static head is exactly 0 (arithmetic),
+     * but 0.1 + 0.2 − 0.3 is 5.55e-17 in binary; the display must show 0, not the noise.
+     */
+    @Test
+    void roundingNoiseIsShownAsZero() throws Exception {
+        Path p = dir.resolve("noise.json");
+        Files.writeString(p, """
+                { "format": "headway-project", "version": 2, "title": "invented noise check",
+                  "fluid": { "name": "water", "temperature": "17.3 degC" }, "flow": "3.7 L/s",
+                  "elements": [
+                    { "id": "a", "length": "37.1 m", "innerDiameter": "52.5 mm", "roughness": "0.045 mm", "elevationChange": "0.1 m" },
+                    { "id": "b", "length": "12.9 m", "innerDiameter": "40.9 mm", "roughness": "0.045 mm", "elevationChange": "0.2 m" } ],
+                  "ends": { "source": { "level": "0.3 m" }, "delivery": { "level": "0 m" } } }
+                """);
+        assertEquals(0, run("solve", p.toString()), err::toString);
+        assertTrue(out.toString().contains("Static head:      0 m\n"), out.toString());
+    }
+
     @Test
     void badProjectExitsTwoWithOneLine() throws Exception {
         Files.writeString(project, Files.readString(project).replace("\"6 m\"", "\"-6 m\""));

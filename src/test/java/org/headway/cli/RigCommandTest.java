@@ -85,6 +85,30 @@ class RigCommandTest {
         assertTrue(lines.stream().anyMatch(l -> l.startsWith("# effective roughness: ε = ")), run.out());
     }
 
+    /**
+     * The CSV gives back the flow, pressure drop and temperature exactly as the data file wrote
+     * them (the input file itself is the reference): converting °C → K → °C must not print binary
+     * noise such as 18.00999999999999.
+     */
+    @Test
+    void csvEchoesTheMeasuredValuesWithoutConversionNoise() throws IOException {
+        CliRun run = CliRun.of("rig", rig.toString(), "--format", "csv");
+        assertEquals(0, run.exitCode(), run.err());
+        List<String> in = Files.readAllLines(dir.resolve("demo-rig-points.csv")).stream()
+                .filter(l -> !l.startsWith("#") && !l.startsWith("flow"))
+                .toList();
+        List<String> out = run.out().lines().filter(l -> l.matches("\\d+,.*")).toList();
+        assertEquals(in.size(), out.size());
+        for (int i = 0; i < in.size(); i++) {
+            String[] given = in.get(i).split(",");
+            String[] echoed = out.get(i).split(",");
+            for (int c = 0; c < 3; c++) {
+                assertEquals(Double.parseDouble(given[c]), Double.parseDouble(echoed[c + 1]), 0.0, out.get(i));
+                assertTrue(echoed[c + 1].length() <= given[c].length() + 2, out.get(i));
+            }
+        }
+    }
+
     @Test
     void longTablesAreCappedInTextButNotInCsv() throws IOException {
         StringBuilder csv = new StringBuilder("flow [L/s],dp [kPa]\n");

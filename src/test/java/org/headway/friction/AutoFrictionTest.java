@@ -35,6 +35,34 @@ class AutoFrictionTest {
         assertEquals("colebrook", result.method());
     }
 
+    /**
+     * The name says where the blend runs: Re 2300 to 4000, the regime limits of common practice (no
+     * source), written here as numbers rather than read from the code, so that a name cut off
+     * before its limits ("…straight-line blend between)") fails.
+     */
+    @Test
+    void displayNameStatesTheBlendLimits() {
+        String name = auto.displayName();
+        assertTrue(name.endsWith("straight-line blend between Re 2300 and 4000)"), name);
+        // the limits it names are where the method changes: laminar just below, Colebrook–White at 4000
+        assertEquals("laminar", auto.evaluate(2299.0, 1e-4).method());
+        assertEquals(
+                AutoFriction.TRANSITIONAL_METHOD, auto.evaluate(2301.0, 1e-4).method());
+        assertEquals("colebrook", auto.evaluate(4000.0, 1e-4).method());
+    }
+
+    /** No method's name stops on a word that needs a continuation, and its brackets close. */
+    @Test
+    void noDisplayNameIsCutOff() {
+        for (FrictionCorrelation f : FrictionMethods.all()) {
+            String name = f.displayName();
+            long open = name.chars().filter(c -> c == '(').count();
+            long close = name.chars().filter(c -> c == ')').count();
+            assertEquals(open, close, name);
+            assertTrue(!name.matches(".*\\b(between|and|to|from|with|of)\\)?$"), name);
+        }
+    }
+
     @Test
     void continuousAtBothLimits() {
         for (double rr : new double[] {0, 1e-4, 0.01, 0.05}) {

@@ -20,6 +20,7 @@ import org.headway.caution.InputException;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvFileSource;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 
 class CatalogBundledTest {
@@ -67,6 +68,68 @@ class CatalogBundledTest {
         for (Material m : catalog.materials()) {
             assertTrue(m.roughnessLow() <= m.roughness() && m.roughness() <= m.roughnessHigh(), m.id());
             assertFalse(m.source().isBlank(), m.id());
+        }
+    }
+
+    /**
+     * Darby's 90° elbow rows: each row's description names the bend radius of the coefficients it
+     * carries. SOURCE: Darby, R., Chemical Engineering Fluid Mechanics, 2nd ed. (2001), 3-K table
+     * (Table 7-3, table number from memory), 90° elbows, from memory: r/D = 1 threaded 800, 0.14,
+     * 4.0; r/D = 1 flanged/welded 800, 0.091, 4.0; long radius r/D = 1.5 800, 0.071, 4.2;
+     * flanged/welded bend r/D = 2 800, 0.056, 3.9.
+     */
+    @ParameterizedTest
+    @CsvSource({
+        "darby-elbow-90-standard-threaded, r/D = 1, 800, 0.14, 4.0",
+        "darby-elbow-90-standard-flanged, r/D = 1, 800, 0.091, 4.0",
+        "darby-elbow-90-long-radius, r/D = 1.5, 800, 0.071, 4.2",
+        "darby-elbow-90-bend-r2, r/D = 2, 800, 0.056, 3.9"
+    })
+    void darbyNinetyDegreeElbowsCarryTheCoefficientsOfTheirRadius(
+            String id, String radius, double k1, double ki, double kd) {
+        ThreeK elbow = (ThreeK) catalog.fitting(id);
+        assertTrue(elbow.description().contains("(" + radius + ")"), elbow.description());
+        assertEquals(k1, elbow.laminarCoefficient(), 0.0, id);
+        assertEquals(ki, elbow.turbulentCoefficient(), 0.0, id);
+        assertEquals(kd, elbow.sizeCoefficient(), 0.0, id);
+    }
+
+    /**
+     * The nominal diameter Darby's 3-K size term takes. SOURCE: NPS is the size in inches and DN the
+     * size in millimetres (ISO 6708 for DN; ASME B36.10M for NPS; from memory); NPS 1/2 has OD 21.3
+     * mm, copper tube 1/2 has OD 5/8 in (ASTM B88, from memory).
+     */
+    @ParameterizedTest(name = "{0} with OD {1} mm is {2} mm nominal")
+    @CsvSource({
+        "1/2,     21.3,   12.7",
+        "1-1/2,   48.3,   38.1",
+        "1 1/2,   48.3,   38.1",
+        "2,       60.3,   50.8",
+        "24,      610,    609.6",
+        "DN 50,   60.3,   50",
+        "dn15,    21.3,   15",
+        "50,      60.3,   50",
+        "1/2,     15.875, 12.7"
+    })
+    void nominalSizesReadAsInchesOrDn(String nominal, double outsideMillimetres, double expectedMillimetres) {
+        PipeSize size = new PipeSize("t", nominal, "40", outsideMillimetres * MM, 0.002, 0.01, "test");
+        assertEquals(expectedMillimetres * MM, size.nominalDiameter().getAsDouble(), 1e-12);
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"large", "", "80", "1-1"})
+    void nominalSizeWithNoPlausibleReadingIsUnknown(String nominal) {
+        // "80" beside an OD of 21.3 mm is neither 80 in nor DN 80
+        PipeSize size = new PipeSize("t", nominal, "40", 21.3 * MM, 0.002, 0.0173, "test");
+        assertTrue(size.nominalDiameter().isEmpty(), nominal);
+    }
+
+    @Test
+    void everyBundledSizeHasANominalDiameter() {
+        for (String table : catalog.tables()) {
+            for (PipeSize size : catalog.sizes(table, null)) {
+                assertTrue(size.nominalDiameter().isPresent(), table + " " + size.nominal());
+            }
         }
     }
 

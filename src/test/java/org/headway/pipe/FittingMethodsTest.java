@@ -71,6 +71,28 @@ class FittingMethodsTest {
     }
 
     @Test
+    void threeKBoundToANominalSizeUsesItInsteadOfTheBore() {
+        // Darby (2001): Dn is the nominal diameter in inches (from memory). NPS 2, bore 2.067 in:
+        // 800/1e5 + 0.091 (1 + 4/2^0.3), computed here by hand from the printed formula
+        ThreeK bound = darbyFlangedElbow.atNominalSize(java.util.OptionalDouble.of(2 * INCH));
+        double expected = 800 / 1e5 + 0.091 * (1 + 4.0 / Math.pow(2.0, 0.3));
+        assertEquals(expected, bound.lossCoefficient(1e5, 2.067 * INCH), ROUNDING);
+        assertEquals(List.of(), bound.cautions(1e5, 2.067 * INCH));
+        // rebinding to unknown goes back to the bore, with the note
+        ThreeK unbound = bound.atNominalSize(java.util.OptionalDouble.empty());
+        assertEquals(darbyFlangedElbow.lossCoefficient(1e5, 2.067 * INCH), unbound.lossCoefficient(1e5, 2.067 * INCH));
+        assertEquals(
+                List.of(ThreeK.NOMINAL_SIZE_UNKNOWN),
+                unbound.cautions(1e5, 2.067 * INCH).stream().map(Caution::code).toList());
+        // a nominal size outside the assumed span is flagged by its nominal value
+        Caution big = darbyFlangedElbow
+                .atNominalSize(java.util.OptionalDouble.of(36 * INCH))
+                .cautions(1e5, 35 * INCH)
+                .get(0);
+        assertTrue(big.message().contains("nominal size 36.00 in"), big.message());
+    }
+
+    @Test
     void bothMethodsFallWithSizeInTurbulentFlow() {
         double small = hooperFlangedElbow.lossCoefficient(1e6, 1 * INCH);
         double large = hooperFlangedElbow.lossCoefficient(1e6, 12 * INCH);

@@ -379,7 +379,12 @@ public final class NetworkSizing {
         double low = Math.min(pipe.roughnessLow(), pipe.roughness());
         double high = Math.min(pipe.roughnessHigh(), size.innerDiameter() * 0.999);
         return pipe.withPipe(
-                size.innerDiameter(), Math.min(pipe.roughness(), high), Math.min(low, high), high, size.label());
+                size.innerDiameter(),
+                Math.min(pipe.roughness(), high),
+                Math.min(low, high),
+                high,
+                size.label(),
+                size.nominalDiameter());
     }
 
     private static Network apply(
