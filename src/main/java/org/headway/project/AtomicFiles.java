@@ -276,7 +276,7 @@ public final class AtomicFiles {
         }
         String m = e.getMessage();
         if (m != null && m.contains("No space left")) {
-            return "the disk is full";
+            return "the disk is full (" + m + ")";
         }
         return m == null ? e.getClass().getSimpleName() : m;
     }
