@@ -65,6 +65,9 @@ public final class SheetCommand implements Callable<Integer> {
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
         org.headway.project.Project loaded = ProjectFile.load(project);
+        if (loaded.isNetwork()) {
+            return networkSheet(loaded, catalog, system);
+        }
         ResolvedProject resolved;
         try {
             resolved = ProjectResolver.resolve(
@@ -105,6 +108,62 @@ public final class SheetCommand implements Callable<Integer> {
         o.println("input hash " + sheet.inputHash());
         o.flush();
         return HeadwayCommand.EXIT_OK;
+    }
+
+    /** The network sheet: PDF, and the workbook and CSV (node and link tables) when asked. */
+    private int networkSheet(org.headway.project.Project loaded, Catalog catalog, UnitSystem system) {
+        org.headway.network.NetworkStudy study;
+        try {
+            study = ProjectResolver.resolveNetworkStudy(
+                    loaded, catalog, project.toAbsolutePath().getParent());
+        } catch (InputException e) {
+            throw new InputException(fileName(project), e.getMessage(), e);
+        }
+        Path pdf = pdfPath();
+        for (Path p : outputs(pdf)) {
+            if (!force && p.toFile().exists()) {
+                throw new InputException(p.toString(), "already exists; use --force to replace it");
+            }
+        }
+        org.headway.report.NetworkSheet sheet =
+                org.headway.report.NetworkSheet.of(loaded, study, HeadwayCommand.version());
+        java.util.List<org.headway.project.AtomicFiles.Entry> files = new java.util.ArrayList<>();
+        files.add(new org.headway.project.AtomicFiles.Entry(
+                pdf, org.headway.report.NetworkPdfWriter.content(sheet, system)));
+        if (workbook) {
+            files.add(new org.headway.project.AtomicFiles.Entry(
+                    sibling(pdf, ".xlsx"), org.headway.report.NetworkWorkbookWriter.content(sheet)));
+        }
+        if (csv) {
+            org.headway.network.NetworkResult base = sheet.result().base().result();
+            files.add(new org.headway.project.AtomicFiles.Entry(sibling(pdf, ".csv"), out -> {
+                java.io.Writer w = new java.io.OutputStreamWriter(out, java.nio.charset.StandardCharsets.UTF_8);
+                NetworkOutput.nodesCsv(base, w);
+                w.append('\n');
+                NetworkOutput.linksCsv(base, w);
+                w.flush();
+            }));
+        }
+        org.headway.project.AtomicFiles.writeAll(files, force);
+        PrintWriter o = spec.commandLine().getOut();
+        for (org.headway.project.AtomicFiles.Entry f : files) {
+            o.println("wrote " + f.target());
+        }
+        o.println("input hash " + sheet.inputHash());
+        o.flush();
+        return sheet.result().converged() ? HeadwayCommand.EXIT_OK : HeadwayCommand.EXIT_FAILED;
+    }
+
+    private Path pdfPath() {
+        Path pdf = out != null ? out : Path.of("reports", stem(project) + ".pdf");
+        if (pdf.getFileName() == null
+                || !pdf.getFileName()
+                        .toString()
+                        .toLowerCase(java.util.Locale.ROOT)
+                        .endsWith(".pdf")) {
+            throw new InputException("--out", "the sheet is a PDF; give a name ending in .pdf, got " + pdf);
+        }
+        return pdf;
     }
 
     private java.util.List<Path> outputs(Path pdf) {
