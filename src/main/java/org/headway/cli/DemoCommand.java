@@ -57,6 +57,9 @@ public final class DemoCommand implements Callable<Integer> {
 
     static final String DEMO_LINKS = "/fluids-data/examples/network/hillcrest-links.csv";
 
+    /** Classpath location of the demo network's demand cases. */
+    static final String DEMO_CASES = "/fluids-data/examples/network/hillcrest-cases.csv";
+
     /** Classpath location of the demo rig; its data file sits beside it. */
     static final String DEMO_RIG = "/fluids-data/examples/demo-rig.json";
 
@@ -147,12 +150,27 @@ public final class DemoCommand implements Callable<Integer> {
                 resource(DEMO_LINKS),
                 Catalog.bundled(),
                 false);
-        var network = ProjectResolver.resolveNetwork(
-                Project.network("Hillcrest village main (INVENTED DEMO DATA)", "water", "10 degC", "auto", spec),
-                Catalog.bundled(),
-                Path.of("."));
-        NetworkOutput.text(
-                out, network, org.headway.network.NetworkSolver.standard().solve(network), UnitSystem.SI);
+        out.println("   with its demand cases (" + DEMO_CASES.substring(DEMO_CASES.lastIndexOf('/') + 1)
+                + "), a 250 kPa minimum pressure and the fire flow at J7 with 140 kPa residual everywhere");
+        spec = spec.withDemandCases(
+                org.headway.project.LineList.parseCases(DEMO_CASES.substring(1), resource(DEMO_CASES), spec));
+        Project networkProject = Project.network(
+                        "Hillcrest village main (INVENTED DEMO DATA)", "water", "10 degC", "auto", spec)
+                .withPressureLimits(new Project.PressureLimitsSpec("250 kPa", ""));
+        org.headway.network.NetworkStudy study =
+                ProjectResolver.resolveNetworkStudy(networkProject, Catalog.bundled(), Path.of("."));
+        org.headway.network.NetworkStudy.Result studied = study.solve(org.headway.network.NetworkSolver.standard());
+        NetworkDesign.Results designed = NetworkDesign.of(false, null, null, "J7", "140 kPa")
+                .run(studied.base().network());
+        NetworkStudyOutput.text(out, study, studied, UnitSystem.SI, designed);
+        org.headway.report.NetworkSheet networkSheet =
+                org.headway.report.NetworkSheet.of(networkProject, study, HeadwayCommand.version());
+        Path networkPdf = reports.resolve("demo-hillcrest-main.pdf");
+        org.headway.report.NetworkPdfWriter.write(networkSheet, networkPdf, true, UnitSystem.SI);
+        Path networkXlsx = reports.resolve("demo-hillcrest-main.xlsx");
+        org.headway.report.NetworkWorkbookWriter.write(networkSheet, networkXlsx, true);
+        out.println("   wrote " + networkPdf);
+        out.println("   wrote " + networkXlsx);
         out.println();
         out.println("6. Rig data: " + DEMO_RIG.substring(1) + " (invented measurements)");
         RigFile rig = RigFile.loadResource(DEMO_RIG);

@@ -238,5 +238,10 @@ class PipeRunCommandsTest {
         assertTrue(Files.size(reports.resolve("demo-orchard-booster.pdf")) > 10_000);
         assertTrue(Files.exists(reports.resolve("demo-orchard-booster.xlsx")));
         assertTrue(Files.exists(reports.resolve("demo-orchard-booster.csv")));
+        // The village main's network sheet, with its cases and a fire flow in the text.
+        assertTrue(Files.size(reports.resolve("demo-hillcrest-main.pdf")) > 10_000);
+        assertTrue(Files.exists(reports.resolve("demo-hillcrest-main.xlsx")));
+        assertTrue(out.toString().contains("Demand cases:"));
+        assertTrue(out.toString().contains("fire flow"));
     }
 }
