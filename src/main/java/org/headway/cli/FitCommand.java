@@ -94,6 +94,12 @@ public final class FitCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
     String format;
 
+    /** Largest magnitude of a data value accepted: its square and sums of squares stay finite. */
+    static final double MAX_MAGNITUDE = 1e100;
+
+    /** Smallest non-zero magnitude accepted: its square and products stay normal doubles. */
+    static final double MIN_MAGNITUDE = 1e-100;
+
     @Option(names = "--save", paramLabel = "FIT.json", description = "save the (best) fit as a correlation file")
     Path save;
 
@@ -351,13 +357,24 @@ public final class FitCommand implements Callable<Integer> {
                             continue;
                         }
                         String cell = record.get(c);
+                        double value;
                         try {
-                            values.get(c)[rows] = org.headway.units.Decimals.parseDecimal(cell);
+                            value = org.headway.units.Decimals.parseDecimal(cell);
                         } catch (NumberFormatException e) {
                             throw new InputException(
                                     file + " line " + line + ", column " + names.get(c),
                                     "'" + cell + "' is not a number");
                         }
+                        double magnitude = Math.abs(value);
+                        if (magnitude > MAX_MAGNITUDE || (magnitude > 0 && magnitude < MIN_MAGNITUDE)) {
+                            // Squares of such numbers over- or underflow a double: sums of squares, the
+                            // residual variance and the standard errors would come out as 0, NaN or ∞.
+                            throw new InputException(
+                                    file + " line " + line + ", column " + names.get(c),
+                                    "'" + cell + "' is beyond the magnitudes a fit handles (1e-100 to 1e100 in"
+                                            + " size); give the column in another unit, or rescale it so its values lie nearer 1");
+                        }
+                        values.get(c)[rows] = value;
                     }
                     rows++;
                 }
