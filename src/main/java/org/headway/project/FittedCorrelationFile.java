@@ -135,11 +135,9 @@ public final class FittedCorrelationFile {
             root = MAPPER.readTree(text);
         } catch (JsonProcessingException e) {
             // A limit exceeded (nesting, string length) may come without a location.
-            String where = e.getLocation() == null
-                    ? label
-                    : label + " line " + e.getLocation().getLineNr() + ", column "
-                            + e.getLocation().getColumnNr();
-            throw new InputException(where, "not valid JSON: " + e.getOriginalMessage());
+            String at = ProjectFile.location(e, text);
+            String where = at.isEmpty() ? label : label + " " + at;
+            throw new InputException(where, "not valid JSON: " + ProjectFile.problem(e));
         }
         if (root == null || root.isMissingNode()) {
             throw new InputException(label, "is empty; expected a fitted-correlation JSON object");

@@ -62,6 +62,60 @@ public final class ProjectFile {
         return mapper;
     }
 
+    /**
+     * Where a JSON error is: line and column from the parser, or, for a limit the parser reports
+     * without a place (nesting too deep), the place found by scanning the text.
+     */
+    static String location(com.fasterxml.jackson.core.JsonProcessingException e, String text) {
+        if (e.getLocation() != null && e.getLocation().getLineNr() > 0) {
+            return "line " + e.getLocation().getLineNr() + ", column "
+                    + e.getLocation().getColumnNr();
+        }
+        int depth = 0;
+        int line = 1;
+        int column = 0;
+        boolean inString = false;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            column++;
+            if (c == '\n') {
+                line++;
+                column = 0;
+            } else if (inString) {
+                if (c == '\\') {
+                    i++;
+                    column++;
+                } else if (c == '"') {
+                    inString = false;
+                }
+            } else if (c == '"') {
+                inString = true;
+            } else if (c == '{' || c == '[') {
+                if (++depth > MAX_NESTING_DEPTH) {
+                    return "line " + line + ", column " + column;
+                }
+            } else if (c == '}' || c == ']') {
+                depth--;
+            }
+        }
+        return "";
+    }
+
+    /** The parser's message in words, without the library's names for its limits. */
+    static String problem(com.fasterxml.jackson.core.JsonProcessingException e) {
+        String m = e.getOriginalMessage();
+        if (m != null && m.contains("nesting depth")) {
+            return "nested deeper than " + MAX_NESTING_DEPTH + " levels of objects and arrays";
+        }
+        if (m != null && m.contains("String value length")) {
+            return "a text value is longer than " + MAX_STRING_LENGTH + " characters";
+        }
+        if (m != null && m.contains("Number value length")) {
+            return "a number is written with more than 100 characters";
+        }
+        return m;
+    }
+
     /** Shared mapper for other JSON files of ours (same limits). */
     public static ObjectMapper mapper() {
         return MAPPER;
@@ -99,15 +153,11 @@ public final class ProjectFile {
     /** Parses project JSON text (no file name in messages). */
     public static Project parse(String json) {
         JsonNode root;
+        String text = json.startsWith("\uFEFF") ? json.substring(1) : json;
         try {
-            String text = json.startsWith("\uFEFF") ? json.substring(1) : json;
             root = MAPPER.readTree(text);
         } catch (JsonProcessingException e) {
-            String where = e.getLocation() == null
-                    ? ""
-                    : "line " + e.getLocation().getLineNr() + ", column "
-                            + e.getLocation().getColumnNr();
-            throw new InputException(where, "not valid JSON: " + e.getOriginalMessage());
+            throw new InputException(location(e, text), "not valid JSON: " + problem(e));
         }
         if (root == null || !root.isObject()) {
             throw new InputException("$", "a project file must be a JSON object");

@@ -196,10 +196,9 @@ public final class RigFile {
         try {
             root = MAPPER.readTree(text);
         } catch (JsonProcessingException e) {
+            String at = ProjectFile.location(e, text);
             throw new InputException(
-                    where + " line " + e.getLocation().getLineNr() + ", column "
-                            + e.getLocation().getColumnNr(),
-                    "not valid JSON: " + e.getOriginalMessage());
+                    where + (at.isEmpty() ? "" : " " + at), "not valid JSON: " + ProjectFile.problem(e));
         }
         try {
             return fromJson(root, name, resolver);

@@ -26,24 +26,20 @@ class JsonLimitsTest {
     void deepNestingIsRefusedWithTheLimit() {
         String deep = "{\"format\": " + "[".repeat(500) + "]".repeat(500) + "}";
         InputException fitted = assertThrows(InputException.class, () -> FittedCorrelationFile.parse(deep, "fit.json"));
-        assertTrue(
-                fitted.getMessage()
-                        .startsWith("fit.json: not valid JSON: Document nesting depth (65) exceeds"
-                                + " the maximum allowed (64"),
+        // The 64th bracket after the root object (column 11 + 64 on line 1) is level 65.
+        assertEquals(
+                "fit.json line 1, column 75: not valid JSON: nested deeper than 64 levels of objects and arrays",
                 fitted.getMessage());
         InputException project = assertThrows(InputException.class, () -> ProjectFile.parse(deep));
-        assertTrue(
-                project.getMessage().contains("nesting depth (65) exceeds the maximum allowed (64"),
-                project.getMessage());
+        assertTrue(project.getMessage().contains("line 1, column 75"), project.getMessage());
+        assertTrue(project.getMessage().contains("nested deeper than 64 levels"), project.getMessage());
     }
 
     @Test
     void aLongStringIsRefusedWithTheLimit() {
         String json = "{\"format\": \"" + "x".repeat(ProjectFile.MAX_STRING_LENGTH + 1) + "\"}";
         InputException e = assertThrows(InputException.class, () -> FittedCorrelationFile.parse(json, "fit.json"));
-        assertTrue(
-                e.getMessage().contains("String value length (100001) exceeds the maximum allowed (100000"),
-                e.getMessage());
+        assertTrue(e.getMessage().contains("a text value is longer than 100000 characters"), e.getMessage());
     }
 
     @Test
