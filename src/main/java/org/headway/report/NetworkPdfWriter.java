@@ -151,11 +151,8 @@ public final class NetworkPdfWriter {
         float schematicHeight = NetworkSchematic.preferredHeight(net, SCHEMATIC_WIDTH);
         pdf.heading("Schematic", 12, schematicHeight * pdf.width() / SCHEMATIC_WIDTH);
         PdfBoxGraphics2D g = new PdfBoxGraphics2D(pdf.doc, SCHEMATIC_WIDTH, schematicHeight);
-        try {
-            NetworkSchematic.draw(g, net, r, base.circuit(), u, SCHEMATIC_WIDTH, schematicHeight);
-        } finally {
-            g.dispose();
-        }
+        PdfSheetWriter.drawThenDispose(
+                g, () -> NetworkSchematic.draw(g, net, r, base.circuit(), u, SCHEMATIC_WIDTH, schematicHeight));
         pdf.form(g.getXFormObject(), SCHEMATIC_WIDTH, schematicHeight);
         pdf.paragraph(
                 net.nodes().stream().allMatch(n -> n.x().isPresent() && n.y().isPresent())

@@ -392,13 +392,28 @@ public final class PdfSheetWriter {
 
     private static void chart(PdfLayout pdf, JFreeChart chart) throws IOException {
         PdfBoxGraphics2D g = new PdfBoxGraphics2D(pdf.doc, CHART_WIDTH, CHART_HEIGHT);
-        try {
-            chart.draw(g, new Rectangle2D.Double(0, 0, CHART_WIDTH, CHART_HEIGHT));
-        } finally {
-            g.dispose();
-        }
+        drawThenDispose(g, () -> chart.draw(g, new Rectangle2D.Double(0, 0, CHART_WIDTH, CHART_HEIGHT)));
         PDFormXObject form = g.getXFormObject();
         pdf.form(form, CHART_WIDTH, CHART_HEIGHT);
+    }
+
+    /**
+     * Draws, then disposes of the graphics. If drawing fails (out of memory under a tight heap, say),
+     * a failure of the disposal itself — PDFBox's "SaveCounter should be 0" when the drawing stopped
+     * half-way — is attached to the real error instead of replacing it.
+     */
+    static void drawThenDispose(PdfBoxGraphics2D g, Runnable draw) {
+        try {
+            draw.run();
+        } catch (RuntimeException | Error e) {
+            try {
+                g.dispose();
+            } catch (RuntimeException suppressed) {
+                e.addSuppressed(suppressed);
+            }
+            throw e;
+        }
+        g.dispose();
     }
 
     private static String[] row(String a, String b, String c) {
