@@ -256,7 +256,24 @@ final class PdfLayout implements AutoCloseable {
         out.endText();
     }
 
-    /** Replaces characters the font cannot draw, so a stray symbol never aborts a sheet. */
+    /**
+     * A character the sheet cannot print faithfully: refused, naming the character and the text it is
+     * in, rather than printed as "?" or mirrored. Nothing is written (sheets are written whole or not).
+     */
+    private static org.headway.caution.InputException undrawable(String text, int cp, String why) {
+        String shown = text.length() > 60 ? text.substring(0, 57) + "…" : text;
+        return new org.headway.caution.InputException(
+                "sheet text \"" + shown + "\"",
+                String.format(
+                        java.util.Locale.ROOT,
+                        "cannot print '%s' (U+%04X): %s; write that name or note in Latin, Greek or Cyrillic"
+                                + " letters, digits and common symbols",
+                        new String(Character.toChars(cp)),
+                        cp,
+                        why));
+    }
+
+    /** The text as drawn: tabs as spaces, control characters dropped; undrawable characters refused. */
     private static String printable(String text, PDFont font) {
         StringBuilder b = new StringBuilder(text.length());
         text.codePoints().forEach(cp -> {
@@ -268,11 +285,28 @@ final class PdfLayout implements AutoCloseable {
             if (Character.isISOControl(cp)) {
                 return;
             }
+            byte dir = Character.getDirectionality(cp);
+            if (dir == Character.DIRECTIONALITY_RIGHT_TO_LEFT || dir == Character.DIRECTIONALITY_RIGHT_TO_LEFT_ARABIC) {
+                throw undrawable(
+                        text,
+                        cp,
+                        "right-to-left text is not laid out by the sheet (it would print mirrored"
+                                + " and, for Arabic, unjoined)");
+            }
             try {
-                font.encode(ch);
+                byte[] code = font.encode(ch);
+                // The embedded fonts are encoded Identity-H: the code is the glyph id, and 0 is .notdef,
+                // the empty box a font draws for a character it lacks.
+                boolean notdef = true;
+                for (byte x : code) {
+                    notdef &= x == 0;
+                }
+                if (notdef) {
+                    throw new IllegalArgumentException("no glyph");
+                }
                 b.append(ch);
             } catch (IllegalArgumentException | IOException e) {
-                b.append('?');
+                throw undrawable(text, cp, "the sheet's embedded font (DejaVu Sans) has no glyph for it");
             }
         });
         return b.toString();
@@ -285,6 +319,8 @@ final class PdfLayout implements AutoCloseable {
      */
     List<String> wrap(String text, PDFont font, float size, float maxWidth) throws IOException {
         List<String> lines = new ArrayList<>();
+        // Refuses an undrawable character naming the whole text, not just the character.
+        printable(text == null ? "" : text, font);
         float max = maxWidth * 1000f / size;
         float space = charWidth(font, ' ');
         for (String para : (text == null ? "" : text).split("\n", -1)) {
