@@ -78,6 +78,23 @@ public final class ProjectResolver {
     private final Path baseFolder;
     private final List<String> problems = new ArrayList<>();
 
+    /** The place of each problem in {@link #problems}, in the same order. */
+    private final List<String> places = new ArrayList<>();
+
+    /**
+     * The collected problems as one error: a single one keeps its place; several are listed, each
+     * line with its own.
+     */
+    private InputException failure() {
+        if (problems.size() == 1) {
+            String where = places.get(0);
+            String line = problems.get(0);
+            return new InputException(where, where.isEmpty() ? line : line.substring(where.length() + 2));
+        }
+        // Several problems: each line names its own place; the list as a whole has none.
+        return new InputException("", problems.size() + " problems:\n  " + String.join("\n  ", problems));
+    }
+
     private ProjectResolver(Catalog catalog, Path baseFolder) {
         this.catalog = catalog;
         this.baseFolder = baseFolder;
@@ -146,10 +163,7 @@ public final class ProjectResolver {
             }
         }
         if (!problems.isEmpty()) {
-            String message = problems.size() == 1
-                    ? problems.get(0)
-                    : problems.size() + " problems:\n  " + String.join("\n  ", problems);
-            throw new InputException("", message);
+            throw failure();
         }
         return new org.headway.network.NetworkStudy(net, cases, limits, margin);
     }
@@ -230,10 +244,7 @@ public final class ProjectResolver {
             }
         }
         if (!problems.isEmpty()) {
-            String message = problems.size() == 1
-                    ? problems.get(0)
-                    : problems.size() + " problems:\n  " + String.join("\n  ", problems);
-            throw new InputException("", message);
+            throw failure();
         }
         return new org.headway.network.Network(
                 p.title(), new org.headway.system.FlowContext(fluid, friction), nodes, links, site);
@@ -357,10 +368,7 @@ public final class ProjectResolver {
             curve = Optional.ofNullable(attempt("curve", () -> curve(p.curve().get(), knownDensity)));
         }
         if (!problems.isEmpty()) {
-            String message = problems.size() == 1
-                    ? problems.get(0)
-                    : problems.size() + " problems:\n  " + String.join("\n  ", problems);
-            throw new InputException("", message);
+            throw failure();
         }
         PipeRun run = attempt(
                 "",
@@ -377,7 +385,7 @@ public final class ProjectResolver {
                         limits,
                         pressureLimits));
         if (!problems.isEmpty()) {
-            throw new InputException("", problems.get(0));
+            throw failure();
         }
         if (density <= 0) {
             throw new IllegalStateException("density must be positive");
@@ -391,6 +399,7 @@ public final class ProjectResolver {
         } catch (InputException e) {
             String where = path.isEmpty() ? e.where() : (e.where().isEmpty() ? path : joinPath(path, e.where()));
             problems.add(where.isEmpty() ? e.problem() : where + ": " + e.problem());
+            places.add(where);
             return null;
         }
     }

@@ -99,9 +99,17 @@ class ProjectFuzzTest {
             } catch (InputException e) {
                 rejected++;
                 assertFalse(e.getMessage() == null || e.getMessage().isBlank(), "empty message, case " + i);
-                assertTrue(
-                        !e.where().isEmpty() || e.getMessage().contains(":"),
-                        "case " + i + " (seed " + seed + "): message names no place: " + e.getMessage());
+                // A place: the key path or the line and column, never only a colon inside the prose; a
+                // list of several problems names one on every line.
+                boolean located = !e.where().isBlank();
+                if (!located && e.problem().matches("(?s)\\d+ problems:\n.*")) {
+                    located = e.problem()
+                            .lines()
+                            .skip(1)
+                            .allMatch(l -> l.strip().matches("[A-Za-z_$][^ :]*(\\[[0-9]+\\])?[^:]*: .*"));
+                }
+                assertTrue(located, "case " + i + " (seed " + seed + "): message names no place: " + e.getMessage());
+                assertFalse(e.problem().isBlank(), "case " + i + ": no problem stated");
             } catch (RuntimeException | StackOverflowError e) {
                 fail("case " + i + " (seed " + seed + ") threw " + e + " for input:\n" + abbreviate(input), e);
             }
