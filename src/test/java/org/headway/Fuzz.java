@@ -198,4 +198,23 @@ public final class Fuzz {
     public static String abbreviate(String s) {
         return s.length() <= 600 ? s : s.substring(0, 600) + "… (" + s.length() + " chars)";
     }
+
+    /**
+     * Records a fuzz run's counts in {@code target/fuzz-summaries.txt} (one line per run) instead of
+     * printing them to standard output, so that the test log stays quiet and the counts stay readable.
+     */
+    public static synchronized void summary(String line) {
+        try {
+            java.nio.file.Path file = java.nio.file.Path.of("target", "fuzz-summaries.txt");
+            java.nio.file.Files.createDirectories(file.getParent());
+            java.nio.file.Files.writeString(
+                    file,
+                    line + System.lineSeparator(),
+                    java.nio.charset.StandardCharsets.UTF_8,
+                    java.nio.file.StandardOpenOption.CREATE,
+                    java.nio.file.StandardOpenOption.APPEND);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
 }

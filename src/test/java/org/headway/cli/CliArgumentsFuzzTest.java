@@ -224,7 +224,7 @@ class CliArgumentsFuzzTest {
             }
             exits[code]++;
         }
-        System.out.println("CLI arguments fuzz: " + INPUTS + " argument vectors, " + exits[2]
+        org.headway.Fuzz.summary("CLI arguments fuzz: " + INPUTS + " argument vectors, " + exits[2]
                 + " rejected (exit 2, one located line), " + exits[1] + " exit 1, " + exits[0] + " exit 0");
         assertTrue(exits[0] > 0 && exits[2] > 0, "both outcomes must be exercised");
     }

@@ -79,7 +79,7 @@ class FrictionBatchFuzzTest {
                 checkOutput(text, Files.readString(output, StandardCharsets.UTF_8), code, e, m);
             }
         }
-        System.out.println("friction batch CSV fuzz: " + INPUTS + " files, " + exits[2]
+        org.headway.Fuzz.summary("friction batch CSV fuzz: " + INPUTS + " files, " + exits[2]
                 + " rejected whole (exit 2) with a located error, " + exits[1] + " with some rows refused (exit 1), "
                 + exits[0] + " clean (exit 0)");
         assertTrue(exits[0] > 0 && exits[1] > 0 && exits[2] > 0, "all outcomes must be exercised");

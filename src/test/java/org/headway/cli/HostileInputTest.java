@@ -37,9 +37,12 @@ class HostileInputTest {
         try (Stream<String> lines = Files.lines(dir.resolve("out-" + MILLION + ".csv"))) {
             assertEquals(MILLION + 1, lines.count(), "header plus one line per row");
         }
-        System.out.printf(
-                "friction batch streaming (%s): peak heap %.1f MB for 10,000 rows, %.1f MB for 1,000,000 rows%n",
-                CHILD_HEAP, small / 1048576.0, large / 1048576.0);
+        org.headway.Fuzz.summary(String.format(
+                java.util.Locale.ROOT,
+                "friction batch streaming (%s): peak heap %.1f MB for 10,000 rows, %.1f MB for 1,000,000 rows",
+                CHILD_HEAP,
+                small / 1048576.0,
+                large / 1048576.0));
     }
 
     private static long runChild(Path dir, long rows) throws Exception {

@@ -112,9 +112,10 @@ class ExpressionFuzzTest {
             long ms = (System.nanoTime() - start) / 1_000_000;
             assertTrue(ms < PER_INPUT_BUDGET_MS, "case " + i + " (seed " + SEED + ") took " + ms + " ms");
         }
-        System.out.println("expression fuzz: " + INPUTS + " texts, " + rejected + " rejected with a located error, "
-                + compiled + " compiled and evaluated (" + refusedValues
-                + " friction-factor values refused as non-finite or non-positive)");
+        org.headway.Fuzz.summary(
+                "expression fuzz: " + INPUTS + " texts, " + rejected + " rejected with a located error, "
+                        + compiled + " compiled and evaluated (" + refusedValues
+                        + " friction-factor values refused as non-finite or non-positive)");
         assertTrue(rejected > 0 && compiled > 0 && evaluated == compiled, "both outcomes must be exercised");
     }
 

@@ -108,8 +108,8 @@ class CatalogFuzzTest {
                 }
             }
         }
-        System.out.println("catalog files fuzz: " + INPUTS + " files, " + rejected + " rejected with a located error, "
-                + loaded + " loaded");
+        org.headway.Fuzz.summary("catalog files fuzz: " + INPUTS + " files, " + rejected
+                + " rejected with a located error, " + loaded + " loaded");
         assertTrue(rejected > 0 && loaded > 0, "both outcomes must be exercised");
     }
 

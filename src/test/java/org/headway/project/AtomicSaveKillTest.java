@@ -63,7 +63,7 @@ class AtomicSaveKillTest {
                 assertTrue(files.anyMatch(p -> p.equals(file)));
             }
         }
-        System.out.println("atomic-save kill test: " + KILLS + " kills during " + saves
+        org.headway.Fuzz.summary("atomic-save kill test: " + KILLS + " kills during " + saves
                 + " saves; after every kill the file loaded whole as the newest completed version");
     }
 }

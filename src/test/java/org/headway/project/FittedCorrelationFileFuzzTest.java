@@ -92,7 +92,7 @@ class FittedCorrelationFileFuzzTest {
             long ms = (System.nanoTime() - start) / 1_000_000;
             assertTrue(ms < PER_INPUT_BUDGET_MS, "case " + i + " (seed " + SEED + ") took " + ms + " ms");
         }
-        System.out.println("fitted-correlation JSON fuzz: " + INPUTS + " files, " + rejected
+        org.headway.Fuzz.summary("fitted-correlation JSON fuzz: " + INPUTS + " files, " + rejected
                 + " rejected with a located error, " + loaded + " loaded");
         assertTrue(rejected > 0 && loaded > 0, "both outcomes must be exercised");
     }

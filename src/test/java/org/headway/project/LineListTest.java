@@ -148,7 +148,7 @@ class LineListTest {
                 throw new AssertionError("case " + i + " threw " + e + "\n" + nodes + "\n" + links, e);
             }
         }
-        System.out.println("line-list fuzz: 10000 inputs, " + solved + " solved, " + refused + " refused");
+        org.headway.Fuzz.summary("line-list fuzz: 10000 inputs, " + solved + " solved, " + refused + " refused");
         assertTrue(solved > 100 && refused > 100, solved + " / " + refused);
     }
 

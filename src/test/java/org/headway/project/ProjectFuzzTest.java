@@ -116,7 +116,7 @@ class ProjectFuzzTest {
             long ms = (System.nanoTime() - start) / 1_000_000;
             assertTrue(ms < PER_INPUT_BUDGET_MS, "case " + i + " took " + ms + " ms");
         }
-        System.out.println("project JSON fuzz of " + base + ": " + INPUTS + " inputs, " + rejected
+        org.headway.Fuzz.summary("project JSON fuzz of " + base + ": " + INPUTS + " inputs, " + rejected
                 + " rejected with a located error, " + solved + " solved");
         assertTrue(solved > 0 && rejected > 0, "the generator must exercise both outcomes");
     }

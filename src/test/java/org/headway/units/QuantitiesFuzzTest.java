@@ -87,7 +87,7 @@ class QuantitiesFuzzTest {
             long ms = (System.nanoTime() - start) / 1_000_000;
             assertTrue(ms < PER_INPUT_BUDGET_MS, "case " + i + " (seed " + SEED + ") took " + ms + " ms");
         }
-        System.out.println("quantity strings fuzz: " + INPUTS + " strings × " + QuantityKind.values().length
+        org.headway.Fuzz.summary("quantity strings fuzz: " + INPUTS + " strings × " + QuantityKind.values().length
                 + " kinds = " + tried + " parses, " + rejected + " rejected with a located error");
         assertTrue(rejected > 0 && rejected < tried, "the generator must exercise both outcomes");
     }
