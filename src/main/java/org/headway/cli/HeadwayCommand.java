@@ -71,7 +71,18 @@ public final class HeadwayCommand implements Runnable {
                 false);
         CommandLine cl = commandLine();
         cl.setOut(out);
-        int code = cl.execute(args);
+        int code;
+        try {
+            code = cl.execute(args);
+        } catch (OutOfMemoryError e) {
+            // Let go of whatever the command held before saying so, then fail cleanly: no stack trace.
+            cl = null;
+            long max = Runtime.getRuntime().maxMemory() >> 20;
+            System.err.println("headway: ran out of memory (the Java heap is limited to " + max + " MB); the input is"
+                    + " too large for this heap: give Java more (e.g. java -Xmx2g -jar headway.jar …) or split the"
+                    + " input");
+            return EXIT_FAILED;
+        }
         out.flush();
         if (out.checkError()) {
             System.err.println("headway: writing to standard output failed (a full disk or a closed pipe?); the"
