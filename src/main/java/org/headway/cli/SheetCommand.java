@@ -45,6 +45,19 @@ public final class SheetCommand implements Callable<Integer> {
     @Option(names = "--csv", description = "Also write the per-segment CSV beside the PDF.")
     boolean csv;
 
+    @Option(
+            names = "--mode",
+            defaultValue = "headloss",
+            description = "headloss (at the design flow, default), flow (at the flow --available-head drives) or size"
+                    + " (at the smallest catalog size meeting the project's limits).")
+    SolveCommand.Mode mode;
+
+    @Option(
+            names = "--available-head",
+            paramLabel = "HEAD",
+            description = "For --mode flow: head a pump adds at fixed head, e.g. \"12 m\" (default 0).")
+    String availableHead;
+
     @Option(names = "--force", description = "Replace existing files.")
     boolean force;
 
@@ -76,7 +89,7 @@ public final class SheetCommand implements Callable<Integer> {
             // Name the project file in front of the JSON path of a problem found while resolving.
             throw new InputException(fileName(project), e.getMessage(), e);
         }
-        HeadLossSheet sheet = HeadLossSheet.of(resolved, HeadwayCommand.version());
+        HeadLossSheet sheet = modeSheet(resolved);
         Path pdf = out != null ? out : Path.of("reports", stem(project) + ".pdf");
         if (pdf.getFileName() == null
                 || !pdf.getFileName()
@@ -108,6 +121,51 @@ public final class SheetCommand implements Callable<Integer> {
         o.println("input hash " + sheet.inputHash());
         o.flush();
         return HeadwayCommand.EXIT_OK;
+    }
+
+    /** The sheet at the design flow, at the flow an available head drives, or at the chosen size. */
+    private HeadLossSheet modeSheet(ResolvedProject resolved) {
+        if (mode == SolveCommand.Mode.headloss) {
+            if (availableHead != null) {
+                throw new InputException("--available-head", "applies to --mode flow");
+            }
+            return HeadLossSheet.of(resolved, HeadwayCommand.version());
+        }
+        org.headway.system.PipeRun run = resolved.run();
+        if (mode == SolveCommand.Mode.flow) {
+            double head = availableHead == null
+                    ? 0
+                    : CliSupport.parse(availableHead, org.headway.units.QuantityKind.HEAD, "--available-head");
+            org.headway.system.FlowSolver.Solution s = org.headway.system.FlowSolver.solve(run, head);
+            if (s.outcome() != org.headway.system.FlowSolver.Outcome.FLOWING) {
+                throw new InputException("--mode flow", "no forward flow: " + s.message());
+            }
+            ResolvedProject atFlow = new ResolvedProject(
+                    resolved.project(),
+                    run.withDesignFlow(s.flow()),
+                    resolved.sizingCandidates(),
+                    resolved.limits(),
+                    resolved.curve());
+            return HeadLossSheet.of(atFlow, HeadwayCommand.version()).inMode("flow", s.message(), java.util.List.of());
+        }
+        if (resolved.sizingCandidates().isEmpty()) {
+            throw new InputException(
+                    fileName(project) + " sizing",
+                    "missing; --mode size needs a \"sizing\" entry naming a material and schedule");
+        }
+        org.headway.system.SizeSelector.Selection selection =
+                org.headway.system.SizeSelector.select(run, resolved.sizingCandidates(), resolved.limits());
+        if (selection.chosen().isEmpty()) {
+            throw new InputException("--mode size", "no candidate size meets the limits; see solve --mode size");
+        }
+        ResolvedProject sized = new ResolvedProject(
+                resolved.project(), selection.run(), resolved.sizingCandidates(), resolved.limits(), resolved.curve());
+        return HeadLossSheet.of(sized, HeadwayCommand.version())
+                .inMode(
+                        "size",
+                        "smallest size meeting the limits: "
+                                + selection.chosen().get().label(),
+                        selection.candidates());
     }
 
     /** The network sheet: PDF, and the workbook and CSV (node and link tables) when asked. */

@@ -39,6 +39,10 @@ import org.headway.system.UncertaintyBand;
  * @param cautions every caution raised, standing caution last
  * @param inputHash SHA-256 of the project's canonical JSON, hex
  * @param version Headway version
+ * @param mode what the sheet reports: {@code headloss} (the run at its design flow), {@code flow} (at
+ *     the flow an available head drives) or {@code size} (at the size chosen for the limits)
+ * @param modeNote the mode's result in words (empty for head loss)
+ * @param sizeChecks every size candidate with its figures (size mode only)
  */
 public record HeadLossSheet(
         Project project,
@@ -50,7 +54,34 @@ public record HeadLossSheet(
         List<Method> methods,
         List<Caution> cautions,
         String inputHash,
-        String version) {
+        String version,
+        String mode,
+        String modeNote,
+        List<org.headway.system.SizeSelector.SizeCheck> sizeChecks) {
+
+    public HeadLossSheet {
+        mode = mode == null ? "headloss" : mode;
+        modeNote = modeNote == null ? "" : modeNote;
+        sizeChecks = sizeChecks == null ? List.of() : List.copyOf(sizeChecks);
+    }
+
+    /** The same content reported for another mode (the run already at that mode's flow or size). */
+    public HeadLossSheet inMode(String newMode, String note, List<org.headway.system.SizeSelector.SizeCheck> checks) {
+        return new HeadLossSheet(
+                project,
+                run,
+                result,
+                curve,
+                operatingPoint,
+                band,
+                methods,
+                cautions,
+                inputHash,
+                version,
+                newMode,
+                note,
+                checks);
+    }
 
     /** Points on the system curve when the project gives no range. */
     public static final int DEFAULT_CURVE_POINTS = 41;
@@ -98,7 +129,10 @@ public record HeadLossSheet(
                 methods(run),
                 Caution.grouped(new ArrayList<>(cautions)),
                 inputHash(resolved.project()),
-                version);
+                version,
+                "headloss",
+                "",
+                List.of());
     }
 
     /** SHA-256 of the project's canonical JSON: the same project always gives the same hash. */

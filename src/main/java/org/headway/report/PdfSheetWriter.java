@@ -89,6 +89,38 @@ public final class PdfSheetWriter {
         pdf.space(4);
         pdf.note("CAUTION — " + org.headway.caution.Caution.GENERAL_REVIEW.message(), BODY);
 
+        if (!sheet.mode().equals("headloss")) {
+            pdf.heading(sheet.mode().equals("flow") ? "Flow mode" : "Size mode", 12);
+            pdf.paragraph(
+                    (sheet.mode().equals("flow")
+                                    ? "The flow the available head drives through the run; every result below is at"
+                                            + " that flow. "
+                                    : "The run at the smallest catalog size meeting the limits; every result below is"
+                                            + " for that size. ")
+                            + Quantities.inSystem(sheet.modeNote(), u),
+                    BODY);
+            if (!sheet.sizeChecks().isEmpty()) {
+                List<String[]> rows = new ArrayList<>();
+                for (org.headway.system.SizeSelector.SizeCheck c : sheet.sizeChecks()) {
+                    rows.add(new String[] {
+                        c.size().label(),
+                        q(c.size().innerDiameter(), QuantityKind.DIAMETER, u),
+                        c.reasons().isEmpty() && c.maximumVelocity() == 0
+                                ? "—"
+                                : q(c.maximumVelocity(), QuantityKind.VELOCITY, u),
+                        n(c.maximumFrictionLossPer100m()),
+                        q(c.totalHead(), QuantityKind.HEAD, u),
+                        c.accepted() ? "meets the limits" : Quantities.inSystem(String.join("; ", c.reasons()), u)
+                    });
+                }
+                pdf.table(
+                        new String[] {"Size", "Bore", "Largest V", "Loss per 100 m", "Total head", "Verdict"},
+                        rows,
+                        new float[] {0.16f, 0.11f, 0.12f, 0.12f, 0.12f, 0.37f},
+                        SMALL);
+            }
+        }
+
         // Inputs
         pdf.heading("Inputs", 12);
         var f = run.fluid();
