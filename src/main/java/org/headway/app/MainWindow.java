@@ -267,14 +267,18 @@ public final class MainWindow {
         ToggleGroup units = new ToggleGroup();
         RadioMenuItem si = new RadioMenuItem("SI (m, mm, L/s, kPa)");
         RadioMenuItem us = new RadioMenuItem("US customary (ft, in, gpm, psi)");
+        RadioMenuItem process = new RadioMenuItem("SI process (m, mm, m³/h, bar)");
         si.setToggleGroup(units);
         us.setToggleGroup(units);
-        si.setSelected(editor.unitSystemProperty().get() == UnitSystem.SI);
-        us.setSelected(!si.isSelected());
+        process.setToggleGroup(units);
+        java.util.function.Function<UnitSystem, RadioMenuItem> itemOf =
+                system -> system == UnitSystem.US_CUSTOMARY ? us : system == UnitSystem.SI_PROCESS ? process : si;
+        itemOf.apply(editor.unitSystemProperty().get()).setSelected(true);
         si.setOnAction(e -> editor.unitSystemProperty().set(UnitSystem.SI));
         us.setOnAction(e -> editor.unitSystemProperty().set(UnitSystem.US_CUSTOMARY));
-        editor.unitSystemProperty().addListener((o, a, b) -> (b == UnitSystem.SI ? si : us).setSelected(true));
-        view.getItems().addAll(si, us);
+        process.setOnAction(e -> editor.unitSystemProperty().set(UnitSystem.SI_PROCESS));
+        editor.unitSystemProperty().addListener((o, a, b) -> itemOf.apply(b).setSelected(true));
+        view.getItems().addAll(si, process, us);
 
         MenuBar bar = new MenuBar(file, edit, view);
         bar.setId("menus");

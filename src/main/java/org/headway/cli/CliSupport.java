@@ -15,7 +15,9 @@ final class CliSupport {
         return switch (text.toLowerCase(Locale.ROOT)) {
             case "si", "metric" -> UnitSystem.SI;
             case "us", "us-customary", "imperial" -> UnitSystem.US_CUSTOMARY;
-            default -> throw new InputException("--units", "expected si or us, got \"" + text + "\"");
+            case "process", "si-process" -> UnitSystem.SI_PROCESS;
+            default ->
+                throw new InputException("--units", "expected si, us or process (m³/h and bar), got \"" + text + "\"");
         };
     }
 

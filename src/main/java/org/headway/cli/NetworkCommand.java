@@ -97,7 +97,7 @@ public final class NetworkCommand implements Callable<Integer> {
     @Option(
             names = "--units",
             defaultValue = "si",
-            description = "Text output units: si or us (default ${DEFAULT-VALUE}).")
+            description = "Text output units: si, us or process (m³/h and bar) (default ${DEFAULT-VALUE}).")
     String units;
 
     @Option(

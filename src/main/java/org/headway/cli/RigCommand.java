@@ -64,7 +64,10 @@ public final class RigCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text, json or csv (default: ${DEFAULT-VALUE})")
     String format;
 
-    @Option(names = "--units", defaultValue = "si", description = "si or us display units (default: ${DEFAULT-VALUE})")
+    @Option(
+            names = "--units",
+            defaultValue = "si",
+            description = "si, us or process (m³/h and bar) display units (default: ${DEFAULT-VALUE})")
     String units;
 
     @Override

@@ -64,7 +64,7 @@ public final class SheetCommand implements Callable<Integer> {
     @Option(
             names = "--units",
             defaultValue = "si",
-            description = "Units on the PDF: si or us (default ${DEFAULT-VALUE}).")
+            description = "Units on the PDF: si, us or process (m³/h and bar) (default ${DEFAULT-VALUE}).")
     String units;
 
     @Option(

@@ -162,6 +162,8 @@ public final class Quantities {
 
     private static final Map<QuantityKind, String> US_DISPLAY = new EnumMap<>(QuantityKind.class);
 
+    private static final Map<QuantityKind, String> PROCESS_DISPLAY = new EnumMap<>(QuantityKind.class);
+
     static {
         Unit<?> m = Units.METRE;
         SI_UNITS.put(QuantityKind.LENGTH, m);
@@ -189,6 +191,10 @@ public final class Quantities {
         SI_DISPLAY.put(QuantityKind.DYNAMIC_VISCOSITY, "mPa·s");
         SI_DISPLAY.put(QuantityKind.KINEMATIC_VISCOSITY, "mm²/s");
         SI_DISPLAY.put(QuantityKind.DIMENSIONLESS, "");
+
+        PROCESS_DISPLAY.putAll(SI_DISPLAY);
+        PROCESS_DISPLAY.put(QuantityKind.VOLUMETRIC_FLOW, "m³/h");
+        PROCESS_DISPLAY.put(QuantityKind.PRESSURE, "bar");
 
         US_DISPLAY.put(QuantityKind.LENGTH, "ft");
         US_DISPLAY.put(QuantityKind.DIAMETER, "in");
@@ -1032,7 +1038,10 @@ public final class Quantities {
             String replacement;
             if (m.group(3) != null) {
                 replacement = system == UnitSystem.US_CUSTOMARY ? m.group(1) + " ft per 100 ft" : m.group();
-            } else if (system != UnitSystem.US_CUSTOMARY && !unit.equals("m³/s")) {
+            } else if (system == UnitSystem.SI && !unit.equals("m³/s")) {
+                replacement = m.group();
+            } else if (system == UnitSystem.SI_PROCESS
+                    && !(unit.equals("m³/s") || unit.equals("L/s") || unit.equals("kPa") || unit.equals("Pa"))) {
                 replacement = m.group();
             } else {
                 replacement = switch (unit) {
@@ -1075,7 +1084,10 @@ public final class Quantities {
      * @return a symbol such as {@code kPa} or {@code gpm} (empty for dimensionless)
      */
     public static String unitSymbol(QuantityKind kind, UnitSystem system) {
-        return (system == UnitSystem.US_CUSTOMARY ? US_DISPLAY : SI_DISPLAY).get(kind);
+        return (system == UnitSystem.US_CUSTOMARY
+                        ? US_DISPLAY
+                        : system == UnitSystem.SI_PROCESS ? PROCESS_DISPLAY : SI_DISPLAY)
+                .get(kind);
     }
 
     /**
