@@ -193,7 +193,9 @@ public final class NetworkSolver {
         final boolean[] setAside;
 
         final double totalDemand;
-        final SpdSolver linear;
+        /** The linear solver; let go before the results are built (its factor is the largest array). */
+        SpdSolver linear;
+
         final List<Caution> cautions = new ArrayList<>();
         double lastHeadChange = Double.NaN;
         int iterations;
@@ -523,6 +525,7 @@ public final class NetworkSolver {
                                 + " check valve or pump that would run backwards",
                         "continuity"));
             }
+            linear = null;
             return result(converged, live);
         }
 

@@ -46,27 +46,49 @@ final class CsvText {
     static List<Line> records(String text) {
         CsvText reader = new CsvText(text);
         List<Line> out = new ArrayList<>();
-        List<String> fields = new ArrayList<>();
+        for (Line l = reader.next(); l != null; l = reader.next()) {
+            out.add(l);
+        }
+        return out;
+    }
+
+    /**
+     * A reader of the text's records one at a time, so that a large file's cells need not all be
+     * held at once (a 10⁶-junction line list has 2·10⁷ cells).
+     */
+    static CsvText reader(String text) {
+        return new CsvText(text);
+    }
+
+    private final List<String> fields = new ArrayList<>();
+
+    /**
+     * The next record, blank lines skipped; null at the end.
+     *
+     * @throws Malformed on text after a closing quote or a quote left open
+     */
+    Line next() {
         int n = text.length();
-        while (reader.pos < n) {
+        while (pos < n) {
             fields.clear();
             boolean blank = true;
             while (true) {
-                String field = reader.field();
+                String field = field();
                 fields.add(field);
                 blank &= field.isEmpty();
-                if (reader.pos < n && text.charAt(reader.pos) == ',') {
-                    reader.pos++;
+                if (pos < n && text.charAt(pos) == ',') {
+                    pos++;
                     continue;
                 }
                 break;
             }
+            long number = line;
+            endOfLine();
             if (!blank) {
-                out.add(new Line(reader.line, List.copyOf(fields)));
+                return new Line(number, List.copyOf(fields));
             }
-            reader.endOfLine();
         }
-        return out;
+        return null;
     }
 
     /** One field, trimmed; leaves pos at the comma, the line break or the end. */

@@ -159,7 +159,9 @@ public final class LineList {
     public static Project.NetworkSpec read(Path nodes, Path links, Catalog catalog, boolean hazenWilliams) {
         Table n = Table.read(nodes, NODE_COLUMNS);
         Table l = Table.read(links, LINK_COLUMNS);
-        return new Project.NetworkSpec(nodes(n), links(l, catalog, hazenWilliams));
+        Map<String, String> nodeIds = new java.util.HashMap<>();
+        List<Project.NodeSpec> nodeList = nodes(n, nodeIds);
+        return new Project.NetworkSpec(nodeList, links(l, catalog, hazenWilliams, nodeIds));
     }
 
     /** Reads from text (tests and fuzzing), naming the files as given. */
@@ -167,19 +169,24 @@ public final class LineList {
             String nodesName, String nodesText, String linksName, String linksText, Catalog c, boolean hazenWilliams) {
         Table n = Table.parse(nodesName, nodesText, NODE_COLUMNS);
         Table l = Table.parse(linksName, linksText, LINK_COLUMNS);
-        return new Project.NetworkSpec(nodes(n), links(l, c, hazenWilliams));
+        Map<String, String> nodeIds = new java.util.HashMap<>();
+        List<Project.NodeSpec> nodeList = nodes(n, nodeIds);
+        return new Project.NetworkSpec(nodeList, links(l, c, hazenWilliams, nodeIds));
     }
 
-    private static List<Project.NodeSpec> nodes(Table t) {
+    /**
+     * The node lines; fills ids with each node id (key and value the same string, so that the links
+     * may share the nodes' strings instead of holding copies).
+     */
+    private static List<Project.NodeSpec> nodes(Table t, Map<String, String> ids) {
         t.require("id");
         List<Project.NodeSpec> out = new ArrayList<>();
-        Set<String> ids = new HashSet<>();
         for (Row r : t.rows) {
             String id = r.text("id");
             if (id.isEmpty()) {
                 throw r.error("id", "every node needs an id");
             }
-            if (!ids.add(id)) {
+            if (ids.putIfAbsent(id, id) != null) {
                 throw r.error("id", "node id \"" + id + "\" is used by an earlier line");
             }
             String reference = r.text("reference").toLowerCase(Locale.ROOT);
@@ -328,7 +335,8 @@ public final class LineList {
         return out;
     }
 
-    private static List<Project.LinkSpec> links(Table t, Catalog catalog, boolean hazenWilliams) {
+    private static List<Project.LinkSpec> links(
+            Table t, Catalog catalog, boolean hazenWilliams, Map<String, String> nodeIds) {
         t.require("id");
         t.require("from");
         t.require("to");
@@ -365,7 +373,8 @@ public final class LineList {
                 case "pump" -> pump(r, id);
                 default -> device(r, id, kind);
             };
-            out.add(new Project.LinkSpec(from, to, element, r.flow("design_flow")));
+            out.add(new Project.LinkSpec(
+                    nodeIds.getOrDefault(from, from), nodeIds.getOrDefault(to, to), element, r.flow("design_flow")));
         }
         if (out.isEmpty()) {
             throw new InputException(t.name, "has no link lines");
@@ -577,10 +586,25 @@ public final class LineList {
         final String name;
         final Map<String, Integer> column = new LinkedHashMap<>();
         final Map<String, String> unit = new LinkedHashMap<>();
-        final List<Row> rows = new ArrayList<>();
 
         Table(String name) {
             this.name = name;
+        }
+
+        /** Cells with their unit seen so far, up to {@link #SHARED_LIMIT}: repeated values share one string. */
+        private final Map<String, String> shared = new java.util.HashMap<>();
+
+        private static final int SHARED_LIMIT = 4096;
+
+        String shared(String v) {
+            String s = shared.get(v);
+            if (s != null) {
+                return s;
+            }
+            if (shared.size() < SHARED_LIMIT) {
+                shared.put(v, v);
+            }
+            return v;
         }
 
         static Table read(Path file, List<String> known) {
@@ -603,33 +627,67 @@ public final class LineList {
                 text = text.substring(1);
             }
             Table t = new Table(name);
-            List<CsvText.Line> lines;
+            CsvText reader = CsvText.reader(text);
+            CsvText.Line first = t.next(reader);
+            if (first == null) {
+                throw new InputException(name, "is empty; it needs a header row naming its columns");
+            }
+            List<String> cells = first.fields();
+            for (int c = 0; c < cells.size(); c++) {
+                t.header(cells.get(c), c, known);
+            }
+            t.reader = reader;
+            return t;
+        }
+
+        /** The reader of the lines after the header; null once {@link #rows} has been asked for. */
+        private CsvText reader;
+
+        /**
+         * The lines after the header, read as they are asked for (one pass), so that a large list's
+         * cells are not all held at once; a line with too many cells or malformed CSV is refused when
+         * it is reached.
+         */
+        final Iterable<Row> rows = this::rowIterator;
+
+        private java.util.Iterator<Row> rowIterator() {
+            CsvText r = reader;
+            if (r == null) {
+                throw new IllegalStateException("the rows of " + name + " are read once");
+            }
+            reader = null;
+            return new java.util.Iterator<Row>() {
+                CsvText.Line line = Table.this.next(r);
+
+                @Override
+                public boolean hasNext() {
+                    return line != null;
+                }
+
+                @Override
+                public Row next() {
+                    if (line == null) {
+                        throw new java.util.NoSuchElementException();
+                    }
+                    CsvText.Line rec = line;
+                    if (rec.fields().size() > width()) {
+                        throw new InputException(
+                                name + " line " + rec.number(),
+                                "has " + rec.fields().size() + " cells, more than the " + width()
+                                        + " columns of the header");
+                    }
+                    line = Table.this.next(r);
+                    return new Row(Table.this, rec.number(), rec.fields());
+                }
+            };
+        }
+
+        private CsvText.Line next(CsvText reader) {
             try {
-                lines = CsvText.records(text);
+                return reader.next();
             } catch (CsvText.Malformed e) {
                 throw new InputException(name + " line " + e.line, "is not valid CSV: " + e.getMessage());
             }
-            boolean header = true;
-            for (CsvText.Line rec : lines) {
-                List<String> cells = rec.fields();
-                if (header) {
-                    for (int c = 0; c < cells.size(); c++) {
-                        t.header(cells.get(c), c, known);
-                    }
-                    header = false;
-                    continue;
-                }
-                if (cells.size() > t.width()) {
-                    throw new InputException(
-                            name + " line " + rec.number(),
-                            "has " + cells.size() + " cells, more than the " + t.width() + " columns of the header");
-                }
-                t.rows.add(new Row(t, rec.number(), cells));
-            }
-            if (header) {
-                throw new InputException(name, "is empty; it needs a header row naming its columns");
-            }
-            return t;
         }
 
         int width = 0;
@@ -742,7 +800,7 @@ public final class LineList {
                         key,
                         "the column gives the unit [" + u + "], so the cell must be a plain number; got \"" + v + "\"");
             }
-            return v + " " + u;
+            return table.shared(v + " " + u);
         }
     }
 }

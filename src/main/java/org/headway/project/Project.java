@@ -346,8 +346,10 @@ public record Project(
             fixedPressure = fixedPressure == null ? "" : fixedPressure;
             x = x == null ? "" : x;
             y = y == null ? "" : y;
-            demands = java.util.Collections.unmodifiableMap(
-                    new java.util.LinkedHashMap<>(demands == null ? java.util.Map.of() : demands));
+            // Most nodes have no named demand: the shared empty map (10⁶ nodes would hold 10⁶ empty maps).
+            demands = demands == null || demands.isEmpty()
+                    ? java.util.Map.of()
+                    : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(demands));
         }
 
         /** A node with at most its one plain demand. */

@@ -464,10 +464,17 @@ public record Segment(
                         Locale.ROOT,
                         "Hazen–Williams C %.4g",
                         hazenWilliams.get().value())
-                : "Darcy–Weisbach, f by " + p.frictionMethod();
+                : DARCY_LAWS.computeIfAbsent(p.frictionMethod(), m -> "Darcy–Weisbach, f by " + m);
         return new ElementResult(
                 id, kind(), flow, h, context.fluid().density() * Gravity.STANDARD * h, law, p.cautions());
     }
+
+    /**
+     * The Darcy–Weisbach law text of each friction method, made once: a network of 10⁶ pipes would
+     * otherwise hold 10⁶ copies of a few strings in its results.
+     */
+    private static final java.util.concurrent.ConcurrentHashMap<String, String> DARCY_LAWS =
+            new java.util.concurrent.ConcurrentHashMap<>();
 
     /**
      * Hazen–Williams friction loss h_f = L S with S = (V/(k C R^0.63))^(1/0.54), R = D/4.
