@@ -4,12 +4,8 @@ import de.rototor.pdfbox.graphics2d.PdfBoxGraphics2D;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Calendar;
 import java.util.List;
 import java.util.Locale;
-import java.util.TimeZone;
-import org.apache.pdfbox.pdmodel.PDDocumentInformation;
-import org.headway.caution.Caution;
 import org.headway.network.CaseResult;
 import org.headway.network.IndexCircuit;
 import org.headway.network.Link;
@@ -61,29 +57,13 @@ public final class NetworkPdfWriter {
         Network net = sheet.network();
         CaseResult base = sheet.result().base();
         NetworkResult r = base.result();
-        PDDocumentInformation info = pdf.doc.getDocumentInformation();
-        info.setTitle("Network head-loss sheet: " + p.title());
-        info.setCreator("Headway " + sheet.version());
-        info.setSubject("input hash " + sheet.inputHash());
-        Calendar epoch = Calendar.getInstance(TimeZone.getTimeZone("UTC"), Locale.ROOT);
-        epoch.setTimeInMillis(0);
-        info.setCreationDate(epoch);
+        pdf.documentInfo("Network head-loss sheet: " + p.title(), sheet.version(), sheet.inputHash());
 
         pdf.heading("Network head-loss sheet", 16);
         pdf.paragraph(
                 p.title().isEmpty() ? "(untitled network)" : p.title(), pdf.bold, 11, PdfLayout.MARGIN, pdf.width());
         pdf.space(4);
-        Project.TitleBlock t = p.titleBlock();
-        List<String[]> title = new ArrayList<>();
-        title.add(new String[] {"Job / reference", blank(t.job()), "Revision", blank(t.revision())});
-        title.add(new String[] {"Prepared by", blank(t.preparedBy()), "Checked by", blank(t.checkedBy())});
-        title.add(new String[] {"Date", blank(t.date()), "Headway version", sheet.version()});
-        pdf.table(new String[] {"Title block", "", "", ""}, title, new float[] {0.18f, 0.32f, 0.18f, 0.32f}, BODY);
-        if (!t.notes().isEmpty()) {
-            pdf.paragraph("Notes: " + t.notes(), SMALL);
-        }
-        pdf.space(4);
-        pdf.note("CAUTION — " + Caution.GENERAL_REVIEW.message(), BODY);
+        pdf.titleBlock(p.titleBlock(), sheet.version(), BODY, SMALL);
 
         // Inputs
         pdf.heading("Inputs", 12);
@@ -357,13 +337,7 @@ public final class NetworkPdfWriter {
         }
 
         // Methods
-        pdf.heading("Methods", 12);
-        for (Method m : sheet.methods()) {
-            pdf.paragraph(m.name(), pdf.bold, BODY, PdfLayout.MARGIN, pdf.width());
-            pdf.paragraph("    " + m.equation(), pdf.regular, BODY, PdfLayout.MARGIN + 8, pdf.width() - 8);
-            pdf.paragraph("    " + m.citation(), pdf.regular, SMALL, PdfLayout.MARGIN + 8, pdf.width() - 8);
-            pdf.space(3);
-        }
+        pdf.methods(sheet.methods(), BODY, SMALL);
         pdf.heading("Assumptions", 12);
         pdf.paragraph(
                 "Steady, incompressible, isothermal flow of a Newtonian liquid filling every pipe. Demands are"
@@ -371,13 +345,7 @@ public final class NetworkPdfWriter {
                         + " temperature. Check valves and pumps are shut where they would pass reverse flow; control"
                         + " valves take the status the solve finds. Gravity is standard gravity.",
                 BODY);
-        pdf.heading("Cautions", 12);
-        for (Caution c : sheet.cautions()) {
-            pdf.paragraph(
-                    "• [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + Quantities.inSystem(c.message(), u)
-                            + " (basis: " + c.basis() + ")",
-                    BODY);
-        }
+        pdf.cautions(sheet.cautions(), u, BODY);
         pdf.footers("Headway " + sheet.version() + " · input hash "
                 + sheet.inputHash().substring(0, 16) + " · estimates for design review; check against local codes");
     }
@@ -434,10 +402,6 @@ public final class NetworkPdfWriter {
 
     private static String[] row(String a, String b, String c) {
         return new String[] {a, b, c};
-    }
-
-    private static String blank(String s) {
-        return s == null || s.isEmpty() ? "______________________" : s;
     }
 
     private static String q(double si, QuantityKind kind, UnitSystem u) {

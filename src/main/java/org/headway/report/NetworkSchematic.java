@@ -135,16 +135,11 @@ final class NetworkSchematic {
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         double legend = 34;
         double[][] p = positions(network);
-        double minX = Double.POSITIVE_INFINITY;
-        double maxX = Double.NEGATIVE_INFINITY;
-        double minY = Double.POSITIVE_INFINITY;
-        double maxY = Double.NEGATIVE_INFINITY;
-        for (double[] xy : p) {
-            minX = Math.min(minX, xy[0]);
-            maxX = Math.max(maxX, xy[0]);
-            minY = Math.min(minY, xy[1]);
-            maxY = Math.max(maxY, xy[1]);
-        }
+        double[] extent = bounds(p);
+        double minX = extent[0];
+        double maxX = extent[1];
+        double minY = extent[2];
+        double maxY = extent[3];
         double pad = 30;
         double spanX = Math.max(maxX - minX, 1e-9);
         double spanY = Math.max(maxY - minY, 1e-9);
@@ -303,21 +298,25 @@ final class NetworkSchematic {
                         (ly + 12));
     }
 
+    /** minX, maxX, minY, maxY of the positions. */
+    private static double[] bounds(double[][] p) {
+        double[] b = {
+            Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY
+        };
+        for (double[] xy : p) {
+            b[0] = Math.min(b[0], xy[0]);
+            b[1] = Math.max(b[1], xy[0]);
+            b[2] = Math.min(b[2], xy[1]);
+            b[3] = Math.max(b[3], xy[1]);
+        }
+        return b;
+    }
+
     /** A drawing height that fits the layout's aspect at the given width, between a third and 3/4 of it. */
     static float preferredHeight(Network network, float width) {
-        double[][] p = positions(network);
-        double minX = Double.POSITIVE_INFINITY;
-        double maxX = Double.NEGATIVE_INFINITY;
-        double minY = Double.POSITIVE_INFINITY;
-        double maxY = Double.NEGATIVE_INFINITY;
-        for (double[] xy : p) {
-            minX = Math.min(minX, xy[0]);
-            maxX = Math.max(maxX, xy[0]);
-            minY = Math.min(minY, xy[1]);
-            maxY = Math.max(maxY, xy[1]);
-        }
-        double spanX = Math.max(maxX - minX, 1e-9);
-        double spanY = Math.max(maxY - minY, 0);
+        double[] box = bounds(positions(network));
+        double spanX = Math.max(box[1] - box[0], 1e-9);
+        double spanY = Math.max(box[3] - box[2], 0);
         double h = (width - 105) * spanY / spanX + 60 + 34;
         return (float) Math.max(width / 3, Math.min(width * 0.75, h));
     }

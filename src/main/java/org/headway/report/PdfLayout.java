@@ -385,6 +385,63 @@ final class PdfLayout implements AutoCloseable {
         return font.getStringWidth(printable(text, font)) / 1000f * size;
     }
 
+    /**
+     * Sets the document's title, creator and subject (the input hash) and a fixed creation date, so
+     * that a sheet made again from the same project is the same file.
+     */
+    void documentInfo(String title, String version, String inputHash) {
+        org.apache.pdfbox.pdmodel.PDDocumentInformation info = doc.getDocumentInformation();
+        info.setTitle(title);
+        info.setCreator("Headway " + version);
+        info.setSubject("input hash " + inputHash);
+        java.util.Calendar epoch =
+                java.util.Calendar.getInstance(java.util.TimeZone.getTimeZone("UTC"), java.util.Locale.ROOT);
+        epoch.setTimeInMillis(0);
+        info.setCreationDate(epoch);
+    }
+
+    /** The title block with blank lines to sign, its notes, and the standing caution in a box. */
+    void titleBlock(org.headway.project.Project.TitleBlock t, String version, float body, float small)
+            throws IOException {
+        List<String[]> title = new ArrayList<>();
+        title.add(new String[] {"Job / reference", blank(t.job()), "Revision", blank(t.revision())});
+        title.add(new String[] {"Prepared by", blank(t.preparedBy()), "Checked by", blank(t.checkedBy())});
+        title.add(new String[] {"Date", blank(t.date()), "Headway version", version});
+        table(new String[] {"Title block", "", "", ""}, title, new float[] {0.18f, 0.32f, 0.18f, 0.32f}, body);
+        if (!t.notes().isEmpty()) {
+            paragraph("Notes: " + t.notes(), small);
+        }
+        space(4);
+        note("CAUTION — " + org.headway.caution.Caution.GENERAL_REVIEW.message(), body);
+    }
+
+    private static String blank(String s) {
+        return s == null || s.isEmpty() ? "______________________" : s;
+    }
+
+    /** The methods section: each method's name, equation and citation. */
+    void methods(List<Method> methods, float body, float small) throws IOException {
+        heading("Methods", 12);
+        for (Method m : methods) {
+            paragraph(m.name(), bold, body, MARGIN, width());
+            paragraph("    " + m.equation(), regular, body, MARGIN + 8, width() - 8);
+            paragraph("    " + m.citation(), regular, small, MARGIN + 8, width() - 8);
+            space(3);
+        }
+    }
+
+    /** The cautions section, each in the chosen unit system with its severity and basis. */
+    void cautions(List<org.headway.caution.Caution> cautions, org.headway.units.UnitSystem u, float body)
+            throws IOException {
+        heading("Cautions", 12);
+        for (org.headway.caution.Caution c : cautions) {
+            paragraph(
+                    "• [" + c.severity().name().toLowerCase(java.util.Locale.ROOT) + "] "
+                            + org.headway.units.Quantities.inSystem(c.message(), u) + " (basis: " + c.basis() + ")",
+                    body);
+        }
+    }
+
     /** Writes "page n of m" and a footer line on every page; call once, after all content. */
     void footers(String left) throws IOException {
         out.close();

@@ -5,13 +5,9 @@ import java.awt.geom.Rectangle2D;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Calendar;
 import java.util.List;
 import java.util.Locale;
-import java.util.TimeZone;
-import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
-import org.headway.caution.Caution;
 import org.headway.project.AtomicFiles;
 import org.headway.project.Project;
 import org.headway.system.Element;
@@ -65,29 +61,12 @@ public final class PdfSheetWriter {
         Project p = sheet.project();
         PipeRun run = sheet.run();
         RunResult r = sheet.result();
-        PDDocumentInformation info = pdf.doc.getDocumentInformation();
-        info.setTitle("Head-loss sheet: " + p.title());
-        info.setCreator("Headway " + sheet.version());
-        info.setSubject("input hash " + sheet.inputHash());
-        // A fixed creation date from the project keeps regenerated sheets comparable; fall back to none.
-        Calendar epoch = Calendar.getInstance(TimeZone.getTimeZone("UTC"), Locale.ROOT);
-        epoch.setTimeInMillis(0);
-        info.setCreationDate(epoch);
+        pdf.documentInfo("Head-loss sheet: " + p.title(), sheet.version(), sheet.inputHash());
 
         pdf.heading("Head-loss sheet", 16);
         pdf.paragraph(p.title().isEmpty() ? "(untitled run)" : p.title(), pdf.bold, 11, PdfLayout.MARGIN, pdf.width());
         pdf.space(4);
-        Project.TitleBlock t = p.titleBlock();
-        List<String[]> title = new ArrayList<>();
-        title.add(new String[] {"Job / reference", blank(t.job()), "Revision", blank(t.revision())});
-        title.add(new String[] {"Prepared by", blank(t.preparedBy()), "Checked by", blank(t.checkedBy())});
-        title.add(new String[] {"Date", blank(t.date()), "Headway version", sheet.version()});
-        pdf.table(new String[] {"Title block", "", "", ""}, title, new float[] {0.18f, 0.32f, 0.18f, 0.32f}, BODY);
-        if (!t.notes().isEmpty()) {
-            pdf.paragraph("Notes: " + t.notes(), SMALL);
-        }
-        pdf.space(4);
-        pdf.note("CAUTION — " + org.headway.caution.Caution.GENERAL_REVIEW.message(), BODY);
+        pdf.titleBlock(p.titleBlock(), sheet.version(), BODY, SMALL);
 
         if (!sheet.mode().equals("headloss")) {
             pdf.heading(sheet.mode().equals("flow") ? "Flow mode" : "Size mode", 12);
@@ -393,13 +372,7 @@ public final class PdfSheetWriter {
         chart(pdf, SheetCharts.friction(sheet));
 
         // Methods
-        pdf.heading("Methods", 12);
-        for (Method m : sheet.methods()) {
-            pdf.paragraph(m.name(), pdf.bold, BODY, PdfLayout.MARGIN, pdf.width());
-            pdf.paragraph("    " + m.equation(), pdf.regular, BODY, PdfLayout.MARGIN + 8, pdf.width() - 8);
-            pdf.paragraph("    " + m.citation(), pdf.regular, SMALL, PdfLayout.MARGIN + 8, pdf.width() - 8);
-            pdf.space(3);
-        }
+        pdf.methods(sheet.methods(), BODY, SMALL);
         pdf.heading("Assumptions", 12);
         pdf.paragraph(
                 "Steady, incompressible, isothermal flow of a Newtonian liquid filling every pipe. Elevations are"
@@ -410,14 +383,7 @@ public final class PdfSheetWriter {
                         + " at the run temperature. Gravity is standard gravity.",
                 BODY);
 
-        pdf.heading("Cautions", 12);
-        for (Caution c : sheet.cautions()) {
-            pdf.paragraph(
-                    "• [" + c.severity().name().toLowerCase(Locale.ROOT) + "] " + Quantities.inSystem(c.message(), u)
-                            + " (basis: " + c.basis()
-                            + ")",
-                    BODY);
-        }
+        pdf.cautions(sheet.cautions(), u, BODY);
         pdf.footers("Headway " + sheet.version() + " · input hash "
                 + sheet.inputHash().substring(0, 16) + " · estimates for design review; check against local codes");
     }
@@ -450,10 +416,6 @@ public final class PdfSheetWriter {
 
     private static String[] row(String a, String b, String c) {
         return new String[] {a, b, c};
-    }
-
-    private static String blank(String s) {
-        return s == null || s.isEmpty() ? "______________________" : s;
     }
 
     private static String end(double level, double pressure, UnitSystem u) {
