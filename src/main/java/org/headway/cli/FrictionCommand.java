@@ -6,7 +6,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.Reader;
-import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -17,9 +16,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
-import org.apache.commons.csv.CSVRecord;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 import org.headway.friction.ConvergenceException;
@@ -216,52 +213,99 @@ public final class FrictionCommand implements Callable<Integer> {
     }
 
     private static String regime(FrictionResult result) {
-        return result.regime().name().toLowerCase(Locale.ROOT);
+        switch (result.regime()) {
+            case LAMINAR:
+                return "laminar";
+            case TRANSITIONAL:
+                return "transitional";
+            case TURBULENT:
+                return "turbulent";
+            default:
+                return result.regime().name().toLowerCase(Locale.ROOT);
+        }
     }
 
     private static String cautionCodes(FrictionResult result) {
-        return result.cautions().stream().map(Caution::code).collect(Collectors.joining(";"));
+        List<Caution> cautions = result.cautions();
+        if (cautions.isEmpty()) {
+            return "";
+        }
+        if (cautions.size() == 1) {
+            return cautions.get(0).code();
+        }
+        StringBuilder codes = new StringBuilder();
+        for (Caution caution : cautions) {
+            if (codes.length() > 0) {
+                codes.append(';');
+            }
+            codes.append(caution.code());
+        }
+        return codes.toString();
     }
 
-    /** Streams the input file row by row into the output; a bad row gets its error and the rest go on. */
+    /** Rows handed to a worker at a time: large enough to amortise the hand-over, small for memory. */
+    private static final int BLOCK_ROWS = 4096;
+
+    /** One block's output text and its failed rows (the first few listed). */
+    private record Block(byte[] utf8, long failedCount, long[] listedFailures) {}
+
+    /**
+     * Streams the input file into the output; a bad row gets its error and the rest go on. The main
+     * thread reads records and writes finished blocks in order while worker threads evaluate and
+     * format blocks of rows, so a large file uses every core and memory stays flat (a few blocks in
+     * flight, whatever the file's size).
+     */
     private int batch(FrictionCorrelation correlation) throws IOException {
         if (!Files.isRegularFile(input) || !Files.isReadable(input)) {
             throw new InputException("--input", "cannot read file '" + input + "'");
         }
+        String label = "--input " + input;
         Path temporary = null;
         // Only the first rows are listed, so memory stays flat however many rows fail.
         List<Long> failed = new ArrayList<>();
         long failedCount = 0;
         long rows = 0;
+        int threads = Math.max(1, Runtime.getRuntime().availableProcessors());
+        java.util.concurrent.ExecutorService workers =
+                java.util.concurrent.Executors.newFixedThreadPool(threads, task -> {
+                    Thread t = new Thread(task, "headway-friction-batch");
+                    t.setDaemon(true);
+                    return t;
+                });
         try (Reader reader = new LineLengthLimit(
-                        Files.newBufferedReader(input, StandardCharsets.UTF_8),
-                        "--input " + input,
-                        LineLengthLimit.MAX_LINE_LENGTH,
-                        input);
-                CSVParser parser = CSVFormat.DEFAULT
-                        .builder()
-                        .setHeader()
-                        .setSkipHeaderRecord(true)
-                        .setIgnoreSurroundingSpaces(true)
-                        .get()
-                        .parse(reader)) {
-            List<String> inputColumns = parser.getHeaderNames();
-            requireColumns(inputColumns);
-            List<String> header = new ArrayList<>();
-            for (String name : inputColumns) {
-                header.add(org.headway.report.SafeText.echoedCell(name));
+                Files.newBufferedReader(input, StandardCharsets.UTF_8),
+                label,
+                LineLengthLimit.MAX_LINE_LENGTH,
+                input)) {
+            CsvRecordReader csv = new CsvRecordReader(reader, label);
+            String[] first = csv.next();
+            List<String> inputColumns = first == null ? List.of() : List.of(first);
+            for (int i = 0; i < inputColumns.size(); i++) {
+                if (inputColumns.get(i).isBlank()) {
+                    throw new InputException(
+                            label,
+                            "the header row is not usable: column " + (i + 1) + " has no name (header: "
+                                    + String.join(", ", inputColumns) + ")");
+                }
             }
-            header.addAll(RESULT_COLUMNS);
-            Writer target;
+            requireColumns(inputColumns);
+            int columns = inputColumns.size();
+            // A repeated column name: the last column of that name is read.
+            int reColumn = inputColumns.lastIndexOf(REYNOLDS_COLUMN);
+            int roughnessColumn = inputColumns.lastIndexOf(ROUGHNESS_COLUMN);
+            Utf8Text head = new Utf8Text(256);
+            for (int i = 0; i < columns; i++) {
+                CsvCells.append(head, org.headway.report.SafeText.echoedCell(inputColumns.get(i)), i == 0);
+            }
+            for (String name : RESULT_COLUMNS) {
+                CsvCells.append(head, name, false);
+            }
+            CsvCells.endRecord(head);
+            Writer target = null;
+            java.io.OutputStream file = null;
             if (output == null) {
-                // Standard output belongs to picocli: the printer may flush it but never close it,
-                // not even when a bad row ends the stream early.
-                target = new java.io.FilterWriter(spec.commandLine().getOut()) {
-                    @Override
-                    public void close() throws IOException {
-                        flush();
-                    }
-                };
+                // Standard output belongs to picocli: written and flushed here, never closed.
+                target = spec.commandLine().getOut();
             } else {
                 try {
                     temporary = org.headway.project.AtomicFiles.createTemporary(output);
@@ -270,46 +314,45 @@ public final class FrictionCommand implements Callable<Integer> {
                             "--output " + output,
                             "cannot create a file in " + output.toAbsolutePath().getParent() + ": " + e.getMessage());
                 }
-                target = Files.newBufferedWriter(temporary, StandardCharsets.UTF_8);
+                // Blocks arrive as UTF-8 bytes encoded by the workers and are written as they are.
+                file = Files.newOutputStream(temporary);
             }
-            try (CSVPrinter printer = CSVFormat.DEFAULT
-                    .builder()
-                    .setHeader(header.toArray(String[]::new))
-                    .get()
-                    .print(target)) {
-                List<String> row = new ArrayList<>(header.size());
-                for (CSVRecord record : parser) {
-                    rows++;
-                    row.clear();
-                    for (int i = 0; i < inputColumns.size(); i++) {
-                        row.add(i < record.size() ? org.headway.report.SafeText.echoedCell(record.get(i)) : "");
-                    }
-                    try {
-                        FrictionResult result = evaluateRow(correlation, record, rows, inputColumns.size());
-                        row.add(org.headway.units.Decimals.format(result.frictionFactor()));
-                        row.add(regime(result));
-                        row.add(result.method());
-                        row.add(cautionCodes(result));
-                        row.add("");
-                    } catch (InputException | ConvergenceException e) {
-                        failedCount++;
-                        if (failed.size() < LISTED_FAILED_ROWS) {
-                            failed.add(rows);
+            try {
+                write(head.toByteArray(), file, target);
+                java.util.ArrayDeque<java.util.concurrent.Future<Block>> pending = new java.util.ArrayDeque<>();
+                boolean more = true;
+                while (more) {
+                    CsvRecordReader.Block records = new CsvRecordReader.Block();
+                    while (records.records < BLOCK_ROWS) {
+                        if (!csv.readRecord(records)) {
+                            more = false;
+                            break;
                         }
-                        row.add("");
-                        row.add("");
-                        row.add(correlation.id());
-                        row.add("");
-                        row.add(e.getMessage());
                     }
-                    printer.printRecord(row);
+                    if (records.records == 0) {
+                        break;
+                    }
+                    long firstRow = rows + 1;
+                    rows += records.records;
+                    pending.add(workers.submit(
+                            () -> evaluateBlock(correlation, records, firstRow, columns, reColumn, roughnessColumn)));
+                    while (pending.size() > 2 * threads || (!more && !pending.isEmpty())) {
+                        Block block = finished(pending.poll());
+                        write(block.utf8(), file, target);
+                        failedCount += block.failedCount();
+                        for (long row : block.listedFailures()) {
+                            if (failed.size() < LISTED_FAILED_ROWS) {
+                                failed.add(row);
+                            }
+                        }
+                    }
                 }
-                printer.flush();
-                if (output == null) {
-                    // Standard output belongs to picocli: flush, never close it.
+                if (target != null) {
                     target.flush();
-                } else {
-                    target.close();
+                }
+            } finally {
+                if (file != null) {
+                    file.close();
                 }
             }
             if (temporary != null) {
@@ -322,22 +365,13 @@ public final class FrictionCommand implements Callable<Integer> {
                 }
                 temporary = null;
             }
-        } catch (UncheckedIOException e) {
-            // commons-csv reports a malformed file (e.g. an unterminated quote) this way
-            throw new InputException(
-                    "--input " + input, "cannot parse the CSV: " + e.getCause().getMessage(), e);
-        } catch (org.apache.commons.csv.CSVException e) {
-            // a malformed header record (e.g. a quote left open across lines) fails while opening
-            throw new InputException("--input " + input, "cannot parse the CSV: " + e.getMessage(), e);
-        } catch (IllegalArgumentException e) {
-            // commons-csv refuses a header row with an empty or repeated column name this way
-            throw new InputException("--input " + input, "the header row is not usable: " + e.getMessage(), e);
         } catch (IOException e) {
             if (output != null && !(e instanceof java.nio.charset.CharacterCodingException)) {
                 throw new InputException("--output " + output, "not written: " + e.getMessage(), e);
             }
             throw e;
         } finally {
+            workers.shutdownNow();
             if (temporary != null) {
                 Files.deleteIfExists(temporary);
                 org.headway.project.AtomicFiles.release(temporary);
@@ -357,6 +391,108 @@ public final class FrictionCommand implements Callable<Integer> {
         return HeadwayCommand.EXIT_FAILED;
     }
 
+    /** Writes UTF-8 bytes to the file, or as text to standard output. */
+    private static void write(byte[] utf8, java.io.OutputStream file, Writer target) throws IOException {
+        if (file != null) {
+            file.write(utf8);
+        } else {
+            target.write(new String(utf8, StandardCharsets.UTF_8));
+        }
+    }
+
+    /** Waits for a block; a worker's unexpected failure is rethrown as it was. */
+    private static Block finished(java.util.concurrent.Future<Block> future) throws IOException {
+        try {
+            return future.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new java.io.InterruptedIOException("interrupted while evaluating the batch");
+        } catch (java.util.concurrent.ExecutionException e) {
+            Throwable cause = e.getCause();
+            if (cause instanceof RuntimeException r) {
+                throw r;
+            }
+            if (cause instanceof Error r) {
+                throw r;
+            }
+            throw new IOException(cause);
+        }
+    }
+
+    /** Evaluates and formats one block of rows (run on a worker thread; touches nothing shared). */
+    private static Block evaluateBlock(
+            FrictionCorrelation correlation,
+            CsvRecordReader.Block records,
+            long firstRow,
+            int columns,
+            int reColumn,
+            int roughnessColumn) {
+        Utf8Text out = new Utf8Text(records.length + records.records * (columns + 64));
+        CharSlice slice = new CharSlice();
+        long failedCount = 0;
+        long[] listed = new long[LISTED_FAILED_ROWS];
+        int listedCount = 0;
+        for (int r = 0; r < records.records; r++) {
+            long row = firstRow + r;
+            int first = records.firstField(r);
+            int count = records.recordEnd[r] - first;
+            for (int i = 0; i < columns; i++) {
+                if (i < count) {
+                    echo(out, field(records, first + i, slice), i == 0);
+                } else {
+                    CsvCells.append(out, "", i == 0);
+                }
+            }
+            try {
+                String where = "row " + row;
+                if (count != columns) {
+                    throw new InputException(where, "has " + count + " fields, the header has " + columns);
+                }
+                double re = number(field(records, first + reColumn, slice), row, REYNOLDS_COLUMN);
+                double rr = number(field(records, first + roughnessColumn, slice), row, ROUGHNESS_COLUMN);
+                FrictionResult result;
+                try {
+                    result = correlation.evaluate(re, rr);
+                } catch (InputException e) {
+                    throw e.at(where + ", ");
+                }
+                CsvCells.append(out, org.headway.units.Decimals.format(result.frictionFactor()), false);
+                CsvCells.append(out, regime(result), false);
+                CsvCells.append(out, result.method(), false);
+                CsvCells.append(out, cautionCodes(result), false);
+                out.append(',');
+            } catch (InputException | ConvergenceException e) {
+                failedCount++;
+                if (listedCount < listed.length) {
+                    listed[listedCount++] = row;
+                }
+                out.append(',').append(',');
+                CsvCells.append(out, correlation.id(), false);
+                out.append(',');
+                CsvCells.append(out, e.getMessage(), false);
+            }
+            CsvCells.endRecord(out);
+        }
+        return new Block(out.toByteArray(), failedCount, java.util.Arrays.copyOf(listed, listedCount));
+    }
+
+    private static CharSlice field(CsvRecordReader.Block records, int field, CharSlice slice) {
+        int from = records.fieldStart(field);
+        return slice.set(records.chars, from, records.fieldEnd[field] - from);
+    }
+
+    /** An input cell echoed, neutralised where a spreadsheet would take it for a formula. */
+    private static void echo(Utf8Text out, CharSlice cell, boolean first) {
+        if (cell.length() > 0) {
+            char c = cell.charAt(0);
+            if (c == '=' || c == '+' || c == '-' || c == '@' || c == '\t' || c == '\r') {
+                CsvCells.append(out, org.headway.report.SafeText.echoedCell(cell.toString()), first);
+                return;
+            }
+        }
+        CsvCells.append(out, cell, first);
+    }
+
     private void requireColumns(List<String> columns) {
         for (String needed : List.of(REYNOLDS_COLUMN, ROUGHNESS_COLUMN)) {
             if (!columns.contains(needed)) {
@@ -374,29 +510,19 @@ public final class FrictionCommand implements Callable<Integer> {
         }
     }
 
-    private static FrictionResult evaluateRow(
-            FrictionCorrelation correlation, CSVRecord record, long row, int expectedFields) {
-        String where = "row " + row;
-        if (record.size() != expectedFields) {
-            throw new InputException(where, "has " + record.size() + " fields, the header has " + expectedFields);
+    private static double number(CharSlice cell, long row, String column) {
+        if (org.headway.units.Decimals.isPlainDecimal(cell)) {
+            try {
+                return org.headway.units.Decimals.parse(cell.array(), cell.offset(), cell.length());
+            } catch (NumberFormatException e) {
+                // not expected for a plain decimal; reported as any unreadable cell
+            }
+        } else {
+            String text = cell.toString();
+            if (NON_FINITE.contains(text.strip())) {
+                return org.headway.units.Decimals.parse(text);
+            }
         }
-        double re = number(record.get(REYNOLDS_COLUMN), where + ", column " + REYNOLDS_COLUMN);
-        double rr = number(record.get(ROUGHNESS_COLUMN), where + ", column " + ROUGHNESS_COLUMN);
-        try {
-            return correlation.evaluate(re, rr);
-        } catch (InputException e) {
-            throw e.at(where + ", ");
-        }
-    }
-
-    private static double number(String text, String where) {
-        if (!org.headway.units.Decimals.isPlainDecimal(text) && !NON_FINITE.contains(text.strip())) {
-            throw new InputException(where, "not a number: '" + text + "'");
-        }
-        try {
-            return org.headway.units.Decimals.parse(text);
-        } catch (NumberFormatException e) {
-            throw new InputException(where, "not a number: '" + text + "'");
-        }
+        throw new InputException("row " + row + ", column " + column, "not a number: '" + cell + "'");
     }
 }

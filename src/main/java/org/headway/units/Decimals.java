@@ -46,9 +46,11 @@ public final class Decimals {
      * @return whether it follows the rule
      */
     public static boolean isPlainDecimal(String text) {
-        if (text == null) {
-            return false;
-        }
+        return text != null && isPlainDecimal((CharSequence) text);
+    }
+
+    /** {@link #isPlainDecimal(String)} on any characters, e.g. a view of a read buffer. */
+    public static boolean isPlainDecimal(CharSequence text) {
         int n = text.length();
         int i = 0;
         while (i < n && text.charAt(i) == ' ') {
@@ -90,6 +92,15 @@ public final class Decimals {
             }
         }
         return i == n;
+    }
+
+    /**
+     * {@link #parse(String)} on characters of an array, without making a string of them.
+     *
+     * @throws NumberFormatException where {@code Double.parseDouble} would throw it
+     */
+    public static double parse(char[] chars, int offset, int length) {
+        return NumberInput.parseDouble(chars, offset, length, true);
     }
 
     private static boolean isDigit(char c) {

@@ -122,7 +122,7 @@ class FrictionBatchFuzzTest {
         }
     }
 
-    private static String generate(Random random) {
+    static String generate(Random random) {
         return switch (random.nextInt(16)) {
             case 0 -> Fuzz.randomText(random, "0123456789,.-e \n\"re_lativughns", 200);
             case 1 -> Fuzz.randomBytesAsText(random, 300);
