@@ -16,6 +16,10 @@ final class CsvCells {
      * @param first true for the first cell of a record (no comma before it; empty is written {@code ""})
      */
     static void append(Utf8Text out, CharSequence cell, boolean first) {
+        if (cell instanceof CharSlice slice) {
+            append(out, slice, first);
+            return;
+        }
         if (!first) {
             out.append(',');
         }
@@ -54,6 +58,27 @@ final class CsvCells {
         }
         out.append(cell.subSequence(start, length));
         out.append('"');
+    }
+
+    /** {@link #append(Utf8Text, CharSequence, boolean)} on a view of an array, read directly. */
+    static void append(Utf8Text out, CharSlice cell, boolean first) {
+        char[] chars = cell.array();
+        int offset = cell.offset();
+        int length = cell.length();
+        int end = offset + length;
+        boolean plain = length > 0 ? chars[offset] > '#' && chars[end - 1] > ' ' : !first;
+        for (int i = offset; plain && i < end; i++) {
+            char c = chars[i];
+            plain = c != '\n' && c != '\r' && c != '"' && c != ',';
+        }
+        if (!plain) {
+            append(out, cell.toString(), first);
+            return;
+        }
+        if (!first) {
+            out.append(',');
+        }
+        out.append(chars, offset, length);
     }
 
     /** Ends a record. */

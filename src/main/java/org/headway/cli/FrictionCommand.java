@@ -247,7 +247,7 @@ public final class FrictionCommand implements Callable<Integer> {
     private static final int BLOCK_ROWS = 4096;
 
     /** One block's output text and its failed rows (the first few listed). */
-    private record Block(byte[] utf8, long failedCount, long[] listedFailures) {}
+    private record Block(CsvRecordReader.Block input, Utf8Text utf8, long failedCount, long[] listedFailures) {}
 
     /**
      * Streams the input file into the output; a bad row gets its error and the rest go on. The main
@@ -303,9 +303,16 @@ public final class FrictionCommand implements Callable<Integer> {
             CsvCells.endRecord(head);
             Writer target = null;
             java.io.OutputStream file = null;
+            boolean standardBytes = false;
             if (output == null) {
-                // Standard output belongs to picocli: written and flushed here, never closed.
+                // Standard output belongs to picocli: written and flushed here, never closed. Where it
+                // is the process's own, the blocks' bytes go straight to it after what was printed.
                 target = spec.commandLine().getOut();
+                file = HeadwayCommand.bytesBehind(spec.commandLine().getOut());
+                if (file != null) {
+                    target.flush();
+                    standardBytes = true;
+                }
             } else {
                 try {
                     temporary = org.headway.project.AtomicFiles.createTemporary(output);
@@ -318,11 +325,18 @@ public final class FrictionCommand implements Callable<Integer> {
                 file = Files.newOutputStream(temporary);
             }
             try {
-                write(head.toByteArray(), file, target);
+                write(head, file, target, standardBytes);
                 java.util.ArrayDeque<java.util.concurrent.Future<Block>> pending = new java.util.ArrayDeque<>();
                 boolean more = true;
+                // Blocks and output buffers go back to these once written: the batch reuses a few
+                // of each instead of allocating two large arrays per 4,096 rows.
+                java.util.ArrayDeque<CsvRecordReader.Block> freeBlocks = new java.util.ArrayDeque<>();
+                java.util.concurrent.ConcurrentLinkedQueue<Utf8Text> freeTexts =
+                        new java.util.concurrent.ConcurrentLinkedQueue<>();
                 while (more) {
-                    CsvRecordReader.Block records = new CsvRecordReader.Block();
+                    CsvRecordReader.Block records =
+                            freeBlocks.isEmpty() ? new CsvRecordReader.Block() : freeBlocks.poll();
+                    records.clear();
                     while (records.records < BLOCK_ROWS) {
                         if (!csv.readRecord(records)) {
                             more = false;
@@ -334,11 +348,14 @@ public final class FrictionCommand implements Callable<Integer> {
                     }
                     long firstRow = rows + 1;
                     rows += records.records;
-                    pending.add(workers.submit(
-                            () -> evaluateBlock(correlation, records, firstRow, columns, reColumn, roughnessColumn)));
+                    pending.add(workers.submit(() -> evaluateBlock(
+                            correlation, records, freeTexts, firstRow, columns, reColumn, roughnessColumn)));
                     while (pending.size() > 2 * threads || (!more && !pending.isEmpty())) {
                         Block block = finished(pending.poll());
-                        write(block.utf8(), file, target);
+                        write(block.utf8(), file, target, standardBytes);
+                        freeBlocks.add(block.input());
+                        block.utf8().clear();
+                        freeTexts.add(block.utf8());
                         failedCount += block.failedCount();
                         for (long row : block.listedFailures()) {
                             if (failed.size() < LISTED_FAILED_ROWS) {
@@ -350,8 +367,15 @@ public final class FrictionCommand implements Callable<Integer> {
                 if (target != null) {
                     target.flush();
                 }
+                if (standardBytes) {
+                    try {
+                        file.flush();
+                    } catch (IOException e) {
+                        throw new StandardOutputFailed(e);
+                    }
+                }
             } finally {
-                if (file != null) {
+                if (file != null && !standardBytes) {
                     file.close();
                 }
             }
@@ -365,6 +389,12 @@ public final class FrictionCommand implements Callable<Integer> {
                 }
                 temporary = null;
             }
+        } catch (StandardOutputFailed e) {
+            PrintWriter err = spec.commandLine().getErr();
+            err.println("headway: writing to standard output failed (a full disk or a closed pipe?); the output is"
+                    + " incomplete: " + e.getCause().getMessage());
+            err.flush();
+            return HeadwayCommand.EXIT_FAILED;
         } catch (IOException e) {
             if (output != null && !(e instanceof java.nio.charset.CharacterCodingException)) {
                 throw new InputException("--output " + output, "not written: " + e.getMessage(), e);
@@ -392,11 +422,26 @@ public final class FrictionCommand implements Callable<Integer> {
     }
 
     /** Writes UTF-8 bytes to the file, or as text to standard output. */
-    private static void write(byte[] utf8, java.io.OutputStream file, Writer target) throws IOException {
+    /** A write to the process's standard output failed (not a problem of the input). */
+    private static final class StandardOutputFailed extends RuntimeException {
+        StandardOutputFailed(IOException cause) {
+            super(cause);
+        }
+    }
+
+    private static void write(Utf8Text utf8, java.io.OutputStream file, Writer target, boolean standard)
+            throws IOException {
         if (file != null) {
-            file.write(utf8);
+            try {
+                utf8.writeTo(file);
+            } catch (IOException e) {
+                if (standard) {
+                    throw new StandardOutputFailed(e);
+                }
+                throw e;
+            }
         } else {
-            target.write(new String(utf8, StandardCharsets.UTF_8));
+            target.write(new String(utf8.toByteArray(), StandardCharsets.UTF_8));
         }
     }
 
@@ -423,11 +468,15 @@ public final class FrictionCommand implements Callable<Integer> {
     private static Block evaluateBlock(
             FrictionCorrelation correlation,
             CsvRecordReader.Block records,
+            java.util.Queue<Utf8Text> freeTexts,
             long firstRow,
             int columns,
             int reColumn,
             int roughnessColumn) {
-        Utf8Text out = new Utf8Text(records.length + records.records * (columns + 64));
+        Utf8Text out = freeTexts.poll();
+        if (out == null) {
+            out = new Utf8Text(records.length + records.records * (columns + 64));
+        }
         CharSlice slice = new CharSlice();
         long failedCount = 0;
         long[] listed = new long[LISTED_FAILED_ROWS];
@@ -444,9 +493,8 @@ public final class FrictionCommand implements Callable<Integer> {
                 }
             }
             try {
-                String where = "row " + row;
                 if (count != columns) {
-                    throw new InputException(where, "has " + count + " fields, the header has " + columns);
+                    throw new InputException("row " + row, "has " + count + " fields, the header has " + columns);
                 }
                 double re = number(field(records, first + reColumn, slice), row, REYNOLDS_COLUMN);
                 double rr = number(field(records, first + roughnessColumn, slice), row, ROUGHNESS_COLUMN);
@@ -454,7 +502,7 @@ public final class FrictionCommand implements Callable<Integer> {
                 try {
                     result = correlation.evaluate(re, rr);
                 } catch (InputException e) {
-                    throw e.at(where + ", ");
+                    throw e.at("row " + row + ", ");
                 }
                 CsvCells.append(out, org.headway.units.Decimals.format(result.frictionFactor()), false);
                 CsvCells.append(out, regime(result), false);
@@ -473,7 +521,7 @@ public final class FrictionCommand implements Callable<Integer> {
             }
             CsvCells.endRecord(out);
         }
-        return new Block(out.toByteArray(), failedCount, java.util.Arrays.copyOf(listed, listedCount));
+        return new Block(records, out, failedCount, java.util.Arrays.copyOf(listed, listedCount));
     }
 
     private static CharSlice field(CsvRecordReader.Block records, int field, CharSlice slice) {

@@ -57,18 +57,32 @@ public final class HeadwayCommand implements Runnable {
         return cl;
     }
 
+    /** The process's standard output as text and, behind it, as bytes. */
+    private record StandardOutput(PrintWriter text, java.io.OutputStream bytes) {}
+
+    private static volatile StandardOutput standardOutput;
+
+    /**
+     * The byte stream behind {@code out} when {@code out} is the process's standard output as set up
+     * by {@link #run}, so that a command writing much UTF-8 (the friction batch) can write its bytes
+     * directly after flushing {@code out}; null for any other writer (tests, a picocli default).
+     */
+    static java.io.OutputStream bytesBehind(PrintWriter out) {
+        StandardOutput s = standardOutput;
+        return s != null && s.text() == out ? s.bytes() : null;
+    }
+
     /** Runs the command line on the given arguments and returns the exit code. */
     public static int run(String... args) {
         // Standard output is buffered (one flush at the end, not one per line: a 10⁵-row table took
         // seconds line by line) and always UTF-8, whatever the platform charset. A failed write (a full
         // disk, a closed pipe) is reported and fails the command rather than leaving a silent truncation.
+        java.io.FileOutputStream stdout = new java.io.FileOutputStream(java.io.FileDescriptor.out);
         PrintWriter out = new PrintWriter(
                 new java.io.BufferedWriter(
-                        new java.io.OutputStreamWriter(
-                                new java.io.FileOutputStream(java.io.FileDescriptor.out),
-                                java.nio.charset.StandardCharsets.UTF_8),
-                        1 << 16),
+                        new java.io.OutputStreamWriter(stdout, java.nio.charset.StandardCharsets.UTF_8), 1 << 16),
                 false);
+        standardOutput = new StandardOutput(out, stdout);
         CommandLine cl = commandLine();
         cl.setOut(out);
         int code;

@@ -20,9 +20,34 @@ final class Utf8Text {
         return length;
     }
 
+    /** Empties the text, keeping its capacity. */
+    void clear() {
+        length = 0;
+    }
+
     /** The bytes written so far (a copy). */
     byte[] toByteArray() {
         return Arrays.copyOf(bytes, length);
+    }
+
+    /** Writes the bytes so far to {@code out}. */
+    void writeTo(java.io.OutputStream out) throws java.io.IOException {
+        out.write(bytes, 0, length);
+    }
+
+    /** Appends {@code count} characters of {@code chars} from {@code offset}. */
+    Utf8Text append(char[] chars, int offset, int count) {
+        ensure(count);
+        int end = offset + count;
+        for (int i = offset; i < end; i++) {
+            char c = chars[i];
+            if (c >= 0x80) {
+                // Rare in a data file: the rest goes the general way.
+                return append(java.nio.CharBuffer.wrap(chars, i, end - i));
+            }
+            bytes[length++] = (byte) c;
+        }
+        return this;
     }
 
     private void ensure(int more) {
@@ -41,6 +66,9 @@ final class Utf8Text {
     }
 
     Utf8Text append(CharSequence text) {
+        if (text instanceof CharSlice slice) {
+            return append(slice.array(), slice.offset(), slice.length());
+        }
         int n = text.length();
         ensure(n);
         for (int i = 0; i < n; i++) {

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.File;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
@@ -42,6 +43,55 @@ class StandardOutputTest {
         assertTrue(p.waitFor(60, TimeUnit.SECONDS));
         assertEquals(1, p.exitValue(), err);
         assertTrue(err.contains("writing to standard output failed"), err);
+    }
+
+    /** A batch file of 20,000 rows (several blocks) with a quoted, non-ASCII note column. */
+    private static Path batchFile(Path dir) throws Exception {
+        StringBuilder text = new StringBuilder("point,re,relative_roughness,note\n");
+        for (int i = 0; i < 20_000; i++) {
+            text.append("p")
+                    .append(i)
+                    .append(',')
+                    .append(1e4 + 37 * i)
+                    .append(",0.0002,\"Düse, Ø ")
+                    .append(i)
+                    .append("\"\n");
+        }
+        Path input = dir.resolve("points.csv");
+        Files.writeString(input, text, StandardCharsets.UTF_8);
+        return input;
+    }
+
+    @Test
+    @EnabledOnOs(OS.LINUX)
+    void aFrictionBatchOntoAFullDiskFailsTheCommand(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        Process p = headway("friction", "--input", batchFile(dir).toString())
+                .redirectOutput(new File("/dev/full"))
+                .start();
+        String err = new String(p.getErrorStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        assertEquals(1, p.exitValue(), err);
+        assertTrue(err.contains("writing to standard output failed"), err);
+        assertEquals(1, err.lines().count(), err);
+    }
+
+    @Test
+    void aFrictionBatchOnStandardOutputIsTheFileItWouldWrite(@org.junit.jupiter.api.io.TempDir Path dir)
+            throws Exception {
+        Path input = batchFile(dir);
+        Path file = dir.resolve("out.csv");
+        Process toFile = headway("friction", "--input", input.toString(), "--output", file.toString())
+                .start();
+        toFile.getInputStream().readAllBytes();
+        assertTrue(toFile.waitFor(60, TimeUnit.SECONDS));
+        assertEquals(0, toFile.exitValue());
+        Process toStdout = headway("friction", "--input", input.toString()).start();
+        byte[] printed = toStdout.getInputStream().readAllBytes();
+        assertTrue(toStdout.waitFor(60, TimeUnit.SECONDS));
+        assertEquals(0, toStdout.exitValue());
+        byte[] written = Files.readAllBytes(file);
+        org.junit.jupiter.api.Assertions.assertArrayEquals(written, printed);
+        assertTrue(new String(written, StandardCharsets.UTF_8).contains("\"Düse, Ø 19999\""));
     }
 
     @Test
