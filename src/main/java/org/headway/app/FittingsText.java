@@ -5,18 +5,24 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.headway.caution.InputException;
+import org.headway.pipe.BoreChange;
 import org.headway.pipe.Catalog;
 import org.headway.project.Project;
 
 /**
  * A segment's fittings as one line of text, e.g. {@code entrance-rounded, gate-valve ×2,
  * tee-branch K=1.3}: catalog ids separated by commas, each with an optional count ({@code ×2},
- * {@code x2} or {@code *2}) and an optional loss coefficient that replaces the catalog's.
+ * {@code x2} or {@code *2}) and an optional loss coefficient that replaces the catalog's; and a
+ * reducer or enlarger at the pipe's outlet as {@code bore-change to 73.6 mm} or {@code bore-change to
+ * 73.6 mm cone 30} (the included cone angle in degrees; sudden without it).
  */
 final class FittingsText {
 
     private static final Pattern ITEM =
             Pattern.compile("^([^\\s×*,]+?)(?:\\s*[×xX*]\\s*(\\d+))?(?:\\s+K\\s*=\\s*(\\S+))?$");
+
+    private static final Pattern BORE_CHANGE =
+            Pattern.compile("^bore-change\\s+to\\s+(.+?)(?:\\s+cone\\s+([^\\s°]+)\\s*°?)?$", Pattern.CASE_INSENSITIVE);
 
     private FittingsText() {}
 
@@ -24,6 +30,11 @@ final class FittingsText {
     static String format(List<Project.FittingSpec> fittings) {
         List<String> items = new ArrayList<>();
         for (Project.FittingSpec f : fittings) {
+            if (f.kind().equals(BoreChange.KIND)) {
+                items.add(BoreChange.KIND + " to " + f.toDiameter()
+                        + (f.includedAngleDegrees().isEmpty() ? "" : " cone " + f.includedAngleDegrees()));
+                continue;
+            }
             String item = f.kind() + (f.count() == 1 ? "" : " ×" + f.count());
             if (!f.lossCoefficient().isEmpty()) {
                 item += " K=" + f.lossCoefficient();
@@ -56,6 +67,22 @@ final class FittingsText {
             String where = "fittings item " + (i + 1);
             if (item.isEmpty()) {
                 throw new InputException(where, "empty item; separate fittings with single commas");
+            }
+            Matcher change = BORE_CHANGE.matcher(item);
+            if (change.matches()) {
+                String to = change.group(1).strip();
+                String cone = change.group(2) == null ? "" : change.group(2);
+                if (to.contains(",")) {
+                    throw new InputException(where, "expected \"bore-change to 73.6 mm\", got \"" + item + "\"");
+                }
+                list.add(new Project.FittingSpec(BoreChange.KIND, 1, "", to, cone));
+                continue;
+            }
+            if (item.toLowerCase(java.util.Locale.ROOT).startsWith(BoreChange.KIND)) {
+                throw new InputException(
+                        where,
+                        "a bore change is written \"bore-change to 73.6 mm\" (optionally \"cone 30\"), got \"" + item
+                                + "\"");
             }
             Matcher m = ITEM.matcher(item);
             if (!m.matches()) {

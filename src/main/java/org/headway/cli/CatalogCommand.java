@@ -155,8 +155,9 @@ public final class CatalogCommand implements Callable<Integer> {
     }
 
     private void sizes(Catalog catalog, List<List<String>> rows) {
-        rows.add(List.of("table", "nominal", "schedule", "od_mm", "wall_mm", "id_mm"));
+        List<String> header = new ArrayList<>(List.of("table", "nominal", "schedule", "od_mm", "wall_mm", "id_mm"));
         List<String> ids = table == null ? catalog.tables() : List.of(table.strip());
+        List<PipeSize> listed = new ArrayList<>();
         for (String id : ids) {
             boolean scheduleHere = schedule == null
                     || catalog.schedules(id).stream().anyMatch(s -> s.equalsIgnoreCase(schedule.strip()));
@@ -165,15 +166,28 @@ public final class CatalogCommand implements Callable<Integer> {
             }
             for (PipeSize s : catalog.sizes(id, schedule)) {
                 if (kept(s.nominal(), s.table())) {
-                    rows.add(List.of(
-                            s.table(),
-                            s.nominal(),
-                            s.schedule(),
-                            mm(s.outsideDiameter()),
-                            mm(s.wallThickness()),
-                            mm(s.innerDiameter())));
+                    listed.add(s);
                 }
             }
+        }
+        // a lined table (cement-mortar lined ductile iron) shows its lining; other listings keep their columns
+        boolean lined = listed.stream().anyMatch(s -> s.liningThickness() > 0);
+        if (lined) {
+            header.add("lining_mm");
+        }
+        rows.add(header);
+        for (PipeSize s : listed) {
+            List<String> row = new ArrayList<>(List.of(
+                    s.table(),
+                    s.nominal(),
+                    s.schedule(),
+                    mm(s.outsideDiameter()),
+                    mm(s.wallThickness()),
+                    mm(s.innerDiameter())));
+            if (lined) {
+                row.add(mm(s.liningThickness()));
+            }
+            rows.add(row);
         }
         if (rows.size() == 1 && schedule != null && table == null) {
             throw new InputException("--schedule", "no size table has schedule " + schedule);

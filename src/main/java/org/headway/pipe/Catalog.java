@@ -48,7 +48,10 @@ public final class Catalog {
             "sizes-asme-b36.10m.csv",
             "sizes-asme-b36.19m.csv",
             "sizes-astm-b88.csv",
-            "sizes-astm-d1785.csv");
+            "sizes-astm-d1785.csv",
+            "sizes-en-10255.csv",
+            "sizes-en-545.csv",
+            "sizes-iso-4427.csv");
 
     static final List<String> MATERIAL_COLUMNS = List.of(
             "id", "name", "roughness_mm", "roughness_low_mm", "roughness_high_mm", "condition", "size_table", "source");
@@ -56,6 +59,12 @@ public final class Catalog {
     static final List<String> MATERIAL_OPTIONAL_COLUMNS = List.of("hw_c", "hw_c_source");
 
     static final List<String> SIZE_COLUMNS = List.of("nominal", "schedule", "od_mm", "wall_mm");
+    /**
+     * Optional size column: {@code lining_mm}, an internal lining (cement mortar) inside the wall;
+     * the bore is then OD − 2·wall − 2·lining.
+     */
+    static final List<String> SIZE_OPTIONAL_COLUMNS = List.of("lining_mm");
+
     static final List<String> FITTING_COLUMNS =
             List.of("id", "description", "method", "k", "k1", "k_inf", "k_d", "source");
 
@@ -406,7 +415,7 @@ public final class Catalog {
                             "a size table file is named sizes-<table>.csv with a table id of letters, digits,"
                                     + " '.', '-' or '_'; got '" + fileName + "'");
                 }
-                addSizes(table, CatalogFile.parse(label, text, SIZE_COLUMNS));
+                addSizes(table, CatalogFile.parse(label, text, SIZE_COLUMNS, SIZE_OPTIONAL_COLUMNS));
             }
         }
 
@@ -506,7 +515,18 @@ public final class Catalog {
                                     + " differs from " + earlier + " mm on line " + outsideLine.get(nominal)
                                     + "; one nominal size has one outside diameter in a table");
                 }
-                double inner = outside - 2.0 * wall;
+                double lining = file.isBlank(row, "lining_mm") ? 0.0 : file.nonNegative(row, "lining_mm");
+                double inner = outside - 2.0 * wall - 2.0 * lining;
+                if (!(inner > 0)) {
+                    throw file.error(
+                            row,
+                            "lining_mm",
+                            "wall " + row.cells().get("wall_mm") + " mm and lining "
+                                    + row.cells().get("lining_mm")
+                                    + " mm leave no bore inside the outside diameter "
+                                    + row.cells().get("od_mm")
+                                    + " mm");
+                }
                 rows.put(
                         key,
                         new PipeSize(
@@ -516,7 +536,8 @@ public final class Catalog {
                                 outside * METRES_PER_MILLIMETRE,
                                 wall * METRES_PER_MILLIMETRE,
                                 inner * METRES_PER_MILLIMETRE,
-                                file.source()));
+                                file.source(),
+                                lining * METRES_PER_MILLIMETRE));
             }
         }
 

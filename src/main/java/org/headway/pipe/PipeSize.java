@@ -12,9 +12,11 @@ import java.util.regex.Pattern;
  * @param nominal nominal size as the standard writes it, e.g. {@code 2}, {@code 1-1/2}, {@code 3/4}
  * @param schedule schedule, type or class, e.g. {@code 40}, {@code 10S}, {@code L}
  * @param outsideDiameter outside diameter (m)
- * @param wallThickness nominal wall thickness (m)
- * @param innerDiameter inner diameter = OD − 2·wall (m)
+ * @param wallThickness wall thickness (m), nominal or minimum as the table's header says
+ * @param innerDiameter inner diameter = OD − 2·wall − 2·lining (m)
  * @param source standard, edition and table
+ * @param liningThickness thickness of an internal lining such as cement mortar (m), 0 for an unlined
+ *     pipe; the lining sits inside the wall and narrows the bore
  */
 public record PipeSize(
         String table,
@@ -23,7 +25,20 @@ public record PipeSize(
         double outsideDiameter,
         double wallThickness,
         double innerDiameter,
-        String source) {
+        String source,
+        double liningThickness) {
+
+    /** An unlined size (inner diameter = OD − 2·wall). */
+    public PipeSize(
+            String table,
+            String nominal,
+            String schedule,
+            double outsideDiameter,
+            double wallThickness,
+            double innerDiameter,
+            String source) {
+        this(table, nominal, schedule, outsideDiameter, wallThickness, innerDiameter, source, 0.0);
+    }
 
     private static final Pattern DN = Pattern.compile("(?i)DN\\s*(\\d+(?:\\.\\d+)?)");
     private static final Pattern INCHES = Pattern.compile("(?:(\\d+)[- ])?(\\d+(?:\\.\\d+)?)(?:/(\\d+))?");

@@ -83,7 +83,10 @@ public final class LineList {
             "speed_ratio",
             "npsh_required",
             "design_flow",
-            "setting");
+            "setting",
+            "inlet_diameter",
+            "outlet_diameter",
+            "cone_angle");
 
     /** Link kinds a line list may name. */
     public static final List<String> LINK_KINDS = List.of(
@@ -96,7 +99,8 @@ public final class LineList {
             "pressure-sustaining",
             "pump",
             "closed",
-            "open");
+            "open",
+            "reducer");
 
     /** Largest line-list file read (bytes): far beyond any real network's list. */
     public static final long MAX_BYTES = 512L * 1024 * 1024;
@@ -403,6 +407,7 @@ public final class LineList {
                 case "pump" -> List.of("pump_curve", "speed_ratio", "npsh_required");
                 case "component" -> List.of("rated_pressure_drop", "rated_flow", "exponent");
                 case "valve" -> List.of("kv", "cv");
+                case "reducer" -> List.of("inlet_diameter", "outlet_diameter", "cone_angle");
                 case "flow-control", "pressure-reducing", "pressure-sustaining" ->
                     List.of("setting", "kv", "cv", "loss_coefficient", "diameter");
                 default -> List.of("kv", "cv", "loss_coefficient", "diameter");
@@ -553,6 +558,20 @@ public final class LineList {
             case "closed", "open" -> {
                 deviceKind = "isolation";
                 values.put("status", kind);
+            }
+            case "reducer" -> {
+                String in = r.quantity("inlet_diameter", QuantityKind.DIAMETER);
+                String out = r.quantity("outlet_diameter", QuantityKind.DIAMETER);
+                if (in.isEmpty() || out.isEmpty()) {
+                    throw r.error(
+                            in.isEmpty() ? "inlet_diameter" : "outlet_diameter",
+                            "a reducer link needs its inlet_diameter and outlet_diameter (the bores at its from and"
+                                    + " to ends)");
+                }
+                values.put("inletDiameter", in);
+                values.put("outletDiameter", out);
+                putIf(values, "includedAngleDegrees", r.quantity("cone_angle", QuantityKind.DIMENSIONLESS));
+                return new Project.DeviceSpec(deviceKind, id, r.text("name"), values);
             }
             default -> {}
         }

@@ -572,11 +572,27 @@ public record Project(
     public record PipeSpec(String material, String size, String schedule) {}
 
     /**
-     * @param kind fitting id in the catalog, or {@code fitted:PATH} for a saved K-vs-Re correlation
+     * @param kind fitting id in the catalog, {@code fitted:PATH} for a saved K-vs-Re correlation, or
+     *     {@code bore-change} for a reducer or enlarger at the pipe's outlet
      * @param count how many
      * @param lossCoefficient explicit K override (optional)
+     * @param toDiameter a {@code bore-change}'s bore after the change (a length as typed), else empty
+     * @param includedAngleDegrees a {@code bore-change}'s included cone angle in degrees (optional,
+     *     default 180: sudden), else empty
      */
-    public record FittingSpec(String kind, int count, String lossCoefficient) {}
+    public record FittingSpec(
+            String kind, int count, String lossCoefficient, String toDiameter, String includedAngleDegrees) {
+
+        public FittingSpec {
+            toDiameter = toDiameter == null ? "" : toDiameter;
+            includedAngleDegrees = includedAngleDegrees == null ? "" : includedAngleDegrees;
+        }
+
+        /** A catalog or fitted fitting (no bore change). */
+        public FittingSpec(String kind, int count, String lossCoefficient) {
+            this(kind, count, lossCoefficient, "", "");
+        }
+    }
 
     /** Source and delivery end. */
     public record EndsSpec(EndSpec source, EndSpec delivery) {

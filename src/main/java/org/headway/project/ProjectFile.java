@@ -384,6 +384,8 @@ public final class ProjectFile {
                     fn.put("kind", fit.kind());
                     fn.put("count", fit.count());
                     putIf(fn, "lossCoefficient", fit.lossCoefficient());
+                    putIf(fn, "toDiameter", fit.toDiameter());
+                    putIf(fn, "includedAngleDegrees", fit.includedAngleDegrees());
                 }
             }
             putIf(n, "lossCoefficient", s.lossCoefficient());
@@ -623,12 +625,17 @@ public final class ProjectFile {
             ArrayNode fits = s.array("fittings", false);
             for (int j = 0; j < fits.size(); j++) {
                 Obj fit = new Obj(fits.get(j), s.path + ".fittings[" + j + "]");
-                fit.allow("kind", "count", "lossCoefficient");
+                fit.allow("kind", "count", "lossCoefficient", "toDiameter", "includedAngleDegrees");
                 int count = fit.integer("count", false, 1);
                 if (count < 1) {
                     throw new InputException(fit.path + ".count", "must be at least 1, got " + count);
                 }
-                fittings.add(new Project.FittingSpec(fit.text("kind", true), count, fit.quantity("lossCoefficient")));
+                fittings.add(new Project.FittingSpec(
+                        fit.text("kind", true),
+                        count,
+                        fit.quantity("lossCoefficient"),
+                        fit.quantity("toDiameter"),
+                        fit.quantity("includedAngleDegrees")));
             }
         }
         String name = s.has("name") ? s.text("name", true) : defaultName;

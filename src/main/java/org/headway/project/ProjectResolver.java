@@ -13,6 +13,7 @@ import org.headway.fluid.FluidState;
 import org.headway.fluid.Fluids;
 import org.headway.friction.FrictionCorrelation;
 import org.headway.friction.FrictionMethods;
+import org.headway.pipe.BoreChange;
 import org.headway.pipe.Catalog;
 import org.headway.pipe.Fitting;
 import org.headway.pipe.HazenWilliamsCoefficient;
@@ -319,6 +320,7 @@ public final class ProjectResolver {
                 ? null
                 : attempt("inletLevel", () -> Quantities.parse(p.inletLevel(), QuantityKind.LENGTH, "inletLevel"));
         List<Element> elements = new ArrayList<>();
+        List<PendingReducer> pendingReducers = new ArrayList<>();
         double level = inletLevel == null ? 0 : inletLevel;
         int pipeIndex = 0;
         for (int i = 0; i < p.elements().size(); i++) {
@@ -342,10 +344,25 @@ public final class ProjectResolver {
                     elements.add(pump);
                 }
             } else if (spec instanceof Project.DeviceSpec d) {
+                if (d.kind().equals("reducer")
+                        && (d.value("inletDiameter").isEmpty()
+                                || d.value("outletDiameter").isEmpty())) {
+                    // its bores come from the pipes either side, resolved after the loop
+                    pendingReducers.add(new PendingReducer(d, path, elements.size()));
+                    continue;
+                }
                 Element e = attempt(path, () -> device(d, fluid));
                 if (e != null) {
                     elements.add(e);
                 }
+            }
+        }
+        // with a pipe already refused, its neighbour's bore is unknown: the run fails on that problem
+        for (int r = problems.isEmpty() ? pendingReducers.size() - 1 : -1; r >= 0; r--) {
+            PendingReducer pending = pendingReducers.get(r);
+            Element e = attempt(pending.path(), () -> reducerBetweenPipes(pending, elements));
+            if (e != null) {
+                elements.add(pending.position(), e);
             }
         }
         double density = fluid == null ? 1000 : fluid.density();
@@ -689,6 +706,16 @@ public final class ProjectResolver {
             Project.FittingSpec fs = spec.fittings().get(j);
             String path = "fittings[" + j + "]";
             Fitting fitting;
+            if (fs.kind().strip().equals(BoreChange.KIND)) {
+                b.fitting(new FittingUse(boreChange(fs, path), fs.count()));
+                continue;
+            }
+            if (!fs.toDiameter().isEmpty() || !fs.includedAngleDegrees().isEmpty()) {
+                throw new InputException(
+                        path + (fs.toDiameter().isEmpty() ? ".includedAngleDegrees" : ".toDiameter"),
+                        "only a " + BoreChange.KIND + " fitting takes a bore and a cone angle; " + fs.kind()
+                                + " is a catalog fitting");
+            }
             try {
                 if (!fs.lossCoefficient().isEmpty()) {
                     double k = Quantities.parse(fs.lossCoefficient(), QuantityKind.DIMENSIONLESS, "lossCoefficient");
@@ -793,6 +820,104 @@ public final class ProjectResolver {
         }
     }
 
+    /** A pipe's {@code bore-change} fitting: a reducer or enlarger at its outlet to {@code toDiameter}. */
+    private static BoreChange boreChange(Project.FittingSpec fs, String path) {
+        if (fs.count() != 1) {
+            throw new InputException(
+                    path + ".count", "a bore change happens once at the pipe's outlet; got " + fs.count());
+        }
+        if (!fs.lossCoefficient().isEmpty()) {
+            throw new InputException(
+                    path + ".lossCoefficient",
+                    "a bore change takes its K from the two bores; to give a K yourself use a catalog fitting id"
+                            + " with lossCoefficient");
+        }
+        if (fs.toDiameter().isEmpty()) {
+            throw new InputException(path + ".toDiameter", "missing; give the bore after the change, e.g. \"73.6 mm\"");
+        }
+        double to;
+        double angle;
+        try {
+            to = Quantities.parse(fs.toDiameter(), QuantityKind.DIAMETER, "toDiameter");
+        } catch (InputException e) {
+            throw new InputException(path + ".toDiameter", e.problem());
+        }
+        try {
+            angle = fs.includedAngleDegrees().isEmpty()
+                    ? Math.PI
+                    : Math.toRadians(Quantities.parse(
+                            fs.includedAngleDegrees(), QuantityKind.DIMENSIONLESS, "includedAngleDegrees"));
+        } catch (InputException e) {
+            throw new InputException(path + ".includedAngleDegrees", e.problem());
+        }
+        if (to > Segment.MAX_DIAMETER) {
+            throw new InputException(
+                    path + ".toDiameter",
+                    "a bore of " + to + " m is beyond the plausible limit of " + Segment.MAX_DIAMETER
+                            + " m; check the unit");
+        }
+        try {
+            return new BoreChange(BoreChange.KIND, to, angle);
+        } catch (InputException e) {
+            throw new InputException(path + "." + e.where(), e.problem());
+        }
+    }
+
+    /** A reducer of a series run whose inlet or outlet bore is left to the pipes beside it. */
+    private record PendingReducer(Project.DeviceSpec spec, String path, int position) {}
+
+    /**
+     * A reducer with a blank {@code inletDiameter} takes the bore of the nearest pipe upstream of it in
+     * the run, a blank {@code outletDiameter} that of the nearest pipe downstream (so a change between
+     * two catalog sizes needs no bore typed by hand).
+     *
+     * @param pending the reducer and the place in {@code elements} where it belongs
+     * @param elements the run's other elements, in flow order, reducers not yet inserted
+     */
+    private static Element reducerBetweenPipes(PendingReducer pending, List<Element> elements) {
+        Project.DeviceSpec d = pending.spec();
+        double in;
+        if (d.value("inletDiameter").isEmpty()) {
+            in = Double.NaN;
+            for (int j = pending.position() - 1; j >= 0 && Double.isNaN(in); j--) {
+                if (elements.get(j) instanceof Segment s) {
+                    in = s.innerDiameter();
+                }
+            }
+            if (Double.isNaN(in)) {
+                throw new InputException(
+                        "inletDiameter",
+                        "missing, and no pipe comes before the reducer to take it from; give the bore at its inlet");
+            }
+        } else {
+            in = Quantities.parse(d.value("inletDiameter"), QuantityKind.DIAMETER, "inletDiameter");
+        }
+        double out;
+        if (d.value("outletDiameter").isEmpty()) {
+            out = Double.NaN;
+            for (int j = pending.position(); j < elements.size() && Double.isNaN(out); j++) {
+                if (elements.get(j) instanceof Segment s) {
+                    out = s.innerDiameter();
+                }
+            }
+            if (Double.isNaN(out)) {
+                throw new InputException(
+                        "outletDiameter",
+                        "missing, and no pipe comes after the reducer to take it from; give the bore at its outlet");
+            }
+        } else {
+            out = Quantities.parse(d.value("outletDiameter"), QuantityKind.DIAMETER, "outletDiameter");
+        }
+        return new DiameterChange(d.id(), d.name(), in, out, includedAngle(d));
+    }
+
+    private static double includedAngle(Project.DeviceSpec d) {
+        return d.value("includedAngleDegrees").isEmpty()
+                ? DiameterChange.SUDDEN
+                : Math.toRadians(Quantities.parse(
+                        d.value("includedAngleDegrees"), QuantityKind.DIMENSIONLESS, "includedAngleDegrees"));
+    }
+
     private static Element device(Project.DeviceSpec d, FluidState fluid) {
         switch (d.kind()) {
             case "valve" -> {
@@ -807,13 +932,18 @@ public final class ProjectResolver {
                 return new RatedComponent(d.id(), d.name(), dp, q, n);
             }
             case "reducer" -> {
+                if (d.value("inletDiameter").isEmpty()
+                        || d.value("outletDiameter").isEmpty()) {
+                    // a network link has no pipes "either side" in a run order
+                    String key = d.value("inletDiameter").isEmpty() ? "inletDiameter" : "outletDiameter";
+                    throw new InputException(
+                            key,
+                            "missing; a reducer that is a network link needs both bores (inletDiameter and"
+                                    + " outletDiameter)");
+                }
                 double in = Quantities.parse(d.value("inletDiameter"), QuantityKind.DIAMETER, "inletDiameter");
                 double out = Quantities.parse(d.value("outletDiameter"), QuantityKind.DIAMETER, "outletDiameter");
-                double angle = d.value("includedAngleDegrees").isEmpty()
-                        ? DiameterChange.SUDDEN
-                        : Math.toRadians(Quantities.parse(
-                                d.value("includedAngleDegrees"), QuantityKind.DIMENSIONLESS, "includedAngleDegrees"));
-                return new DiameterChange(d.id(), d.name(), in, out, angle);
+                return new DiameterChange(d.id(), d.name(), in, out, includedAngle(d));
             }
             case "check-valve" -> {
                 return new CheckValve(d.id(), d.name(), localLoss(d, true));

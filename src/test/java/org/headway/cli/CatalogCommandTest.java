@@ -34,7 +34,7 @@ class CatalogCommandTest {
         assertTrue(text.startsWith("id "), text);
         // Moody (1944): commercial steel 0.046 mm (from memory)
         assertTrue(text.lines().anyMatch(l -> l.startsWith("steel-commercial-new ") && l.contains(" 0.046 ")), text);
-        assertTrue(text.contains("13 materials"), text);
+        assertTrue(text.contains("14 materials"), text);
         assertEquals("", err.toString());
     }
 

@@ -33,8 +33,10 @@ class CatalogBundledTest {
     @Test
     void bundledIsCachedAndHoldsEveryFile() {
         assertSame(catalog, Catalog.bundled());
-        assertEquals(13, catalog.materials().size());
-        assertEquals(List.of("asme-b36.10m", "asme-b36.19m", "astm-b88", "astm-d1785"), catalog.tables());
+        assertEquals(14, catalog.materials().size());
+        assertEquals(
+                List.of("asme-b36.10m", "asme-b36.19m", "astm-b88", "astm-d1785", "en-10255", "en-545", "iso-4427"),
+                catalog.tables());
         Set<String> methods =
                 catalog.fittings().stream().map(Fitting::method).collect(Collectors.toCollection(TreeSet::new));
         assertEquals(Set.of("fixed K", "2-K (Hooper 1981)", "3-K (Darby 2001)"), methods);
