@@ -16,7 +16,8 @@ import org.headway.units.QuantityKind;
  * has them; otherwise a tree in layers from its fixed heads (the PDF sheet's layout, {@link
  * NetworkSchematic#layered}) and a network with loops by stress majorisation from that start
  * (Gansner, Koren &amp; North 2004: graph distances in links, weights 1/d², a fixed number of
- * rounds), which draws each loop open instead of folding it onto a layer.
+ * rounds; a few seeded starts, the one with the fewest crossed links kept), which draws each loop
+ * open instead of folding it onto a layer.
  *
  * @param nodeIds node ids in row order
  * @param x x per node (drawing units, east)
@@ -31,7 +32,27 @@ record SchematicLayout(List<String> nodeIds, double[] x, double[] y, int[] from,
     static final int STRESS_ROUNDS = 300;
 
     /** Above this many nodes loops are drawn in layers too (stress majorisation is O(n²) a round). */
-    static final int STRESS_LIMIT = 600;
+    static final int STRESS_LIMIT = 200;
+
+    /** Starts of stress majorisation tried while links still cross. */
+    static final int STARTS = 6;
+
+    /** Pairs of links that cross (links sharing a node do not count). */
+    static int crossings(int[] ef, int[] et, double[] x, double[] y) {
+        int count = 0;
+        for (int a = 0; a < ef.length; a++) {
+            for (int b = a + 1; b < ef.length; b++) {
+                if (ef[a] == ef[b] || ef[a] == et[b] || et[a] == ef[b] || et[a] == et[b]) {
+                    continue;
+                }
+                if (java.awt.geom.Line2D.linesIntersect(
+                        x[ef[a]], y[ef[a]], x[et[a]], y[et[a]], x[ef[b]], y[ef[b]], x[et[b]], y[et[b]])) {
+                    count++;
+                }
+            }
+        }
+        return count;
+    }
 
     static SchematicLayout of(NetworkEditor.Draft d) {
         int n = d.nodes().size();
@@ -81,8 +102,30 @@ record SchematicLayout(List<String> nodeIds, double[] x, double[] y, int[] from,
         if (components(n, ef, et) + edges.size() == n || n > STRESS_LIMIT) {
             return new SchematicLayout(ids, x, y, from, to, "layers");
         }
-        stress(n, ef, et, x, y);
-        return new SchematicLayout(ids, x, y, from, to, "stress");
+        // Stress has local minima with crossed links; a few seeded starts, the fewest crossings kept.
+        double[] bestX = null;
+        double[] bestY = null;
+        int bestCrossings = Integer.MAX_VALUE;
+        java.util.Random random = new java.util.Random(1);
+        for (int attempt = 0; attempt < STARTS && bestCrossings > 0; attempt++) {
+            double[] tx = x.clone();
+            double[] ty = y.clone();
+            if (attempt > 0) {
+                for (int i = 0; i < n; i++) {
+                    ty[i] += (random.nextDouble() - 0.5) * n * 0.5;
+                    tx[i] += (random.nextDouble() - 0.5);
+                }
+            }
+            stress(n, ef, et, tx, ty);
+            int c = crossings(ef, et, tx, ty);
+            if (c < bestCrossings) {
+                bestCrossings = c;
+                bestX = tx;
+                bestY = ty;
+            }
+        }
+        levelMainAxis(bestX, bestY);
+        return new SchematicLayout(ids, bestX, bestY, from, to, "stress");
     }
 
     private static List<List<Integer>> adjacency(int n, int[] ef, int[] et) {
@@ -118,6 +161,38 @@ record SchematicLayout(List<String> nodeIds, double[] x, double[] y, int[] from,
             }
         }
         return count;
+    }
+
+    /**
+     * Turns the drawing so that its longest extent runs across (stress fixes shape, not turn), the
+     * way a screen and a sheet are wider than tall; the first node stays on the left.
+     */
+    private static void levelMainAxis(double[] x, double[] y) {
+        int n = x.length;
+        double mx = Arrays.stream(x).average().orElse(0);
+        double my = Arrays.stream(y).average().orElse(0);
+        double sxx = 0;
+        double syy = 0;
+        double sxy = 0;
+        for (int i = 0; i < n; i++) {
+            sxx += (x[i] - mx) * (x[i] - mx);
+            syy += (y[i] - my) * (y[i] - my);
+            sxy += (x[i] - mx) * (y[i] - my);
+        }
+        double angle = 0.5 * Math.atan2(2 * sxy, sxx - syy);
+        double c = Math.cos(-angle);
+        double s = Math.sin(-angle);
+        for (int i = 0; i < n; i++) {
+            double dx = x[i] - mx;
+            double dy = y[i] - my;
+            x[i] = c * dx - s * dy;
+            y[i] = s * dx + c * dy;
+        }
+        if (n > 0 && x[0] > 0) {
+            for (int i = 0; i < n; i++) {
+                x[i] = -x[i];
+            }
+        }
     }
 
     /** Stress majorisation in place; nodes in separate parts sit a few links apart. */
