@@ -126,6 +126,9 @@ public final class MainWindow {
         root.getStyleClass().add("headway");
         networkShown.addListener((o, a, b) -> {
             root.setCenter(b ? networkView : runWorkspace);
+            if (b) {
+                javafx.application.Platform.runLater(networkView::focusTable);
+            }
             // The cautions panel speaks of the series run; the network's cautions are in its status line.
             cautions.setVisible(!b);
             cautions.setManaged(!b);
@@ -214,7 +217,16 @@ public final class MainWindow {
     /** Puts the window on a stage: title bound, close asks about unsaved changes. */
     public void attach(Stage stage, double width, double height) {
         stage.setScene(scene(width, height));
-        stage.titleProperty().bind(editor.windowTitleProperty());
+        stage.titleProperty()
+                .bind(Bindings.createStringBinding(
+                        () -> networkShown.get()
+                                ? (network.dirtyProperty().get() ? "• " : "") + networkName() + " — network — Headway"
+                                : editor.windowTitleProperty().get(),
+                        networkShown,
+                        network.dirtyProperty(),
+                        network.fileProperty(),
+                        network.draftProperty(),
+                        editor.windowTitleProperty()));
         stage.setOnShown(e -> editorView.focusTable());
         stage.setMinWidth(1000);
         stage.setMinHeight(640);

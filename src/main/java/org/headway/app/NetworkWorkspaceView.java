@@ -732,6 +732,11 @@ final class NetworkWorkspaceView extends BorderPane {
         showProblem(editor.problemProperty().get());
     }
 
+    /** Puts the keyboard in the node table (not the fluid field) when the workspace shows. */
+    void focusTable() {
+        nodes.requestFocus();
+    }
+
     /** The solve last started (tests). */
     Task<NetworkSolution> solving() {
         return solving;

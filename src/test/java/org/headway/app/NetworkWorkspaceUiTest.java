@@ -198,6 +198,12 @@ class NetworkWorkspaceUiTest {
         String shown = fx.window.networkView().linkText(0, "flow");
         assertEquals("6.000 L/s", shown);
 
+        // An edit after the solve marks the results as older than the list.
+        assertFalse(fx.window.network().staleProperty().get());
+        typeCell(robot, "node-table", "node-demand", 3, "2.6 L/s");
+        assertTrue(fx.window.network().staleProperty().get());
+        robot.interact(() -> fx.window.network().undo());
+        assertFalse(fx.window.network().staleProperty().get(), "back to the list solved");
         // The exported list reads back through the line-list reader as the workspace holds it.
         Project.NetworkSpec back = LineList.read(nodes, links, Catalog.bundled(), false);
         assertEquals(fx.window.network().project().network().orElseThrow(), back);
@@ -251,6 +257,14 @@ class NetworkWorkspaceUiTest {
         buildLoop(robot);
         solve(robot, fx);
         SchematicView view = fx.window.networkView().schematic();
+        // The wheel zooms about the cursor; a click still finds the node where it is now drawn.
+        double before = view.nodePoint(3)[0] - view.nodePoint(1)[0];
+        robot.moveTo(view);
+        robot.scroll(3, javafx.geometry.VerticalDirection.UP);
+        WaitForAsyncUtils.waitForFxEvents();
+        double after = view.nodePoint(3)[0] - view.nodePoint(1)[0];
+        assertTrue(Math.abs(after) != Math.abs(before), "zoomed: " + before + " → " + after);
+        robot.interact(view::fit);
         // Click on node N3 in the drawing: its table row is selected.
         double[] p = view.nodePoint(2);
         Point2D screen = view.localToScreen(p[0], p[1]);
