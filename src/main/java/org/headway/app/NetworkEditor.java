@@ -168,7 +168,8 @@ public final class NetworkEditor {
         draft.set(blank);
         saved.set(blank);
         dirty = Bindings.createBooleanBinding(() -> !draft.get().equals(saved.get()), draft, saved);
-        draft.addListener((o, a, b) -> stale.set(solution.get() != null && !solution.get().draft().equals(b)));
+        draft.addListener((o, a, b) ->
+                stale.set(solution.get() != null && !solution.get().draft().equals(b)));
     }
 
     /** A new network: a reservoir feeding one junction through one pipe. */

@@ -87,6 +87,15 @@ final class NetworkWorkspaceView extends BorderPane {
     private final Label status = new Label("Not solved yet");
     private final ProgressBar progress = new ProgressBar();
     private final Button cancel = new Button("Cancel solve");
+
+    Button cancelButton() {
+        return cancel;
+    }
+
+    Label statusLabel() {
+        return status;
+    }
+
     private final VBox form = new VBox(6);
     private final SchematicView schematic;
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
@@ -95,6 +104,23 @@ final class NetworkWorkspaceView extends BorderPane {
         return t;
     });
     private Task<NetworkSolution> solving;
+
+    /** The solve work (tests put a slow one in to see the progress and the cancel). */
+    interface SolveWork {
+        NetworkSolution solve(
+                NetworkEditor editor,
+                NetworkEditor.Draft draft,
+                org.headway.pipe.Catalog catalog,
+                Path baseFolder,
+                NetworkSolution.Progress progress);
+    }
+
+    private SolveWork work = NetworkSolution::solve;
+
+    void useSolveWork(SolveWork w) {
+        work = w;
+    }
+
     private boolean syncing;
 
     NetworkWorkspaceView(NetworkEditor editor, Dialogs dialogs, java.util.function.Supplier<Path> startFolder) {
@@ -658,7 +684,7 @@ final class NetworkWorkspaceView extends BorderPane {
         Task<NetworkSolution> task = new Task<>() {
             @Override
             protected NetworkSolution call() {
-                return NetworkSolution.solve(editor, draft, catalog, base, (step, steps, what) -> {
+                return work.solve(editor, draft, catalog, base, (step, steps, what) -> {
                     updateProgress(step, steps);
                     updateMessage(what + "…");
                 });

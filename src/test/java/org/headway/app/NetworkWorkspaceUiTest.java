@@ -356,4 +356,38 @@ class NetworkWorkspaceUiTest {
             assertTrue(relative(n.head(), s.node(n.id()).orElseThrow().head()) <= SAME_ENGINE, n.id());
         }
     }
+
+    @Test
+    void aSolveShowsItsProgressAndCancelKeepsThePreviousResults(FxRobot robot) throws Exception {
+        NetworkSolution first = solve(robot, fx);
+        java.util.concurrent.CountDownLatch release = new java.util.concurrent.CountDownLatch(1);
+        java.util.concurrent.atomic.AtomicBoolean interrupted = new java.util.concurrent.atomic.AtomicBoolean();
+        fx.window.networkView().useSolveWork((editor, draft, catalog, base, progress) -> {
+            progress.at(1, 3, "Resolving nodes and links");
+            try {
+                release.await(20, TimeUnit.SECONDS);
+            } catch (InterruptedException e) {
+                interrupted.set(true);
+            }
+            return NetworkSolution.solve(editor, draft, catalog, base, (a, b, c) -> {});
+        });
+        robot.clickOn("#network-solve");
+        WaitForAsyncUtils.waitFor(
+                10,
+                TimeUnit.SECONDS,
+                () -> fx.window.networkView().cancelButton().isVisible()
+                        && fx.window.networkView().statusLabel().getText().startsWith("Resolving"));
+        assertTrue(robot.lookup(".progress-bar").tryQuery().isPresent());
+        robot.clickOn("#network-cancel");
+        WaitForAsyncUtils.waitFor(
+                10,
+                TimeUnit.SECONDS,
+                () -> fx.window.networkView().statusLabel().getText().startsWith("Solve cancelled"));
+        release.countDown();
+        Thread.sleep(300);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(interrupted.get(), "the cancel interrupts the worker");
+        assertEquals(first, fx.window.network().solutionProperty().get(), "the earlier results stay");
+        assertFalse(fx.window.networkView().cancelButton().isVisible());
+    }
 }
