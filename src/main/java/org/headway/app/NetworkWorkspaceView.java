@@ -136,7 +136,7 @@ final class NetworkWorkspaceView extends BorderPane {
         VBox nodeBox = tableBox("Nodes", nodes, NetworkEditor.Part.NODE, "node", nodeMessage);
         VBox linkBox = tableBox("Links (flow positive from → to)", links, NetworkEditor.Part.LINK, "link", linkMessage);
         SplitPane tables = new SplitPane(nodeBox, linkBox);
-        tables.setDividerPositions(0.475);
+        tables.setDividerPositions(0.48);
 
         form.setPadding(new Insets(8, 12, 8, 12));
         form.setId("element-form");
@@ -347,8 +347,9 @@ final class NetworkWorkspaceView extends BorderPane {
                     case "x", "y" -> 56;
                     case "kind" -> 64;
                     case "pump_curve", "material" -> 130;
-                    case "name" -> 84;
-                    case "fixed_head", "roughness" -> 78;
+                    case "name" -> 76;
+                    case "fixed_head" -> 82;
+                    case "roughness" -> 78;
                     default -> 70;
                 });
         c.setCellValueFactory(d -> new ReadOnlyStringWrapper(editor.cell(part, d.getValue(), column)));
@@ -368,7 +369,7 @@ final class NetworkWorkspaceView extends BorderPane {
         c.setSortable(false);
         c.setEditable(false);
         c.setPrefWidth(
-                heading.equals("Head") ? 70 : heading.equals("Pressure") ? 76 : heading.equals("Velocity") ? 98 : 88);
+                heading.equals("Head") ? 70 : heading.equals("Pressure") ? 84 : heading.equals("Velocity") ? 98 : 88);
         c.getStyleClass().add("solved-column");
         c.setCellValueFactory(d -> new ReadOnlyStringWrapper(value.apply(d.getValue())));
         return c;
@@ -417,7 +418,7 @@ final class NetworkWorkspaceView extends BorderPane {
             return "";
         }
         NetworkResult.LinkResult l = r.get();
-        if (!l.status().equals("open")) {
+        if (l.status().equals("closed") || l.status().equals("shut")) {
             return l.status();
         }
         double qMax = 0;
@@ -628,9 +629,20 @@ final class NetworkWorkspaceView extends BorderPane {
         if (flow.isEmpty()) {
             return "";
         }
+        if (flow.equals("closed") || flow.equals("shut")) {
+            return (flow.equals("closed") ? "Closed" : "Shut by the solve (it would pass reverse flow)") + ": no flow"
+                    + stale;
+        }
         String v = linkText(row, "velocity");
+        String status = editor.solutionProperty()
+                .get()
+                .link(editor.cell(part, row, "id"))
+                .map(NetworkResult.LinkResult::status)
+                .filter(x -> !x.equals("open"))
+                .map(x -> " (" + x + ")")
+                .orElse("");
         return "Flow " + flow + (v.isEmpty() ? "" : ", velocity " + v) + ", head loss " + linkText(row, "headLoss")
-                + stale;
+                + status + stale;
     }
 
     static final Map<String, String> FIELD_WORDS = Map.ofEntries(
@@ -742,7 +754,9 @@ final class NetworkWorkspaceView extends BorderPane {
                                         .toList())));
         return how + ": " + r.nodes().size() + " nodes, " + r.links().size() + " links, " + r.iterations()
                 + " iterations, " + String.format(java.util.Locale.ROOT, "%.2f s", s.nanos() * 1e-9)
-                + (cautions > 0 ? "; " + cautions + " cautions" : "")
+                + (cautions == 1
+                        ? "; 1 caution (see its tooltip)"
+                        : cautions > 1 ? "; " + cautions + " cautions (see the tooltip)" : "")
                 + (s.indexLinks().isEmpty()
                         ? ""
                         : "; index circuit to "

@@ -163,6 +163,9 @@ final class SchematicPainter {
         Font small = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
         Font bold = new Font(Font.SANS_SERIF, Font.BOLD, 11);
         List<Map<String, String>> links = draft.links();
+        List<double[]> linkLabels = new java.util.ArrayList<>();
+        List<String> linkTexts = new java.util.ArrayList<>();
+        List<Rectangle2D> taken = new java.util.ArrayList<>();
         // Index circuit band, under everything.
         for (int k = 0; k < links.size() && k < layout.from().length; k++) {
             int a = layout.from()[k];
@@ -202,7 +205,8 @@ final class SchematicPainter {
             String kind = row.getOrDefault("kind", "pipe");
             NetworkResult.LinkResult r =
                     solution == null ? null : solution.link(id).orElse(null);
-            boolean closed = kind.equals("closed") || (r != null && !r.status().equals("open"));
+            boolean closed = kind.equals("closed")
+                    || (r != null && (r.status().equals("closed") || r.status().equals("shut")));
             double share = r != null && qMax > 0 ? Math.sqrt(Math.abs(r.flow()) / qMax) : 0.3;
             float w = (float) (1.2 + 3.6 * share);
             g.setColor(PIPE);
@@ -249,11 +253,8 @@ final class SchematicPainter {
                     nx = -nx;
                     ny = -ny;
                 }
-                double tx = mx + nx * 12;
-                double ty = my + ny * 12;
-                int tw = fm.stringWidth(text);
-                double left = nx < -0.3 ? tx - tw : Math.abs(nx) <= 0.3 ? tx - tw / 2.0 : tx;
-                label(g, text, left, ty + (ny < -0.3 ? 0 : fm.getAscent() / 2.0), TEAL, fm);
+                linkLabels.add(new double[] {mx, my, nx, ny, k});
+                linkTexts.add(text);
             }
         }
         boolean labels = n <= LABEL_LIMIT || v.scale() > 40;
@@ -266,7 +267,7 @@ final class SchematicPainter {
                 String id = row.getOrDefault("id", "");
                 g.setFont(bold);
                 FontMetrics bm = g.getFontMetrics();
-                label(g, id, sx[i] + 9, sy[i] - 7, INK, bm);
+                taken.add(label(g, id, sx[i] + 9, sy[i] - 7, INK, bm));
                 g.setFont(small);
                 NetworkResult.NodeResult r =
                         solution == null ? null : solution.node(id).orElse(null);
@@ -277,19 +278,41 @@ final class SchematicPainter {
                                     Quantities.withoutNoise(r.pressure(), 1000 * 9.81 * headScale),
                                     QuantityKind.PRESSURE,
                                     units);
-                    label(g, text, sx[i] + 9, sy[i] + 6 + fm.getAscent(), INK, fm);
+                    taken.add(label(g, text, sx[i] + 9, sy[i] + 6 + fm.getAscent(), INK, fm));
+                }
+            }
+        }
+        // Link labels last, each on the first side of its line where it overlaps no label already
+        // placed (the nodes' first); one that fits nowhere is left to the tables.
+        g.setFont(small);
+        for (int j = 0; j < linkLabels.size(); j++) {
+            double[] a = linkLabels.get(j);
+            String text = linkTexts.get(j);
+            int tw = fm.stringWidth(text);
+            for (int side : new int[] {1, -1}) {
+                double nx = a[2] * side;
+                double ny = a[3] * side;
+                double tx = a[0] + nx * 12;
+                double ty = a[1] + ny * 12;
+                double left = nx < -0.3 ? tx - tw : Math.abs(nx) <= 0.3 ? tx - tw / 2.0 : tx;
+                double base = ty + (ny < -0.3 ? 0 : ny > 0.3 ? fm.getAscent() : fm.getAscent() / 2.0);
+                Rectangle2D box = new Rectangle2D.Double(left - 2, base - fm.getAscent(), tw + 4, fm.getHeight());
+                if (taken.stream().noneMatch(box::intersects)) {
+                    taken.add(label(g, text, left, base, TEAL, fm));
+                    break;
                 }
             }
         }
         legend(g, solution != null, stale, width, height);
     }
 
-    private static void label(Graphics2D g, String text, double x, double y, Color colour, FontMetrics fm) {
+    private static Rectangle2D label(Graphics2D g, String text, double x, double y, Color colour, FontMetrics fm) {
         int w = fm.stringWidth(text);
         g.setColor(new Color(246, 248, 250, 215));
         g.fill(new RoundRectangle2D.Double(x - 2, y - fm.getAscent(), w + 4, fm.getAscent() + fm.getDescent(), 4, 4));
         g.setColor(colour);
         g.drawString(text, (float) x, (float) y);
+        return new Rectangle2D.Double(x - 2, y - fm.getAscent(), w + 4, fm.getHeight());
     }
 
     /** kind 0 junction, 1 fixed head, 2 pressure reference. */
@@ -398,7 +421,7 @@ final class SchematicPainter {
         "pump",
         "valve (bar: check, stem: control)",
         "rated component",
-        "closed or shut",
+        "closed or shut (a closed valve filled)",
         "index circuit",
     };
 

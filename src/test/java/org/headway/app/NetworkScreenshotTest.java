@@ -83,4 +83,28 @@ class NetworkScreenshotTest {
         NetworkWorkspaceUiTest.solve(robot, fx);
         snap(robot, "network-auto-layout");
     }
+
+    /** An invented booster network with each kind of device, laid out in layers (no positions). */
+    @Test
+    void aNetworkWithDevicesIsWritten(FxRobot robot) throws Exception {
+        Files.createDirectories(ScreenshotTest.FOLDER);
+        String nodes = "id,elevation [m],demand [L/s],fixed_head [m]\n"
+                + "SUMP,,,10\nS,10,0,\nD,10,0,\nA,25,3,\nB,30,2,\nC,22,2.5,\nE,18,1,\nTOP,,,60\n";
+        String links = "id,from,to,kind,length [m],diameter [mm],roughness [mm],kv,pump_curve,setting\n"
+                + "P0,SUMP,S,pipe,10,150,0.05,,,\n"
+                + "PU1,S,D,pump,,,,,0 L/s:55 m; 10 L/s:50 m; 20 L/s:35 m,\n"
+                + "CV1,D,A,check-valve,,,,60,,\n"
+                + "P1,A,B,pipe,300,100,0.05,,,\n"
+                + "P2,A,C,pipe,250,100,0.05,,,\n"
+                + "PRV1,C,E,pressure-reducing,,,,30,,200 kPa\n"
+                + "V1,B,TOP,valve,,,,25,,\n"
+                + "X1,E,B,closed,,,,,,\n";
+        Project.NetworkSpec spec = LineList.parse("nodes", nodes, "links", links, Catalog.bundled(), false);
+        robot.interact(() -> {
+            fx.window.network().load(Project.network("Booster (invented)", "water", "15 degC", "auto", spec), null);
+            fx.window.showNetwork(true);
+        });
+        NetworkWorkspaceUiTest.solve(robot, fx);
+        snap(robot, "network-devices");
+    }
 }
