@@ -525,10 +525,37 @@ final class NetworkWorkspaceView extends BorderPane {
 
     // ---- the selected element's fields ----
 
+    /** What the form was built for (part, row, kind) and its fields, so that an edit updates it in place. */
+    private String formShape = "";
+
+    private final Map<String, TextField> formFields = new java.util.HashMap<>();
+    private Label formSolved;
+
     private void buildForm() {
-        form.getChildren().clear();
         NetworkEditor.Selection s = editor.selectionProperty().get();
         int row = s.row();
+        boolean exists = row >= 0 && row < editor.draft().rows(s.part()).size();
+        String shape = exists
+                ? s.part() + "/" + row + "/" + editor.cell(s.part(), row, "kind") + "/"
+                        + editor.cell(s.part(), row, "id") + "/"
+                        + (s.part() == NetworkEditor.Part.NODE ? editor.nodeColumns() : "")
+                : "";
+        if (exists && shape.equals(formShape)) {
+            // The same element: refresh the values in place, so that Tab to the next field keeps the keyboard there.
+            formFields.forEach((column, t) -> {
+                if (!t.isFocused() && !t.getStyleClass().contains("rejected")) {
+                    t.setText(editor.cell(s.part(), row, column));
+                }
+            });
+            if (formSolved != null) {
+                formSolved.setText(solvedSummary(s.part(), row));
+            }
+            showMessages();
+            return;
+        }
+        formShape = shape;
+        formFields.clear();
+        form.getChildren().clear();
         if (row < 0 || row >= editor.draft().rows(s.part()).size()) {
             Label hint = new Label("Select a node or link in a table or on the drawing to see all its fields here.");
             hint.setWrapText(true);
@@ -549,9 +576,9 @@ final class NetworkWorkspaceView extends BorderPane {
         solved.setId("selection-results");
         solved.setWrapText(true);
         solved.getStyleClass().add("total-value");
-        if (!solved.getText().isEmpty()) {
-            form.getChildren().add(solved);
-        }
+        solved.managedProperty().bind(solved.textProperty().isNotEmpty());
+        form.getChildren().add(solved);
+        formSolved = solved;
         GridPane grid = new GridPane();
         grid.setHgap(8);
         grid.setVgap(3);
@@ -586,6 +613,7 @@ final class NetworkWorkspaceView extends BorderPane {
             }
             TextField t = new TextField(cells.getOrDefault(column, ""));
             t.setId("form-" + column);
+            formFields.put(column, t);
             t.setPromptText(PROMPTS.getOrDefault(column, ""));
             Runnable commit = () -> {
                 if (!t.getText().strip().equals(editor.cell(part, row, column))) {

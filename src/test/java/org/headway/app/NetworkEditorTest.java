@@ -156,4 +156,23 @@ class NetworkEditorTest {
         assertEquals(loss, l.headLoss(), 0.002 * loss);
         assertEquals(40 - loss, s.node("N1").orElseThrow().head(), 0.002 * loss);
     }
+
+    @Test
+    void aNetworkProjectOpenedBeforeTheWindowIsHandedToTheWorkspace(@TempDir Path dir) {
+        Path file = dir.resolve("hillcrest.json");
+        org.headway.project.ProjectFile.save(
+                Project.network("Hillcrest", "water", "15 degC", "auto", hillcrest()), file);
+        ProjectEditor runs =
+                new ProjectEditor(Catalog.bundled(), new FakeDialogs(), new RecentFiles(dir.resolve("recent.txt")));
+        Project before = runs.project();
+        assertTrue(runs.openFile(file));
+        assertEquals(before, runs.project(), "the series run is left as it was");
+        java.util.List<Path> handed = new java.util.ArrayList<>();
+        runs.onNetworkProject((p, f) -> {
+            editor.load(p, f);
+            return handed.add(f);
+        });
+        assertEquals(java.util.List.of(file.toAbsolutePath()), handed);
+        assertEquals(8, editor.draft().nodes().size());
+    }
 }

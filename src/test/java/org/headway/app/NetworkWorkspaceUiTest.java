@@ -216,6 +216,30 @@ class NetworkWorkspaceUiTest {
         assertTrue(message.getText().startsWith("node row 2 (N1), elevation:"), message.getText());
         assertTrue(message.getText().endsWith("still using 10 m"), message.getText());
         assertEquals("10 m", fx.window.network().cell(NetworkEditor.Part.NODE, 1, "elevation"));
+        // The selected link's fields: a bad length is refused beside its field; a good one is taken
+        // and Tab moves on to the next field.
+        robot.interact(() ->
+                fx.window.network().selectionProperty().set(new NetworkEditor.Selection(NetworkEditor.Part.LINK, 0)));
+        WaitForAsyncUtils.waitForFxEvents();
+        TextField length = robot.lookup("#form-length").queryAs(TextField.class);
+        robot.clickOn(length);
+        robot.interact(length::selectAll);
+        robot.write("3 kPa");
+        robot.type(KeyCode.ENTER);
+        WaitForAsyncUtils.waitForFxEvents();
+        String beside =
+                robot.lookup("#form-length-message").queryAs(Label.class).getText();
+        assertTrue(beside.startsWith("link row 1 (L1), length:") && beside.endsWith("still using 200 m"), beside);
+        assertTrue(length.getStyleClass().contains("rejected"));
+        robot.interact(length::selectAll);
+        robot.write("240 m");
+        robot.type(KeyCode.TAB);
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals("240 m", fx.window.network().cell(NetworkEditor.Part.LINK, 0, "length"));
+        assertTrue(
+                robot.lookup("#form-diameter").queryAs(TextField.class).isFocused(),
+                "Tab keeps the keyboard in the form");
+        robot.interact(() -> fx.window.network().undo());
         // A valve without its Kv is accepted as a step, and the list says what it still needs.
         typeCell(robot, "link-table", "link-kind", 0, "valve");
         assertEquals("valve", fx.window.network().cell(NetworkEditor.Part.LINK, 0, "kind"));
