@@ -62,6 +62,12 @@ public final class MainWindow {
     private final ProgressBar progress = new ProgressBar();
     private final Button cancel = new Button("Cancel export");
     private Task<List<Path>> export;
+    private final NetworkEditor network;
+    private final NetworkWorkspaceView networkView;
+    private final SplitPane runWorkspace;
+    private final javafx.beans.property.BooleanProperty networkShown =
+            new javafx.beans.property.SimpleBooleanProperty(false);
+    private static final KeyCombination SOLVE = KeyCombination.keyCombination("Shortcut+Enter");
 
     public MainWindow(ProjectEditor editor, ResultsModel results, Dialogs dialogs) {
         this.editor = editor;
@@ -106,6 +112,9 @@ public final class MainWindow {
         SplitPane split = new SplitPane(editorScroll, tabs);
         split.setOrientation(Orientation.HORIZONTAL);
         split.setDividerPositions(0.44);
+        runWorkspace = split;
+        network = new NetworkEditor(editor.catalog(), editor.unitSystemProperty());
+        networkView = new NetworkWorkspaceView(network, dialogs, this::networkStartFolder);
 
         CautionsView cautions = new CautionsView(results, i -> {
             editorView.select(i);
@@ -115,6 +124,87 @@ public final class MainWindow {
         root.setCenter(split);
         root.setBottom(new VBox(cautions, statusBar()));
         root.getStyleClass().add("headway");
+        networkShown.addListener((o, a, b) -> {
+            root.setCenter(b ? networkView : runWorkspace);
+            if (b) {
+                javafx.application.Platform.runLater(networkView::focusTable);
+            }
+            // The cautions panel speaks of the series run; the network's cautions are in its status line.
+            cautions.setVisible(!b);
+            cautions.setManaged(!b);
+        });
+        editor.onNetworkProject(this::openNetwork);
+    }
+
+    /** Shows a network project in the network workspace, after asking about unsaved network edits. */
+    private boolean openNetwork(org.headway.project.Project p, Path file) {
+        if (!confirmDiscardNetwork()) {
+            return false;
+        }
+        try {
+            network.load(p, file);
+        } catch (InputException e) {
+            dialogs.showError("Could not open " + file.getFileName(), NetworkEditor.inWords(e));
+            return false;
+        }
+        networkShown.set(true);
+        return true;
+    }
+
+    private boolean confirmDiscardNetwork() {
+        if (!network.dirtyProperty().get()) {
+            return true;
+        }
+        return switch (dialogs.askUnsavedChanges(networkName())) {
+            case SAVE -> saveNetwork();
+            case DISCARD -> true;
+            case CANCEL -> false;
+        };
+    }
+
+    private String networkName() {
+        Path f = network.fileProperty().get();
+        return f == null ? network.draft().title() : f.getFileName().toString();
+    }
+
+    /** Asks where and saves the network project there (atomic). */
+    boolean saveNetwork() {
+        Path f = network.fileProperty().get();
+        Optional<Path> target = dialogs.chooseProjectSaveTarget(
+                networkStartFolder(),
+                f == null
+                        ? ProjectEditor.slug(network.draft().title()) + ".json"
+                        : f.getFileName().toString());
+        if (target.isEmpty()) {
+            return false;
+        }
+        try {
+            network.save(target.get());
+            status.setText("Saved " + target.get().getFileName());
+            return true;
+        } catch (InputException e) {
+            dialogs.showError("Could not save " + target.get().getFileName(), NetworkEditor.inWords(e));
+        } catch (java.io.UncheckedIOException e) {
+            dialogs.showError("Could not save " + target.get().getFileName(), e.getMessage());
+        }
+        return false;
+    }
+
+    private Path networkStartFolder() {
+        return network.fileProperty().get() != null ? network.baseFolder() : editor.startFolder();
+    }
+
+    /** Shows the network workspace (true) or the series-run workspace (false). */
+    void showNetwork(boolean shown) {
+        networkShown.set(shown);
+    }
+
+    NetworkEditor network() {
+        return network;
+    }
+
+    NetworkWorkspaceView networkView() {
+        return networkView;
     }
 
     /** The scene, styled. */
@@ -127,7 +217,16 @@ public final class MainWindow {
     /** Puts the window on a stage: title bound, close asks about unsaved changes. */
     public void attach(Stage stage, double width, double height) {
         stage.setScene(scene(width, height));
-        stage.titleProperty().bind(editor.windowTitleProperty());
+        stage.titleProperty()
+                .bind(Bindings.createStringBinding(
+                        () -> networkShown.get()
+                                ? (network.dirtyProperty().get() ? "• " : "") + networkName() + " — network — Headway"
+                                : editor.windowTitleProperty().get(),
+                        networkShown,
+                        network.dirtyProperty(),
+                        network.fileProperty(),
+                        network.draftProperty(),
+                        editor.windowTitleProperty()));
         stage.setOnShown(e -> editorView.focusTable());
         stage.setMinWidth(1000);
         stage.setMinHeight(640);
@@ -136,14 +235,17 @@ public final class MainWindow {
         stage.getScene().addEventFilter(javafx.scene.input.KeyEvent.KEY_PRESSED, e -> {
             if (UNDO.match(e)) {
                 e.consume();
-                editor.undo();
+                undo();
             } else if (REDO.match(e) || REDO_ALT.match(e)) {
                 e.consume();
-                editor.redo();
+                redo();
+            } else if (SOLVE.match(e) && networkShown.get()) {
+                e.consume();
+                networkView.solve();
             }
         });
         stage.setOnCloseRequest(e -> {
-            if (!editor.confirmDiscard()) {
+            if (!editor.confirmDiscard() || !confirmDiscardNetwork()) {
                 e.consume();
             }
         });
@@ -237,7 +339,7 @@ public final class MainWindow {
             fitting.chooseImportFile().ifPresent(fittingView::importInBackground);
         });
         MenuItem quit = item("Close window", "Shortcut+W", () -> {
-            if (editor.confirmDiscard() && root.getScene() != null) {
+            if (editor.confirmDiscard() && confirmDiscardNetwork() && root.getScene() != null) {
                 ((Stage) root.getScene().getWindow()).close();
             }
         });
@@ -257,11 +359,66 @@ public final class MainWindow {
                         quit);
 
         Menu edit = new Menu("Edit");
-        MenuItem undo = item("Undo", "Shortcut+Z", editor::undo);
-        MenuItem redo = item("Redo", "Shortcut+Y", editor::redo);
-        undo.disableProperty().bind(editor.canUndoProperty().not());
-        redo.disableProperty().bind(editor.canRedoProperty().not());
+        MenuItem undo = item("Undo", "Shortcut+Z", this::undo);
+        MenuItem redo = item("Redo", "Shortcut+Y", this::redo);
+        undo.disableProperty()
+                .bind(Bindings.when(networkShown)
+                        .then(network.canUndoProperty().not())
+                        .otherwise(editor.canUndoProperty().not()));
+        redo.disableProperty()
+                .bind(Bindings.when(networkShown)
+                        .then(network.canRedoProperty().not())
+                        .otherwise(editor.canRedoProperty().not()));
         edit.getItems().addAll(undo, redo);
+
+        Menu workspace = new Menu("Workspace");
+        ToggleGroup spaces = new ToggleGroup();
+        RadioMenuItem runSpace = new RadioMenuItem("Series run");
+        RadioMenuItem netSpace = new RadioMenuItem("Network");
+        runSpace.setId("workspace-run");
+        netSpace.setId("workspace-network");
+        runSpace.setToggleGroup(spaces);
+        netSpace.setToggleGroup(spaces);
+        runSpace.setSelected(true);
+        runSpace.setAccelerator(KeyCombination.keyCombination("Shortcut+1"));
+        netSpace.setAccelerator(KeyCombination.keyCombination("Shortcut+2"));
+        runSpace.setOnAction(e -> networkShown.set(false));
+        netSpace.setOnAction(e -> networkShown.set(true));
+        networkShown.addListener((o, a, b) -> (b ? netSpace : runSpace).setSelected(true));
+        MenuItem newNetwork = new MenuItem("New network");
+        newNetwork.setOnAction(e -> {
+            if (confirmDiscardNetwork()) {
+                network.newNetwork();
+                networkShown.set(true);
+            }
+        });
+        MenuItem saveNetwork = new MenuItem("Save network project as…");
+        saveNetwork.setId("save-network");
+        saveNetwork.setOnAction(e -> saveNetwork());
+        MenuItem importList = new MenuItem("Import line list (nodes and links CSV)…");
+        importList.setOnAction(e -> {
+            networkShown.set(true);
+            networkView.importLineList();
+        });
+        MenuItem exportList = new MenuItem("Export line list…");
+        exportList.setOnAction(e -> networkView.exportLineList());
+        MenuItem solveNetwork = new MenuItem("Solve network");
+        solveNetwork.setAccelerator(SOLVE);
+        solveNetwork.setOnAction(e -> {
+            networkShown.set(true);
+            networkView.solve();
+        });
+        workspace
+                .getItems()
+                .addAll(
+                        runSpace,
+                        netSpace,
+                        new SeparatorMenuItem(),
+                        newNetwork,
+                        importList,
+                        exportList,
+                        saveNetwork,
+                        solveNetwork);
 
         Menu view = new Menu("Units");
         ToggleGroup units = new ToggleGroup();
@@ -280,9 +437,25 @@ public final class MainWindow {
         editor.unitSystemProperty().addListener((o, a, b) -> itemOf.apply(b).setSelected(true));
         view.getItems().addAll(si, process, us);
 
-        MenuBar bar = new MenuBar(file, edit, view);
+        MenuBar bar = new MenuBar(file, edit, workspace, view);
         bar.setId("menus");
         return bar;
+    }
+
+    private void undo() {
+        if (networkShown.get()) {
+            network.undo();
+        } else {
+            editor.undo();
+        }
+    }
+
+    private void redo() {
+        if (networkShown.get()) {
+            network.redo();
+        } else {
+            editor.redo();
+        }
     }
 
     private static MenuItem item(String text, String accelerator, Runnable action) {

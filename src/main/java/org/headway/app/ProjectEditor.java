@@ -60,6 +60,9 @@ public final class ProjectEditor {
     private final BooleanBinding dirty;
     private final StringBinding windowTitle;
     private BiConsumer<Project, Path> writer = ProjectFile::save;
+    private java.util.function.BiPredicate<Project, Path> networkOpener;
+    private Project pendingNetwork;
+    private Path pendingNetworkFile;
 
     public ProjectEditor(Catalog catalog, Dialogs dialogs, RecentFiles recent) {
         this.catalog = catalog;
@@ -1011,9 +1014,40 @@ public final class ProjectEditor {
             dialogs.showError("Could not open " + path.getFileName(), e.getMessage());
             return false;
         }
+        if (loaded.isNetwork()) {
+            // A network project belongs to the network workspace; the run being edited stays as it is.
+            if (networkOpener == null) {
+                pendingNetwork = loaded;
+                pendingNetworkFile = path.toAbsolutePath();
+                recent.add(path);
+                return true;
+            }
+            if (!networkOpener.test(loaded, path.toAbsolutePath())) {
+                return false;
+            }
+            recent.add(path);
+            return true;
+        }
         load(loaded, path.toAbsolutePath());
         recent.add(path);
         return true;
+    }
+
+    /**
+     * Where network projects go when opened (the network workspace); one opened before it was set
+     * is handed over at once.
+     *
+     * @param opener shows the project and its file; false when it did not (the user kept other work)
+     */
+    void onNetworkProject(java.util.function.BiPredicate<Project, Path> opener) {
+        networkOpener = opener;
+        if (pendingNetwork != null) {
+            Project p = pendingNetwork;
+            Path f = pendingNetworkFile;
+            pendingNetwork = null;
+            pendingNetworkFile = null;
+            opener.test(p, f);
+        }
     }
 
     private void load(Project p, Path path) {

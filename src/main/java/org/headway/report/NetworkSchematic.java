@@ -35,7 +35,7 @@ import org.headway.units.UnitSystem;
  * direction, the index circuit in the accent colour; fixed heads as squares, pressure references as
  * diamonds, pumps as rings and other components as small bars across the line.
  */
-final class NetworkSchematic {
+public final class NetworkSchematic {
 
     static final Color INK = new Color(0x1E2B3A);
     static final Color LINE = new Color(0x5B6B7C);
@@ -62,21 +62,45 @@ final class NetworkSchematic {
             return p;
         }
         Map<String, Integer> index = network.nodeIndex();
+        int[] from = new int[network.links().size()];
+        int[] to = new int[from.length];
+        boolean[] fixed = new boolean[n];
+        for (int k = 0; k < from.length; k++) {
+            from[k] = index.get(network.links().get(k).from());
+            to[k] = index.get(network.links().get(k).to());
+        }
+        for (int i = 0; i < n; i++) {
+            fixed[i] = nodes.get(i).headIsFixed();
+        }
+        return layered(n, from, to, fixed);
+    }
+
+    /**
+     * Nodes in layers by link count from the fixed-head nodes (x = layer, y = place in the layer,
+     * each layer centred on the widest); a part with no fixed head starts from its first node. The
+     * desktop schematic uses it for trees.
+     *
+     * @param n number of nodes
+     * @param from each link's from-node index
+     * @param to each link's to-node index
+     * @param fixed whether each node's head is fixed
+     * @return x, y per node in drawing units (y grows downwards)
+     */
+    public static double[][] layered(int n, int[] from, int[] to, boolean[] fixed) {
+        double[][] p = new double[n][2];
         List<List<Integer>> adjacent = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             adjacent.add(new ArrayList<>());
         }
-        for (Link l : network.links()) {
-            int a = index.get(l.from());
-            int b = index.get(l.to());
-            adjacent.get(a).add(b);
-            adjacent.get(b).add(a);
+        for (int k = 0; k < from.length; k++) {
+            adjacent.get(from[k]).add(to[k]);
+            adjacent.get(to[k]).add(from[k]);
         }
         int[] layer = new int[n];
         Arrays.fill(layer, -1);
         Deque<Integer> queue = new ArrayDeque<>();
         for (int i = 0; i < n; i++) {
-            if (nodes.get(i).headIsFixed()) {
+            if (fixed[i]) {
                 layer[i] = 0;
                 queue.add(i);
             }
