@@ -18,7 +18,7 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
- * Time to fit y = a·exp(−b·x) + c to 100,000 noisy points (user expression, 3 parameters,
+ * Time to fit y = a·exp(−b·x) + c to 100,000 or 1,000,000 noisy points (user expression, 3 parameters,
  * Levenberg–Marquardt with exact derivatives and Gauss–Newton polishing), from a = 1, b = 1, c = 0.
  *
  * <p>The data file is written by src/jmh/python/fit_peer.py (fixed seed) so that this benchmark
@@ -31,8 +31,9 @@ import org.openjdk.jmh.annotations.Warmup;
 @Measurement(iterations = 5, time = 2)
 public class FitBenchmark {
 
-    /** Written by fit_peer.py --generate. */
-    static final Path DATA = Path.of(System.getProperty("headway.fitbench.data", "target/fit-bench/decay-100k.csv"));
+    /** Points in the data set: {@code target/fit-bench/decay-<points>.csv}, written by fit_peer.py --generate. */
+    @org.openjdk.jmh.annotations.Param({"100k", "1m"})
+    public String points;
 
     private Observations data;
     private FitForm form;
@@ -40,7 +41,7 @@ public class FitBenchmark {
 
     @Setup
     public void load() throws IOException {
-        List<String> lines = Files.readAllLines(DATA);
+        List<String> lines = Files.readAllLines(Path.of("target/fit-bench/decay-" + points + ".csv"));
         int n = lines.size() - 1;
         double[] x = new double[n];
         double[] y = new double[n];

@@ -626,35 +626,30 @@ public final class LeastSquaresFitter {
                             + startText(plan) + " for point " + (bad[0] + 1) + pointText(data, bad[0])
                             + "; choose other starting values");
         }
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .start(plan.start)
-                .model(model)
-                .target(target)
-                .lazyEvaluation(false)
-                .maxIterations(maxIterations)
-                .maxEvaluations(maxIterations * 4)
-                .build();
-        LevenbergMarquardtOptimizer optimizer = new LevenbergMarquardtOptimizer()
-                .withCostRelativeTolerance(tolerance)
-                .withParameterRelativeTolerance(tolerance)
-                .withOrthoTolerance(tolerance);
         boolean converged;
         String stop;
         int iterations;
-        try {
-            LeastSquaresOptimizer.Optimum optimum = optimizer.optimize(problem);
+        Damped damped = damped(model, plan.start, Math.min(maxIterations, DAMPED_BUDGET), tolerance);
+        if (damped != null && damped.degenerate()) {
+            // A parameter lost its influence on the way (e.g. an exponent run off to where exp(−b x)
+            // is 0): a stationary point of no use. MINPACK's method goes from the start again, and
+            // the better of the two points found is kept (the model remembers it).
+            Object[] outcome = minpack(model, plan.start, target, tolerance, maxIterations);
+            converged = (Boolean) outcome[0];
+            iterations = damped.iterations() + (Integer) outcome[1];
+            stop = "Levenberg–Marquardt on the normal equations stopped where a parameter had lost its influence;"
+                    + " then MINPACK's Levenberg–Marquardt from the start: " + outcome[2];
+        } else if (damped != null) {
             converged = true;
-            iterations = optimum.getIterations();
-            stop = "Levenberg–Marquardt met its relative tolerance " + tolerance;
-        } catch (TooManyEvaluationsException | TooManyIterationsException e) {
-            converged = false;
-            iterations = maxIterations;
-            stop = "Levenberg–Marquardt used its whole budget of " + maxIterations + " iterations";
-        } catch (ConvergenceException e) {
-            // MINPACK's "tolerance too small": no further reduction possible in double precision.
-            converged = true;
-            iterations = model.evaluations;
-            stop = "Levenberg–Marquardt stopped: no further reduction of the residual possible in double precision";
+            iterations = damped.iterations();
+            stop = damped.stop();
+        } else {
+            int spent = Math.min(maxIterations, DAMPED_BUDGET);
+            Object[] outcome = minpack(model, plan.start, target, tolerance, maxIterations);
+            converged = (Boolean) outcome[0];
+            iterations = spent + (Integer) outcome[1];
+            stop = "Levenberg–Marquardt on the normal equations did not settle in " + spent
+                    + " iterations; then MINPACK's Levenberg–Marquardt from the start: " + outcome[2];
         }
         Pair<double[], Integer> polishing = polish(model, model.bestPoint, n, p);
         double[] point = polishing.getFirst();
@@ -682,6 +677,279 @@ public final class LeastSquaresFitter {
                     "common practice, no source"));
         }
         return finish(data, form, plan, point, predicted, cov, iterations + polished, converged, stop, extra);
+    }
+
+    /**
+     * MINPACK's Levenberg–Marquardt (Moré 1978, as ported in Commons Math) from {@code start}: the
+     * fallback where the damped normal-equation iterations do not settle.
+     *
+     * @return converged (Boolean), iterations (Integer), how it stopped (String)
+     */
+    private static Object[] minpack(
+            TrackedModel model, double[] start, double[] target, double tolerance, int maxIterations) {
+        LeastSquaresProblem problem = new LeastSquaresBuilder()
+                .start(start)
+                .model(model)
+                .target(target)
+                .lazyEvaluation(false)
+                .maxIterations(maxIterations)
+                .maxEvaluations(maxIterations * 4)
+                .build();
+        LevenbergMarquardtOptimizer optimizer = new LevenbergMarquardtOptimizer()
+                .withCostRelativeTolerance(tolerance)
+                .withParameterRelativeTolerance(tolerance)
+                .withOrthoTolerance(tolerance);
+        try {
+            LeastSquaresOptimizer.Optimum optimum = optimizer.optimize(problem);
+            return new Object[] {true, optimum.getIterations(), "met its relative tolerance " + tolerance};
+        } catch (TooManyEvaluationsException | TooManyIterationsException e) {
+            return new Object[] {false, maxIterations, "used its whole budget of " + maxIterations + " iterations"};
+        } catch (ConvergenceException e) {
+            // MINPACK's "tolerance too small": no further reduction possible in double precision.
+            return new Object[] {
+                true, model.evaluations, "stopped: no further reduction of the residual possible in double precision"
+            };
+        }
+    }
+
+    /** Iterations the damped normal-equation method may take before MINPACK's takes over. */
+    static final int DAMPED_BUDGET = 500;
+
+    /**
+     * How the damped iterations ended; {@code degenerate} where a column of J fell below 10⁻¹² of
+     * its largest size on the way (a parameter no longer moves the model).
+     */
+    private record Damped(int iterations, String stop, boolean degenerate) {}
+
+    private static boolean degenerate(double[][] a, double[] scale) {
+        for (int k = 0; k < scale.length; k++) {
+            if (!(a[k][k] > 1e-24 * scale[k])) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * Levenberg–Marquardt on the normal equations (Madsen, Nielsen and Tingleff 2004, "Methods for
+     * non-linear least squares problems", 2nd ed., DTU, Algorithm 3.16, with Marquardt's (1963)
+     * scaling of the damping by the diagonal of JᵀJ and Nielsen's (1999) update of the damping).
+     * One pass over the points per iteration forms JᵀJ and Jᵀr (p × p), so no n × p matrix is
+     * copied or factorised; the accuracy lost to the normal equations (cond(J)²) is recovered by the
+     * Householder polishing that follows, which works on J itself.
+     *
+     * @return how it ended, or null where it did not settle within {@code budget} iterations (the
+     *     caller then runs MINPACK's method from the start); the best point is in the model
+     */
+    private static Damped damped(TrackedModel model, double[] start, int budget, double tolerance) {
+        int n = model.target.length;
+        int p = model.p;
+        double[] x = start.clone();
+        double[] values = new double[n];
+        double[][][] jac = new double[1][][];
+        int[] bad = new int[1];
+        double cost = model.evaluate(x, values, jac, bad);
+        if (bad[0] >= 0) {
+            return null;
+        }
+        double[][] a = new double[p][p];
+        double[] g = new double[p];
+        double rNorm = normalEquations(model.target, values, jac[0], a, g);
+        double[] scale = new double[p];
+        double mu = 1e-3;
+        double nu = 2.0;
+        double[] trialValues = new double[n];
+        for (int iteration = 1; iteration <= budget; iteration++) {
+            for (int k = 0; k < p; k++) {
+                scale[k] = Math.max(scale[k], a[k][k]);
+            }
+            // Orthogonality of r to the columns of J: the gradient test, scale-free (MINPACK's gtol).
+            double orthogonality = 0.0;
+            for (int k = 0; k < p; k++) {
+                double column = Math.sqrt(a[k][k]);
+                if (column > 0.0 && rNorm > 0.0) {
+                    orthogonality = Math.max(orthogonality, Math.abs(g[k]) / (column * rNorm));
+                }
+            }
+            if (rNorm == 0.0 || orthogonality <= tolerance) {
+                return new Damped(
+                        iteration - 1,
+                        "Levenberg–Marquardt met its relative tolerance " + tolerance
+                                + " (residuals orthogonal to the Jacobian)",
+                        degenerate(a, scale));
+            }
+            double[] h = dampedStep(a, g, scale, mu);
+            if (h == null) {
+                mu *= nu;
+                nu *= 2.0;
+                if (!(mu < 1e300)) {
+                    return null;
+                }
+                continue;
+            }
+            double stepNorm = 0.0;
+            double xNorm = 0.0;
+            for (int k = 0; k < p; k++) {
+                double sk = Math.sqrt(scale[k]);
+                stepNorm = Math.hypot(stepNorm, sk * h[k]);
+                xNorm = Math.hypot(xNorm, sk * x[k]);
+            }
+            double[] trial = x.clone();
+            for (int k = 0; k < p; k++) {
+                trial[k] += h[k];
+            }
+            double[][][] trialJac = new double[1][][];
+            double trialCost = model.evaluate(trial, trialValues, trialJac, bad);
+            // Predicted reduction of the cost ½‖r‖² by the linear model: ½ hᵀ(μ D h + g).
+            double predicted = 0.0;
+            for (int k = 0; k < p; k++) {
+                predicted += h[k] * (mu * scale[k] * h[k] + g[k]);
+            }
+            double rho = bad[0] >= 0 ? -1.0 : (cost - trialCost) / predicted;
+            if (rho > 0.0) {
+                double reduction = (cost - trialCost) / cost;
+                x = trial;
+                double[] swap = values;
+                values = trialValues;
+                trialValues = swap;
+                cost = trialCost;
+                rNorm = normalEquations(model.target, values, trialJac[0], a, g);
+                double t = 2.0 * rho - 1.0;
+                mu *= Math.max(1.0 / 3.0, 1.0 - t * t * t);
+                nu = 2.0;
+                if (stepNorm <= tolerance * xNorm) {
+                    return new Damped(
+                            iteration,
+                            "Levenberg–Marquardt met its relative tolerance " + tolerance + " (step)",
+                            degenerate(a, scale));
+                }
+                if (reduction <= tolerance && rho <= 2.0 && stepNorm <= 1e-8 * xNorm) {
+                    return new Damped(
+                            iteration,
+                            "Levenberg–Marquardt met its relative tolerance " + tolerance + " (cost)",
+                            degenerate(a, scale));
+                }
+            } else {
+                if (stepNorm <= tolerance * xNorm) {
+                    // Even a step this small no longer lowers the cost: rounding has the last word.
+                    return new Damped(
+                            iteration,
+                            "Levenberg–Marquardt stopped: no further reduction of the residual possible in double"
+                                    + " precision",
+                            degenerate(a, scale));
+                }
+                mu *= nu;
+                nu *= 2.0;
+                if (!(mu < 1e300)) {
+                    return null;
+                }
+            }
+        }
+        return null;
+    }
+
+    /** Forms JᵀJ and Jᵀr for r = target − values; returns ‖r‖. */
+    private static double normalEquations(double[] target, double[] values, double[][] jac, double[][] a, double[] g) {
+        int n = target.length;
+        int p = jac.length;
+        for (int k = 0; k < p; k++) {
+            java.util.Arrays.fill(a[k], 0.0);
+        }
+        java.util.Arrays.fill(g, 0.0);
+        double rr = 0.0;
+        if (p == 3) {
+            // The usual size, unrolled: one pass with the sums in registers.
+            double[] j0 = jac[0];
+            double[] j1 = jac[1];
+            double[] j2 = jac[2];
+            double a00 = 0, a01 = 0, a02 = 0, a11 = 0, a12 = 0, a22 = 0, g0 = 0, g1 = 0, g2 = 0;
+            for (int i = 0; i < n; i++) {
+                double r = target[i] - values[i];
+                double u = j0[i];
+                double v = j1[i];
+                double w = j2[i];
+                a00 = Math.fma(u, u, a00);
+                a01 = Math.fma(u, v, a01);
+                a02 = Math.fma(u, w, a02);
+                a11 = Math.fma(v, v, a11);
+                a12 = Math.fma(v, w, a12);
+                a22 = Math.fma(w, w, a22);
+                g0 = Math.fma(u, r, g0);
+                g1 = Math.fma(v, r, g1);
+                g2 = Math.fma(w, r, g2);
+                rr = Math.fma(r, r, rr);
+            }
+            a[0][0] = a00;
+            a[0][1] = a01;
+            a[0][2] = a02;
+            a[1][1] = a11;
+            a[1][2] = a12;
+            a[2][2] = a22;
+            g[0] = g0;
+            g[1] = g1;
+            g[2] = g2;
+        } else {
+            for (int i = 0; i < n; i++) {
+                double r = target[i] - values[i];
+                rr = Math.fma(r, r, rr);
+                for (int k = 0; k < p; k++) {
+                    double jk = jac[k][i];
+                    g[k] = Math.fma(jk, r, g[k]);
+                    for (int m = k; m < p; m++) {
+                        a[k][m] = Math.fma(jk, jac[m][i], a[k][m]);
+                    }
+                }
+            }
+        }
+        for (int k = 0; k < p; k++) {
+            for (int m = 0; m < k; m++) {
+                a[k][m] = a[m][k];
+            }
+        }
+        return Math.sqrt(rr);
+    }
+
+    /** Solves (A + μ D) h = g by Cholesky; null where the damped matrix is not positive definite. */
+    private static double[] dampedStep(double[][] a, double[] g, double[] scale, double mu) {
+        int p = g.length;
+        double[][] l = new double[p][p];
+        for (int i = 0; i < p; i++) {
+            for (int j = 0; j <= i; j++) {
+                double sum = a[i][j] + (i == j ? mu * Math.max(scale[i], Double.MIN_NORMAL) : 0.0);
+                for (int k = 0; k < j; k++) {
+                    sum -= l[i][k] * l[j][k];
+                }
+                if (i == j) {
+                    if (!(sum > 0.0) || !Double.isFinite(sum)) {
+                        return null;
+                    }
+                    l[i][i] = Math.sqrt(sum);
+                } else {
+                    l[i][j] = sum / l[j][j];
+                }
+            }
+        }
+        double[] h = new double[p];
+        for (int i = 0; i < p; i++) {
+            double sum = g[i];
+            for (int k = 0; k < i; k++) {
+                sum -= l[i][k] * h[k];
+            }
+            h[i] = sum / l[i][i];
+        }
+        for (int i = p - 1; i >= 0; i--) {
+            double sum = h[i];
+            for (int k = i + 1; k < p; k++) {
+                sum -= l[k][i] * h[k];
+            }
+            h[i] = sum / l[i][i];
+        }
+        for (double v : h) {
+            if (!Double.isFinite(v)) {
+                return null;
+            }
+        }
+        return h;
     }
 
     /**
