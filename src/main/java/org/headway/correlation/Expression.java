@@ -171,6 +171,40 @@ public final class Expression {
         }
         int n = values.length;
         int p = parameters.size();
+        if (n <= BLOCK) {
+            return evaluateBlock(columns, parameterValues, values, withGradient, n, p);
+        }
+        // Points in blocks: the program's intermediate arrays stay small and in cache, whatever n.
+        double[][] out = withGradient ? new double[p][n] : null;
+        double[][] blockColumns = new double[columns.length][BLOCK];
+        double[] blockValues = new double[BLOCK];
+        for (int start = 0; start < n; start += BLOCK) {
+            int length = Math.min(BLOCK, n - start);
+            double[][] view = blockColumns;
+            double[] viewValues = blockValues;
+            if (length < BLOCK) {
+                view = new double[columns.length][length];
+                viewValues = new double[length];
+            }
+            for (int c = 0; c < columns.length; c++) {
+                System.arraycopy(columns[c], start, view[c], 0, length);
+            }
+            double[][] g = evaluateBlock(view, parameterValues, viewValues, withGradient, length, p);
+            System.arraycopy(viewValues, 0, values, start, length);
+            if (withGradient) {
+                for (int k = 0; k < p; k++) {
+                    System.arraycopy(g[k], 0, out[k], start, length);
+                }
+            }
+        }
+        return out;
+    }
+
+    /** Points evaluated a block at a time by {@link #evaluateColumns} when there are more. */
+    static final int BLOCK = 2048;
+
+    private double[][] evaluateBlock(
+            double[][] columns, double[] parameterValues, double[] values, boolean withGradient, int n, int p) {
         double[][] val = new double[program.length][];
         double[][][] grad = new double[program.length][][];
         double[] ones = null;

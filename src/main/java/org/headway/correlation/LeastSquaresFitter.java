@@ -530,6 +530,33 @@ public final class LeastSquaresFitter {
          * @return the weighted residual sum of squares
          */
         double evaluate(double[] point, double[] values, double[][][] jacobianOut, int[] bad) {
+            // The fit asks again for points it has just seen (the start, the best point before
+            // polishing, the polished point for the covariance): answered from the last and the
+            // best evaluation. Callers only read what they get.
+            Evaluation known = last != null && java.util.Arrays.equals(point, last.point)
+                    ? last
+                    : best != null && java.util.Arrays.equals(point, best.point) ? best : null;
+            if (known != null) {
+                System.arraycopy(known.values, 0, values, 0, values.length);
+                jacobianOut[0] = known.jacobian;
+                bad[0] = known.bad;
+                return known.cost;
+            }
+            double cost = computed(point, values, jacobianOut, bad);
+            last = new Evaluation(point.clone(), values.clone(), jacobianOut[0], bad[0], cost);
+            if (bad[0] < 0 && bestPoint != null && java.util.Arrays.equals(bestPoint, point)) {
+                best = last;
+            }
+            return cost;
+        }
+
+        /** An evaluation kept for asking again. */
+        private record Evaluation(double[] point, double[] values, double[][] jacobian, int bad, double cost) {}
+
+        private Evaluation last;
+        private Evaluation best;
+
+        private double computed(double[] point, double[] values, double[][][] jacobianOut, int[] bad) {
             evaluations++;
             double[][] jac = expression.evaluateColumns(columns, point, values, true);
             int n = values.length;
