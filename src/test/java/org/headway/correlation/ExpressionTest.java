@@ -29,6 +29,35 @@ class ExpressionTest {
         return jac[0];
     }
 
+    /**
+     * Many points are evaluated in blocks of {@link Expression#BLOCK}: every value and derivative
+     * must be the very double the same expression gives for that point alone (same operations in
+     * the same order, so equal bit for bit), across block edges and a short last block.
+     */
+    @Test
+    void manyPointsInBlocksEqualEachPointAlone() {
+        Expression e =
+                Expression.parse("a*exp(-b*x)/(1 + c*y^2) - sqrt(x + 3)*c", List.of("x", "y"), List.of("a", "b", "c"));
+        int n = 2 * Expression.BLOCK + 37;
+        double[] x = new double[n];
+        double[] y = new double[n];
+        for (int i = 0; i < n; i++) {
+            x[i] = 0.001 * i;
+            y[i] = Math.sin(i);
+        }
+        double[] p = {2.5, 1.3, 0.4};
+        double[] values = new double[n];
+        double[][] gradient = e.evaluateColumns(new double[][] {x, y}, p, values, true);
+        for (int i = 0; i < n; i++) {
+            double[] one = new double[1];
+            double[][] g = e.evaluateColumns(new double[][] {{x[i]}, {y[i]}}, p, one, true);
+            assertEquals(one[0], values[i], 0.0, "value at point " + i);
+            for (int k = 0; k < 3; k++) {
+                assertEquals(g[k][0], gradient[k][i], 0.0, "derivative " + k + " at point " + i);
+            }
+        }
+    }
+
     @Test
     void derivativesOfDecayingExponentialMatchHandDerivatives() {
         // f = a·exp(−b x) + c ⇒ ∂f/∂a = exp(−b x), ∂f/∂b = −a x exp(−b x), ∂f/∂c = 1 (derived by hand)
