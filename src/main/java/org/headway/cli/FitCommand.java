@@ -22,13 +22,14 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
-import org.headway.correlation.FitComparison;
-import org.headway.correlation.FitForm;
-import org.headway.correlation.FitResult;
-import org.headway.correlation.FittedParameter;
-import org.headway.correlation.LeastSquaresFitter;
-import org.headway.correlation.Observations;
-import org.headway.correlation.VariableRange;
+import org.headway.correlation.FittedCorrelation;
+import org.headway.fitting.FitComparison;
+import org.headway.fitting.FitForm;
+import org.headway.fitting.FitResult;
+import org.headway.fitting.FittedParameter;
+import org.headway.fitting.LeastSquaresFitter;
+import org.headway.fitting.Observations;
+import org.headway.fitting.VariableRange;
 import org.headway.project.FittedCorrelationFile;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -176,7 +177,7 @@ public final class FitCommand implements Callable<Integer> {
         }
         if (save != null) {
             try {
-                FittedCorrelationFile.save(save, chosen.toCorrelation(), force);
+                FittedCorrelationFile.save(save, FittedCorrelation.of(chosen), force);
             } catch (InputException e) {
                 throw new InputException("--save " + save, "already exists; give --force to replace it", e);
             }
