@@ -13,12 +13,12 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.headway.caution.InputException;
 import org.headway.pipe.Catalog;
+import org.headway.pipe.Darby2001ThreeK;
 import org.headway.pipe.Fitting;
-import org.headway.pipe.FixedK;
+import org.headway.pipe.Hooper1981TwoK;
 import org.headway.pipe.Material;
 import org.headway.pipe.PipeSize;
-import org.headway.pipe.ThreeK;
-import org.headway.pipe.TwoK;
+import org.headway.pipe.Weisbach1845FixedK;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -204,15 +204,15 @@ public final class CatalogCommand implements Callable<Integer> {
             String k1 = "";
             String kInf = "";
             String kd = "";
-            if (f instanceof FixedK) {
-                k = number(((FixedK) f).coefficient());
-            } else if (f instanceof TwoK) {
-                k1 = number(((TwoK) f).laminarCoefficient());
-                kInf = number(((TwoK) f).turbulentCoefficient());
-            } else if (f instanceof ThreeK) {
-                k1 = number(((ThreeK) f).laminarCoefficient());
-                kInf = number(((ThreeK) f).turbulentCoefficient());
-                kd = number(((ThreeK) f).sizeCoefficient());
+            if (f instanceof Weisbach1845FixedK) {
+                k = number(((Weisbach1845FixedK) f).coefficient());
+            } else if (f instanceof Hooper1981TwoK) {
+                k1 = number(((Hooper1981TwoK) f).laminarCoefficient());
+                kInf = number(((Hooper1981TwoK) f).turbulentCoefficient());
+            } else if (f instanceof Darby2001ThreeK) {
+                k1 = number(((Darby2001ThreeK) f).laminarCoefficient());
+                kInf = number(((Darby2001ThreeK) f).turbulentCoefficient());
+                kd = number(((Darby2001ThreeK) f).sizeCoefficient());
             }
             rows.add(List.of(f.id(), f.method(), k, k1, kInf, kd, f.description(), f.source()));
         }

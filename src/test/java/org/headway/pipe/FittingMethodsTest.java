@@ -22,8 +22,10 @@ class FittingMethodsTest {
     /** Exact arithmetic identities: only rounding error. */
     private static final double ROUNDING = 1e-12;
 
-    private final TwoK hooperFlangedElbow = new TwoK("e", "elbow", 800, 0.25, "Hooper 1981 table, from memory");
-    private final ThreeK darbyFlangedElbow = new ThreeK("e", "elbow", 800, 0.091, 4.0, "Darby table, from memory");
+    private final Hooper1981TwoK hooperFlangedElbow =
+            new Hooper1981TwoK("e", "elbow", 800, 0.25, "Hooper 1981 table, from memory");
+    private final Darby2001ThreeK darbyFlangedElbow =
+            new Darby2001ThreeK("e", "elbow", 800, 0.091, 4.0, "Darby table, from memory");
 
     @ParameterizedTest
     @ValueSource(doubles = {0.5, 1.0, 2.067, 4.026, 12.0})
@@ -74,15 +76,15 @@ class FittingMethodsTest {
     void threeKBoundToANominalSizeUsesItInsteadOfTheBore() {
         // Darby (2001): Dn is the nominal diameter in inches (from memory). NPS 2, bore 2.067 in:
         // 800/1e5 + 0.091 (1 + 4/2^0.3), computed here by hand from the printed formula
-        ThreeK bound = darbyFlangedElbow.atNominalSize(java.util.OptionalDouble.of(2 * INCH));
+        Darby2001ThreeK bound = darbyFlangedElbow.atNominalSize(java.util.OptionalDouble.of(2 * INCH));
         double expected = 800 / 1e5 + 0.091 * (1 + 4.0 / Math.pow(2.0, 0.3));
         assertEquals(expected, bound.lossCoefficient(1e5, 2.067 * INCH), ROUNDING);
         assertEquals(List.of(), bound.cautions(1e5, 2.067 * INCH));
         // rebinding to unknown goes back to the bore, with the note
-        ThreeK unbound = bound.atNominalSize(java.util.OptionalDouble.empty());
+        Darby2001ThreeK unbound = bound.atNominalSize(java.util.OptionalDouble.empty());
         assertEquals(darbyFlangedElbow.lossCoefficient(1e5, 2.067 * INCH), unbound.lossCoefficient(1e5, 2.067 * INCH));
         assertEquals(
-                List.of(ThreeK.NOMINAL_SIZE_UNKNOWN),
+                List.of(Darby2001ThreeK.NOMINAL_SIZE_UNKNOWN),
                 unbound.cautions(1e5, 2.067 * INCH).stream().map(Caution::code).toList());
         // a nominal size outside the assumed span is flagged by its nominal value
         Caution big = darbyFlangedElbow
@@ -103,7 +105,7 @@ class FittingMethodsTest {
 
     @Test
     void fixedKIgnoresReynoldsButWarnsInLaminarFlow() {
-        FixedK elbow = new FixedK("elbow-90-standard", "elbow", 0.75, "Perry, from memory");
+        Weisbach1845FixedK elbow = new Weisbach1845FixedK("elbow-90-standard", "elbow", 0.75, "Perry, from memory");
         assertEquals(0.75, elbow.lossCoefficient(1e3, 0.05), 0.0);
         assertEquals(0.75, elbow.lossCoefficient(1e6, 0.05), 0.0);
         List<Caution> low = elbow.cautions(2000, 0.05);
@@ -130,7 +132,7 @@ class FittingMethodsTest {
         assertEquals("reynolds: must be greater than zero, got 0.0", re.getMessage());
         InputException d = assertThrows(InputException.class, () -> darbyFlangedElbow.lossCoefficient(1e5, Double.NaN));
         assertEquals("innerDiameter: must be a finite number, got NaN", d.getMessage());
-        InputException k = assertThrows(InputException.class, () -> new FixedK("x", "x", -1, "s"));
+        InputException k = assertThrows(InputException.class, () -> new Weisbach1845FixedK("x", "x", -1, "s"));
         assertEquals("k: must not be negative, got -1.0", k.getMessage());
     }
 

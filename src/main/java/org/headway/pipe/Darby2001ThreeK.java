@@ -29,7 +29,7 @@ import org.headway.caution.InputException;
  * as Darby, R. (1999), "Correlate pressure drops through fittings", Chemical Engineering 106(7),
  * 101–104 (both from memory; table number not checked against a copy).
  */
-public final class ThreeK implements Fitting {
+public final class Darby2001ThreeK implements Fitting {
 
     /** Smallest size not flagged (in); assumed, no source. */
     public static final double DIAMETER_LOW_INCHES = 0.25;
@@ -56,7 +56,7 @@ public final class ThreeK implements Fitting {
      * @param sizeCoefficient K_d (in^0.3), not negative
      * @param source publication and table the coefficients come from
      */
-    public ThreeK(
+    public Darby2001ThreeK(
             String id,
             String description,
             double laminarCoefficient,
@@ -72,7 +72,7 @@ public final class ThreeK implements Fitting {
         this.nominalDiameter = OptionalDouble.empty();
     }
 
-    private ThreeK(ThreeK unbound, OptionalDouble nominalDiameter) {
+    private Darby2001ThreeK(Darby2001ThreeK unbound, OptionalDouble nominalDiameter) {
         this.id = unbound.id;
         this.description = unbound.description;
         this.laminarCoefficient = unbound.laminarCoefficient;
@@ -91,11 +91,11 @@ public final class ThreeK implements Fitting {
      * @return a copy bound to that nominal size
      */
     @Override
-    public ThreeK atNominalSize(OptionalDouble nominal) {
+    public Darby2001ThreeK atNominalSize(OptionalDouble nominal) {
         if (nominal.isPresent()) {
             InputException.requirePositive("nominal diameter", nominal.getAsDouble());
         }
-        return new ThreeK(this, nominal);
+        return new Darby2001ThreeK(this, nominal);
     }
 
     /** The nominal diameter the size term uses (m), empty when the inner diameter stands in. */

@@ -11,8 +11,13 @@ import org.headway.caution.InputException;
  * <p>K = k, referred to the velocity in the pipe the fitting sits in. Such tabulated values are
  * measured in fully turbulent flow; below Re = 10⁴ (common practice, no source) the true K grows as
  * Re falls, so {@link #cautions} flags that use.
+ *
+ * <p>Citation: the loss written as K·V²/(2g) with a constant resistance coefficient per fitting goes
+ * back to Weisbach, J. (1845), Lehrbuch der Ingenieur- und Maschinen-Mechanik (from memory; a
+ * reviewer should check the edition). Each catalog row names the table its K comes from (Perry 7th
+ * ed. Table 6-4, Crane TP-410, …). Catalog method id: {@code fixed}.
  */
-public final class FixedK implements Fitting {
+public final class Weisbach1845FixedK implements Fitting {
 
     /** Reynolds number below which a fixed K is flagged (common practice, no source). */
     public static final double TURBULENT_REYNOLDS = 1.0e4;
@@ -28,7 +33,7 @@ public final class FixedK implements Fitting {
      * @param coefficient K (ratio), finite and not negative
      * @param source publication and table the value comes from
      */
-    public FixedK(String id, String description, double coefficient, String source) {
+    public Weisbach1845FixedK(String id, String description, double coefficient, String source) {
         this.id = FittingChecks.requireText("id", id);
         this.description = FittingChecks.requireText("description", description);
         this.coefficient = InputException.requireNonNegative("k", coefficient);

@@ -18,7 +18,7 @@ import org.headway.caution.InputException;
  * <p>Citation: Hooper, W.B. (1981), "The two-K method predicts head losses in pipe fittings",
  * Chemical Engineering, Aug. 24, 1981, pp. 96–100 (equation and coefficient table).
  */
-public final class TwoK implements Fitting {
+public final class Hooper1981TwoK implements Fitting {
 
     /** Smallest inner diameter not flagged (in); assumed, no source. */
     public static final double DIAMETER_LOW_INCHES = 0.25;
@@ -38,7 +38,8 @@ public final class TwoK implements Fitting {
      * @param turbulentCoefficient K∞ (ratio), not negative
      * @param source publication and table the coefficients come from
      */
-    public TwoK(String id, String description, double laminarCoefficient, double turbulentCoefficient, String source) {
+    public Hooper1981TwoK(
+            String id, String description, double laminarCoefficient, double turbulentCoefficient, String source) {
         this.id = FittingChecks.requireText("id", id);
         this.description = FittingChecks.requireText("description", description);
         this.laminarCoefficient = InputException.requireNonNegative("k1", laminarCoefficient);
