@@ -20,6 +20,7 @@ import org.headway.pipe.Material;
 import org.headway.pipe.PipeSize;
 import org.headway.pipe.Weisbach1845FixedK;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -67,11 +68,8 @@ public final class CatalogCommand implements Callable<Integer> {
             description = "Schedule, type or class to keep (sizes only), e.g. 40, STD, 10S, L.")
     String schedule;
 
-    @Option(
-            names = "--catalog",
-            paramLabel = "DIR",
-            description = "Folder of your own catalog files laid over the bundled ones.")
-    Path catalogFolder;
+    @Mixin
+    SharedOptions.CatalogFolder catalogOption;
 
     @Option(
             names = "--format",
@@ -88,6 +86,7 @@ public final class CatalogCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        Path catalogFolder = catalogOption.catalogFolder;
         String what = list.strip().toLowerCase(Locale.ROOT);
         if (!LISTS.contains(what)) {
             throw new InputException("LIST", "unknown list '" + list + "'; expected materials, sizes or fittings");

@@ -33,6 +33,7 @@ import org.headway.fitting.VariableRange;
 import org.headway.project.FittedCorrelationFile;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -92,8 +93,8 @@ public final class FitCommand implements Callable<Integer> {
     @Option(names = "--compare", description = "fit the usual forms side by side, ranked by AICc")
     boolean compare;
 
-    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
-    String format;
+    @Mixin
+    SharedOptions.TextOrJson formatOption;
 
     /** Largest magnitude of a data value accepted: its square and sums of squares stay finite. */
     static final double MAX_MAGNITUDE = 1e100;
@@ -104,11 +105,13 @@ public final class FitCommand implements Callable<Integer> {
     @Option(names = "--save", paramLabel = "FIT.json", description = "save the (best) fit as a correlation file")
     Path save;
 
-    @Option(names = "--force", description = "replace an existing --save file")
-    boolean force;
+    @Mixin
+    SharedOptions.Force forceOption;
 
     @Override
     public Integer call() throws IOException {
+        boolean force = forceOption.force;
+        String format = formatOption.format;
         if (!format.equals("text") && !format.equals("json")) {
             throw new InputException("--format", "must be text or json, got '" + format + "'");
         }
