@@ -136,16 +136,6 @@ public final class Observations {
         return weights != null;
     }
 
-    /** The same data with every response value transformed (used by log-space fits). */
-    Observations withResponse(String name, double[] newResponse) {
-        return new Observations(name, newResponse, variableNames, columns, weights);
-    }
-
-    /** The same data with different explanatory columns. */
-    Observations withColumns(List<String> names, double[][] newColumns) {
-        return new Observations(responseName, response, names, newColumns, weights);
-    }
-
     /** Range of each explanatory column. */
     public List<VariableRange> variableRanges() {
         VariableRange[] ranges = new VariableRange[columns.length];

@@ -36,6 +36,7 @@ import org.headway.rig.RigPointResult;
 import org.headway.rig.RigReport;
 import org.headway.rig.RigUncertainty;
 import org.headway.rig.UncertaintySource;
+import org.headway.system.SiteAtmosphere;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
 
@@ -72,7 +73,7 @@ public final class RigFile {
     /** Current file version. */
     public static final int VERSION = 1;
     /** Pressure at which fluid properties are evaluated when the file gives none (Pa). */
-    public static final double DEFAULT_PRESSURE = 101_325.0;
+    public static final double DEFAULT_PRESSURE = SiteAtmosphere.SEA_LEVEL_PRESSURE;
 
     private static final ObjectMapper MAPPER = ProjectFile.mapper();
     private static final Pattern PERCENT =

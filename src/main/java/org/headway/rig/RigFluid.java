@@ -22,7 +22,7 @@ public record RigFluid(Fluid model, Double fixedTemperature, double pressure, Do
 
     /** The properties of constant-property fluid; only for {@code model() == null}. */
     public RigFluidProperties constantProperties() {
-        return RigFluidProperties.constant(density, viscosity);
+        return RigFluidProperties.constant(density, viscosity, pressure);
     }
 
     /**

@@ -19,10 +19,11 @@ public record RigFluidProperties(FluidState state, double densityTemperatureSlop
     /** Source named for constant properties given in the rig file. */
     static final String CONSTANT_SOURCE = "constant, given in the rig file";
 
-    /** Temperature a constant-property state is recorded at (K); it changes nothing. */
+    /**
+     * Temperature a constant-property state is recorded at (K), the 20 °C that {@link
+     * FluidState#temperatureGiven()} {@code false} stands for; it changes nothing.
+     */
     private static final double CONSTANT_STATE_TEMPERATURE = 293.15;
-    /** Pressure a constant-property state is recorded at (Pa); it changes nothing. */
-    private static final double CONSTANT_STATE_PRESSURE = 101_325.0;
 
     public RigFluidProperties {
         InputException.requirePositive("density", state.density());
@@ -46,13 +47,14 @@ public record RigFluidProperties(FluidState state, double densityTemperatureSlop
      *
      * @param density ρ (kg/m³)
      * @param dynamicViscosity μ (Pa·s)
+     * @param pressure absolute pressure the rig states (Pa); recorded, changes nothing
      * @return properties with zero temperature slopes
      */
-    public static RigFluidProperties constant(double density, double dynamicViscosity) {
+    public static RigFluidProperties constant(double density, double dynamicViscosity, double pressure) {
         FluidState state = new FluidState(
                 "rig fluid",
                 CONSTANT_STATE_TEMPERATURE,
-                CONSTANT_STATE_PRESSURE,
+                pressure,
                 density,
                 dynamicViscosity,
                 dynamicViscosity / density,

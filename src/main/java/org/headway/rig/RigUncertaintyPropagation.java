@@ -84,23 +84,6 @@ public final class RigUncertaintyPropagation {
         reynoldsShares[UncertaintySource.VISCOSITY.ordinal()] = square(umu);
     }
 
-    /**
-     * Propagates the rig's stated uncertainties to one point.
-     *
-     * @param point the point
-     * @param description the rig, with its uncertainties
-     * @param reynolds Re at the point (ratio)
-     * @param frictionFactor measured f at the point (ratio)
-     * @return relative and expanded uncertainties and the dominant contributors
-     */
-    public static PointUncertainty propagate(
-            RigPoint point, RigDescription description, double reynolds, double frictionFactor) {
-        double[] fShares = new double[SOURCES.length];
-        double[] reShares = new double[SOURCES.length];
-        contributions(point, description, fShares, reShares);
-        return summarise(fShares, reShares, reynolds, frictionFactor);
-    }
-
     static PointUncertainty summarise(double[] fShares, double[] reShares, double reynolds, double frictionFactor) {
         double fVariance = 0;
         double reVariance = 0;

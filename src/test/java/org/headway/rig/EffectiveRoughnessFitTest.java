@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import org.headway.system.SiteAtmosphere;
 import org.junit.jupiter.api.Test;
 
 class EffectiveRoughnessFitTest {
@@ -97,7 +98,7 @@ class EffectiveRoughnessFitTest {
                         velocity * Math.PI * D * D / 4,
                         dp,
                         java.util.OptionalDouble.empty(),
-                        RigFluidProperties.constant(998.0, 1e-3),
+                        RigFluidProperties.constant(998.0, 1e-3, SiteAtmosphere.SEA_LEVEL_PRESSURE),
                         List.of());
             }
         };

@@ -14,6 +14,7 @@ import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 import org.headway.friction.FlowRegime;
 import org.headway.friction.FrictionMethods;
+import org.headway.system.SiteAtmosphere;
 import org.junit.jupiter.api.Test;
 
 class RigAnalysisTest {
@@ -37,7 +38,12 @@ class RigAnalysisTest {
         RigDescription rig = RigTestData.rig(d, length, 1.5e-6, RigUncertainty.NONE);
         RigPointResult r = RigAnalysis.of(rig)
                 .analysePoint(new RigPoint(
-                        7, q, dp, OptionalDouble.of(293.15), RigFluidProperties.constant(rho, mu), List.of("a")));
+                        7,
+                        q,
+                        dp,
+                        OptionalDouble.of(293.15),
+                        RigFluidProperties.constant(rho, mu, SiteAtmosphere.SEA_LEVEL_PRESSURE),
+                        List.of("a")));
         assertEquals(v, r.velocity(), v * ROUND_TRIP);
         assertEquals(re, r.reynolds(), re * ROUND_TRIP);
         assertEquals(fTrue, r.frictionFactor(), fTrue * ROUND_TRIP);
@@ -62,7 +68,12 @@ class RigAnalysisTest {
                 "lam", d, 1.0, 0, FrictionMethods.byId("auto"), "const", RigUncertainty.NONE, List.of());
         RigReport report = RigAnalysis.of(rig)
                 .analyse(List.of(new RigPoint(
-                        2, q, dp, OptionalDouble.empty(), RigFluidProperties.constant(rho, mu), List.of())));
+                        2,
+                        q,
+                        dp,
+                        OptionalDouble.empty(),
+                        RigFluidProperties.constant(rho, mu, SiteAtmosphere.SEA_LEVEL_PRESSURE),
+                        List.of())));
         assertEquals(1, report.summary().laminarCount());
         assertEquals(0.0, report.summary().maxDeviation().getAsDouble(), 1e-12);
         assertEquals(
@@ -129,7 +140,12 @@ class RigAnalysisTest {
         InputException e = assertThrows(
                 InputException.class,
                 () -> new RigPoint(
-                        12, 1e-3, -5, OptionalDouble.empty(), RigFluidProperties.constant(998, 1e-3), List.of()));
+                        12,
+                        1e-3,
+                        -5,
+                        OptionalDouble.empty(),
+                        RigFluidProperties.constant(998, 1e-3, SiteAtmosphere.SEA_LEVEL_PRESSURE),
+                        List.of()));
         assertEquals("point at line 12, pressure drop: must be finite and greater than zero, got -5.0", e.getMessage());
     }
 

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.OptionalDouble;
 import java.util.Random;
 import org.headway.friction.FrictionMethods;
+import org.headway.system.SiteAtmosphere;
 
 /** Synthetic rig points for tests, built with an independent Colebrook–White solve. */
 final class RigTestData {
@@ -69,7 +70,7 @@ final class RigTestData {
                     flow,
                     dp,
                     OptionalDouble.empty(),
-                    RigFluidProperties.constant(density, viscosity),
+                    RigFluidProperties.constant(density, viscosity, SiteAtmosphere.SEA_LEVEL_PRESSURE),
                     List.of()));
         }
         return points;

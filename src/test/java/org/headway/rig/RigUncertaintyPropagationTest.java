@@ -6,6 +6,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.OptionalDouble;
 import org.apache.commons.math3.random.Well19937c;
+import org.headway.system.SiteAtmosphere;
 import org.junit.jupiter.api.Test;
 
 class RigUncertaintyPropagationTest {
@@ -47,7 +48,11 @@ class RigUncertaintyPropagationTest {
                 Q,
                 DP,
                 OptionalDouble.of(T),
-                new RigFluidProperties(RigFluidProperties.constant(RHO, MU).state(), RHO_SLOPE, MU_SLOPE),
+                new RigFluidProperties(
+                        RigFluidProperties.constant(RHO, MU, SiteAtmosphere.SEA_LEVEL_PRESSURE)
+                                .state(),
+                        RHO_SLOPE,
+                        MU_SLOPE),
                 List.of());
         return RigAnalysis.of(rig).analysePoint(point);
     }
