@@ -18,6 +18,9 @@ class ArchitectureTest {
         "org.headway.fluid..",
         "org.headway.pipe..",
         "org.headway.friction..",
+        "org.headway.fitting..",
+        "org.headway.dimensional..",
+        "org.headway.rig..",
         "org.headway.correlation..",
         "org.headway.system..",
         "org.headway.network.."
@@ -121,6 +124,9 @@ class ArchitectureTest {
                         "org.headway.fluid..",
                         "org.headway.pipe..",
                         "org.headway.friction..",
+                        "org.headway.fitting..",
+                        "org.headway.dimensional..",
+                        "org.headway.rig..",
                         "org.headway.correlation..",
                         "org.headway.system..")
                 .should()
@@ -145,6 +151,9 @@ class ArchitectureTest {
                 .resideInAnyPackage(
                         "org.headway.fluid..",
                         "org.headway.pipe..",
+                        "org.headway.fitting..",
+                        "org.headway.dimensional..",
+                        "org.headway.rig..",
                         "org.headway.correlation..",
                         "org.headway.system..",
                         "org.headway.project..",
@@ -164,6 +173,9 @@ class ArchitectureTest {
                 .should()
                 .dependOnClassesThat()
                 .resideInAnyPackage(
+                        "org.headway.fitting..",
+                        "org.headway.dimensional..",
+                        "org.headway.rig..",
                         "org.headway.correlation..",
                         "org.headway.system..",
                         "org.headway.project..",
@@ -176,6 +188,75 @@ class ArchitectureTest {
     }
 
     @Test
+    void fittingAndDimensionalAnalysisStandAlone() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAnyPackage("org.headway.fitting..", "org.headway.dimensional..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage(
+                        "org.headway.fluid..",
+                        "org.headway.pipe..",
+                        "org.headway.friction..",
+                        "org.headway.rig..",
+                        "org.headway.correlation..",
+                        "org.headway.system..",
+                        "org.headway.network..",
+                        "org.headway.project..",
+                        "org.headway.chart..",
+                        "org.headway.report..",
+                        "org.headway.cli..",
+                        "org.headway.app..")
+                .because("least-squares fitting and π groups are general numerical tools, used by the fitted"
+                        + " correlations and the edges but knowing nothing of pipes, fluids or rigs");
+        rule.check(classes);
+    }
+
+    @Test
+    void fittingAndDimensionalAnalysisAreIndependent() {
+        noClasses()
+                .that()
+                .resideInAPackage("org.headway.fitting..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAPackage("org.headway.dimensional..")
+                .because("a fit takes any observations, π groups or not")
+                .check(classes);
+        noClasses()
+                .that()
+                .resideInAPackage("org.headway.dimensional..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAPackage("org.headway.fitting..")
+                .because("π groups are found from dimensions alone, before any fit")
+                .check(classes);
+    }
+
+    @Test
+    void rigUsesFluidAndFrictionOnly() {
+        ArchRule rule = noClasses()
+                .that()
+                .resideInAPackage("org.headway.rig..")
+                .should()
+                .dependOnClassesThat()
+                .resideInAnyPackage(
+                        "org.headway.pipe..",
+                        "org.headway.fitting..",
+                        "org.headway.dimensional..",
+                        "org.headway.correlation..",
+                        "org.headway.system..",
+                        "org.headway.network..",
+                        "org.headway.project..",
+                        "org.headway.chart..",
+                        "org.headway.report..",
+                        "org.headway.cli..",
+                        "org.headway.app..")
+                .because("rig data are reduced with the fluid models and compared with the friction"
+                        + " correlations; reading rig files is the project package's job");
+        rule.check(classes);
+    }
+
+    @Test
     void correlationDoesNotReachUp() {
         ArchRule rule = noClasses()
                 .that()
@@ -183,14 +264,19 @@ class ArchitectureTest {
                 .should()
                 .dependOnClassesThat()
                 .resideInAnyPackage(
+                        "org.headway.fluid..",
                         "org.headway.pipe..",
+                        "org.headway.rig..",
+                        "org.headway.dimensional..",
                         "org.headway.system..",
+                        "org.headway.network..",
                         "org.headway.project..",
                         "org.headway.chart..",
                         "org.headway.report..",
                         "org.headway.cli..",
                         "org.headway.app..")
-                .because("fitted correlations feed the pipe-run engine, not the other way round");
+                .because("fitted correlations feed the pipe-run engine, not the other way round; they"
+                        + " build on the fitting results and the friction interface only");
         rule.check(classes);
     }
 

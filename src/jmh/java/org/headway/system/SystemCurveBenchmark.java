@@ -78,7 +78,7 @@ public class SystemCurveBenchmark {
                 EndCondition.OPEN_AT_PIPE_END,
                 Optional.empty(),
                 0,
-                PipeRun.STANDARD_ATMOSPHERE,
+                SiteAtmosphere.SEA_LEVEL_PRESSURE,
                 0.01,
                 0,
                 DesignLimits.USUAL);

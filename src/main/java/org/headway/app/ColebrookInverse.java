@@ -1,6 +1,7 @@
 package org.headway.app;
 
 import java.util.Locale;
+import org.headway.friction.Colebrook1939;
 import org.headway.friction.FlowRegimes;
 
 /**
@@ -26,7 +27,9 @@ final class ColebrookInverse {
      */
     static double relativeRoughness(double reynolds, double frictionFactor) {
         double root = Math.sqrt(frictionFactor);
-        return 3.7 * (Math.pow(10, -1 / (2 * root)) - 2.51 / (reynolds * root));
+        return Colebrook1939.ROUGHNESS_DIVISOR
+                * (Math.pow(10, -1 / (Colebrook1939.LOG_COEFFICIENT * root))
+                        - Colebrook1939.VISCOUS_COEFFICIENT / (reynolds * root));
     }
 
     /**

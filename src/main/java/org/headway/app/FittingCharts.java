@@ -2,7 +2,7 @@ package org.headway.app;
 
 import java.awt.geom.Ellipse2D;
 import org.headway.chart.ChartStyle;
-import org.headway.correlation.FitResult;
+import org.headway.fitting.FitResult;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;

@@ -23,13 +23,13 @@ import javafx.collections.ObservableList;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 import org.headway.chart.FrictionChart;
-import org.headway.correlation.FitComparison;
-import org.headway.correlation.FitForm;
-import org.headway.correlation.FitResult;
 import org.headway.correlation.FittedCorrelation;
-import org.headway.correlation.FittedParameter;
-import org.headway.correlation.LeastSquaresFitter;
-import org.headway.correlation.Observations;
+import org.headway.fitting.FitComparison;
+import org.headway.fitting.FitForm;
+import org.headway.fitting.FitResult;
+import org.headway.fitting.FittedParameter;
+import org.headway.fitting.LeastSquaresFitter;
+import org.headway.fitting.Observations;
 import org.headway.project.FittedCorrelationFile;
 import org.headway.project.ProjectResolver;
 import org.jfree.chart.JFreeChart;
@@ -419,7 +419,7 @@ public final class FittingModel {
             return false;
         }
         try {
-            FittedCorrelationFile.save(target, r.result().toCorrelation());
+            FittedCorrelationFile.save(target, FittedCorrelation.of(r.result()));
         } catch (UncheckedIOException e) {
             dialogs.showError("Could not save " + target.getFileName(), String.valueOf(e.getMessage()));
             return false;
@@ -502,7 +502,7 @@ public final class FittingModel {
         FitRow r = selected.get();
         // The fit the run already uses is drawn by the run; a second copy would only double the legend.
         if (r != null && !(r == savedRow && usedByRun())) {
-            curves.add(curve("fit: " + r.form() + " (not saved)", r.result().toCorrelation()));
+            curves.add(curve("fit: " + r.form() + " (not saved)", FittedCorrelation.of(r.result())));
         }
         return new FrictionOverlay(points, curves);
     }

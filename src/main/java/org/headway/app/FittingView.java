@@ -24,7 +24,7 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
-import org.headway.correlation.FitComparison;
+import org.headway.fitting.FitComparison;
 
 /**
  * The fitting view: import, column choice, forms, the fits side by side, the residual plot of the

@@ -10,10 +10,10 @@ import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.headway.caution.InputException;
-import org.headway.correlation.DimensionalAnalysis;
-import org.headway.correlation.DimensionalVariable;
-import org.headway.correlation.DimensionlessGroup;
-import org.headway.correlation.GroupAnalysis;
+import org.headway.dimensional.DimensionalAnalysis;
+import org.headway.dimensional.DimensionalVariable;
+import org.headway.dimensional.DimensionlessGroup;
+import org.headway.dimensional.GroupAnalysis;
 import org.headway.units.DimensionParser;
 
 /**

@@ -19,7 +19,7 @@ import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
-import org.headway.correlation.RigReport;
+import org.headway.rig.RigReport;
 
 /** The rig-data view: open a rig file, per-point table, summary, effective roughness, cautions. */
 final class RigDataView extends VBox {

@@ -13,13 +13,14 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.headway.caution.InputException;
 import org.headway.pipe.Catalog;
+import org.headway.pipe.Darby2001ThreeK;
 import org.headway.pipe.Fitting;
-import org.headway.pipe.FixedK;
+import org.headway.pipe.Hooper1981TwoK;
 import org.headway.pipe.Material;
 import org.headway.pipe.PipeSize;
-import org.headway.pipe.ThreeK;
-import org.headway.pipe.TwoK;
+import org.headway.pipe.Weisbach1845FixedK;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -67,11 +68,8 @@ public final class CatalogCommand implements Callable<Integer> {
             description = "Schedule, type or class to keep (sizes only), e.g. 40, STD, 10S, L.")
     String schedule;
 
-    @Option(
-            names = "--catalog",
-            paramLabel = "DIR",
-            description = "Folder of your own catalog files laid over the bundled ones.")
-    Path catalogFolder;
+    @Mixin
+    SharedOptions.CatalogFolder catalogOption;
 
     @Option(
             names = "--format",
@@ -88,6 +86,7 @@ public final class CatalogCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        Path catalogFolder = catalogOption.catalogFolder;
         String what = list.strip().toLowerCase(Locale.ROOT);
         if (!LISTS.contains(what)) {
             throw new InputException("LIST", "unknown list '" + list + "'; expected materials, sizes or fittings");
@@ -204,15 +203,15 @@ public final class CatalogCommand implements Callable<Integer> {
             String k1 = "";
             String kInf = "";
             String kd = "";
-            if (f instanceof FixedK) {
-                k = number(((FixedK) f).coefficient());
-            } else if (f instanceof TwoK) {
-                k1 = number(((TwoK) f).laminarCoefficient());
-                kInf = number(((TwoK) f).turbulentCoefficient());
-            } else if (f instanceof ThreeK) {
-                k1 = number(((ThreeK) f).laminarCoefficient());
-                kInf = number(((ThreeK) f).turbulentCoefficient());
-                kd = number(((ThreeK) f).sizeCoefficient());
+            if (f instanceof Weisbach1845FixedK) {
+                k = number(((Weisbach1845FixedK) f).coefficient());
+            } else if (f instanceof Hooper1981TwoK) {
+                k1 = number(((Hooper1981TwoK) f).laminarCoefficient());
+                kInf = number(((Hooper1981TwoK) f).turbulentCoefficient());
+            } else if (f instanceof Darby2001ThreeK) {
+                k1 = number(((Darby2001ThreeK) f).laminarCoefficient());
+                kInf = number(((Darby2001ThreeK) f).turbulentCoefficient());
+                kd = number(((Darby2001ThreeK) f).sizeCoefficient());
             }
             rows.add(List.of(f.id(), f.method(), k, k1, kInf, kd, f.description(), f.source()));
         }

@@ -22,16 +22,18 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
-import org.headway.correlation.FitComparison;
-import org.headway.correlation.FitForm;
-import org.headway.correlation.FitResult;
-import org.headway.correlation.FittedParameter;
-import org.headway.correlation.LeastSquaresFitter;
-import org.headway.correlation.Observations;
-import org.headway.correlation.VariableRange;
+import org.headway.correlation.FittedCorrelation;
+import org.headway.fitting.FitComparison;
+import org.headway.fitting.FitForm;
+import org.headway.fitting.FitResult;
+import org.headway.fitting.FittedParameter;
+import org.headway.fitting.LeastSquaresFitter;
+import org.headway.fitting.Observations;
+import org.headway.fitting.VariableRange;
 import org.headway.project.FittedCorrelationFile;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -91,8 +93,8 @@ public final class FitCommand implements Callable<Integer> {
     @Option(names = "--compare", description = "fit the usual forms side by side, ranked by AICc")
     boolean compare;
 
-    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
-    String format;
+    @Mixin
+    SharedOptions.TextOrJson formatOption;
 
     /** Largest magnitude of a data value accepted: its square and sums of squares stay finite. */
     static final double MAX_MAGNITUDE = 1e100;
@@ -103,11 +105,13 @@ public final class FitCommand implements Callable<Integer> {
     @Option(names = "--save", paramLabel = "FIT.json", description = "save the (best) fit as a correlation file")
     Path save;
 
-    @Option(names = "--force", description = "replace an existing --save file")
-    boolean force;
+    @Mixin
+    SharedOptions.Force forceOption;
 
     @Override
     public Integer call() throws IOException {
+        boolean force = forceOption.force;
+        String format = formatOption.format;
         if (!format.equals("text") && !format.equals("json")) {
             throw new InputException("--format", "must be text or json, got '" + format + "'");
         }
@@ -176,7 +180,7 @@ public final class FitCommand implements Callable<Integer> {
         }
         if (save != null) {
             try {
-                FittedCorrelationFile.save(save, chosen.toCorrelation(), force);
+                FittedCorrelationFile.save(save, FittedCorrelation.of(chosen), force);
             } catch (InputException e) {
                 throw new InputException("--save " + save, "already exists; give --force to replace it", e);
             }

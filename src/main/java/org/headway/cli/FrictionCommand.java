@@ -25,6 +25,7 @@ import org.headway.friction.FrictionMethods;
 import org.headway.friction.FrictionResult;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** {@code headway friction}: the Darcy friction factor at one point or for every row of a CSV file. */
@@ -102,11 +103,12 @@ public final class FrictionCommand implements Callable<Integer> {
             description = "Where to write the batch result (default: standard output). Written whole or not at all.")
     Path output;
 
-    @Option(names = "--force", description = "Replace an existing --output file.")
-    boolean force;
+    @Mixin
+    SharedOptions.Force forceOption;
 
     @Override
     public Integer call() throws IOException {
+        boolean force = forceOption.force;
         FrictionCorrelation correlation = FrictionMethods.byId(method);
         if (input != null) {
             if (reynolds != null || relativeRoughness != null || format != null) {
@@ -381,7 +383,7 @@ public final class FrictionCommand implements Callable<Integer> {
             }
             if (temporary != null) {
                 try {
-                    org.headway.project.AtomicFiles.place(temporary, output.toAbsolutePath(), force);
+                    org.headway.project.AtomicFiles.place(temporary, output.toAbsolutePath(), forceOption.force);
                 } catch (java.nio.file.FileAlreadyExistsException e) {
                     throw new InputException(
                             "--output " + output,

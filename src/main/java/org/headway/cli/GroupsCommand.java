@@ -10,13 +10,14 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.headway.caution.InputException;
-import org.headway.correlation.DimensionalAnalysis;
-import org.headway.correlation.DimensionalVariable;
-import org.headway.correlation.DimensionlessGroup;
-import org.headway.correlation.GroupAnalysis;
+import org.headway.dimensional.DimensionalAnalysis;
+import org.headway.dimensional.DimensionalVariable;
+import org.headway.dimensional.DimensionlessGroup;
+import org.headway.dimensional.GroupAnalysis;
 import org.headway.units.DimensionParser;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** {@code headway groups}: Buckingham π groups from variables and their units. */
@@ -47,11 +48,12 @@ public final class GroupsCommand implements Callable<Integer> {
             description = "repeating variables (default: density, velocity, a diameter, then the others in order)")
     List<String> repeating = new ArrayList<>();
 
-    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE})")
-    String format;
+    @Mixin
+    SharedOptions.TextOrJson formatOption;
 
     @Override
     public Integer call() throws Exception {
+        String format = formatOption.format;
         if (!format.equals("text") && !format.equals("json")) {
             throw new InputException("--format", "must be text or json, got '" + format + "'");
         }

@@ -23,6 +23,7 @@ import org.headway.project.ProjectResolver;
 import org.headway.units.Quantities;
 import org.headway.units.UnitSystem;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
@@ -91,20 +92,14 @@ public final class NetworkCommand implements Callable<Integer> {
             description = "Save the network as a Headway project (format 2, nodes and links).")
     Path save;
 
-    @Option(names = "--force", description = "Replace existing files written by --save and --output.")
-    boolean force;
+    @Mixin
+    SharedOptions.Force forceOption;
 
-    @Option(
-            names = "--units",
-            defaultValue = "si",
-            description = "Text output units: si, us or process (m³/h and bar) (default ${DEFAULT-VALUE}).")
-    String units;
+    @Mixin
+    SharedOptions.TextUnits unitsOption;
 
-    @Option(
-            names = "--catalog",
-            paramLabel = "DIR",
-            description = "Folder of catalog files to add to the bundled ones.")
-    Path catalogFolder;
+    @Mixin
+    SharedOptions.CatalogFolder catalogOption;
 
     @Option(
             names = "--timings",
@@ -237,6 +232,9 @@ public final class NetworkCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        Path catalogFolder = catalogOption.catalogFolder;
+        boolean force = forceOption.force;
+        String units = unitsOption.units;
         long t0 = System.nanoTime();
         NetworkDesign design = NetworkDesign.of(balance, minValveDrop, valveSettings, fireFlow, residualPressure);
         UnitSystem system = CliSupport.unitSystem(units);

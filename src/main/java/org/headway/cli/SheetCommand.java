@@ -15,6 +15,7 @@ import org.headway.report.SafeText;
 import org.headway.report.WorkbookSheetWriter;
 import org.headway.units.UnitSystem;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -58,8 +59,8 @@ public final class SheetCommand implements Callable<Integer> {
             description = "For --mode flow: head a pump adds at fixed head, e.g. \"12 m\" (default 0).")
     String availableHead;
 
-    @Option(names = "--force", description = "Replace existing files.")
-    boolean force;
+    @Mixin
+    SharedOptions.Force forceOption;
 
     @Option(
             names = "--units",
@@ -67,14 +68,13 @@ public final class SheetCommand implements Callable<Integer> {
             description = "Units on the PDF: si, us or process (m³/h and bar) (default ${DEFAULT-VALUE}).")
     String units;
 
-    @Option(
-            names = "--catalog",
-            paramLabel = "DIR",
-            description = "Folder of catalog files to add to the bundled ones.")
-    Path catalogFolder;
+    @Mixin
+    SharedOptions.CatalogFolder catalogOption;
 
     @Override
     public Integer call() {
+        Path catalogFolder = catalogOption.catalogFolder;
+        boolean force = forceOption.force;
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
         org.headway.project.Project loaded = ProjectFile.load(project);
@@ -179,7 +179,7 @@ public final class SheetCommand implements Callable<Integer> {
         }
         Path pdf = pdfPath();
         for (Path p : outputs(pdf)) {
-            if (!force && p.toFile().exists()) {
+            if (!forceOption.force && p.toFile().exists()) {
                 throw new InputException(p.toString(), "already exists; use --force to replace it");
             }
         }
@@ -202,7 +202,7 @@ public final class SheetCommand implements Callable<Integer> {
                 w.flush();
             }));
         }
-        org.headway.project.AtomicFiles.writeAll(files, force);
+        org.headway.project.AtomicFiles.writeAll(files, forceOption.force);
         PrintWriter o = spec.commandLine().getOut();
         for (org.headway.project.AtomicFiles.Entry f : files) {
             o.println("wrote " + f.target());

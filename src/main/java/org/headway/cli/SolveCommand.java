@@ -19,6 +19,7 @@ import org.headway.system.SystemCurve;
 import org.headway.system.UncertaintyBand;
 import org.headway.units.UnitSystem;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -79,17 +80,11 @@ public final class SolveCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text, json or csv (default ${DEFAULT-VALUE}).")
     Format format;
 
-    @Option(
-            names = "--units",
-            defaultValue = "si",
-            description = "Text output units: si, us or process (m³/h and bar) (default ${DEFAULT-VALUE}).")
-    String units;
+    @Mixin
+    SharedOptions.TextUnits unitsOption;
 
-    @Option(
-            names = "--catalog",
-            paramLabel = "DIR",
-            description = "Folder of catalog files to add to the bundled ones.")
-    Path catalogFolder;
+    @Mixin
+    SharedOptions.CatalogFolder catalogOption;
 
     /** Resolves the project, naming the project file in front of the JSON path of any problem. */
     private ResolvedProject resolve(org.headway.project.Project loaded, Catalog catalog) {
@@ -103,6 +98,8 @@ public final class SolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        Path catalogFolder = catalogOption.catalogFolder;
+        String units = unitsOption.units;
         UnitSystem system = CliSupport.unitSystem(units);
         Catalog catalog = catalogFolder == null ? Catalog.bundled() : Catalog.withUserFolder(catalogFolder);
         org.headway.project.Project loaded = ProjectFile.load(project);

@@ -6,6 +6,10 @@ import java.util.Locale;
 import java.util.Objects;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
+import org.headway.fitting.Expression;
+import org.headway.fitting.FitResult;
+import org.headway.fitting.FittedParameter;
+import org.headway.fitting.VariableRange;
 
 /**
  * A correlation the user fitted to their own data: the model text, the fitted parameter values,
@@ -76,8 +80,13 @@ public final class FittedCorrelation {
         this.expression = Expression.parse(expressionText, this.variableNames, names);
     }
 
-    /** The correlation of a finished fit. */
-    static FittedCorrelation of(FitResult fit) {
+    /**
+     * The correlation of a finished fit: it can be evaluated, saved and used in a pipe run.
+     *
+     * @param fit a finished fit
+     * @return its correlation
+     */
+    public static FittedCorrelation of(FitResult fit) {
         return new FittedCorrelation(
                 fit.responseName(),
                 fit.formDescription(),

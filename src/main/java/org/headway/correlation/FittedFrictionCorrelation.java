@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
+import org.headway.fitting.VariableRange;
 import org.headway.friction.FlowRegime;
 import org.headway.friction.FrictionCorrelation;
 import org.headway.friction.FrictionResult;

@@ -1,7 +1,7 @@
 /**
- * Fitting correlations to the user's own data and dimensional analysis: least-squares fits of
- * built-in forms and user expressions (a thin adapter over Commons Math), the fitted correlation as
- * a value object usable as a friction or loss-coefficient method, and Buckingham π groups.
- * Depends only on {@code friction} and {@code caution}.
+ * Correlations the user fitted to their own data, as value objects: evaluated with range cautions,
+ * saved, and used as a friction method ({@code FittedFrictionCorrelation}) or a fitting's loss
+ * coefficient ({@code FittedLossCoefficient}). Depends on {@code fitting}, {@code friction} and
+ * {@code caution}.
  */
 package org.headway.correlation;

@@ -67,6 +67,13 @@ public final class Catalog {
 
     static final List<String> FITTING_COLUMNS =
             List.of("id", "description", "method", "k", "k1", "k_inf", "k_d", "source");
+    /**
+     * Optional fitting columns a file may carry without breaking: {@code kv} and {@code cv}, a
+     * maker's flow coefficient for the size in use (m³/h at 1 bar; US gal/min at 1 psi), and
+     * {@code notes}. They are checked (a flow coefficient must be a positive number) but do not
+     * change K: the row's method gives the loss.
+     */
+    static final List<String> FITTING_OPTIONAL_COLUMNS = List.of("kv", "cv", "notes");
 
     /** Material conditions a file may name. */
     public static final List<String> CONDITIONS = List.of("new", "aged");
@@ -406,7 +413,7 @@ public final class Catalog {
             if (fileName.equals(MATERIALS_FILE)) {
                 addMaterials(CatalogFile.parse(label, text, MATERIAL_COLUMNS, MATERIAL_OPTIONAL_COLUMNS));
             } else if (fileName.equals(FITTINGS_FILE)) {
-                addFittings(CatalogFile.parse(label, text, FITTING_COLUMNS));
+                addFittings(CatalogFile.parse(label, text, FITTING_COLUMNS, FITTING_OPTIONAL_COLUMNS));
             } else {
                 String table = fileName.substring(SIZES_PREFIX.length(), fileName.length() - CSV_SUFFIX.length());
                 if (!table.matches("[A-Za-z0-9][A-Za-z0-9._-]*")) {
@@ -549,16 +556,21 @@ public final class Catalog {
                 String method = file.text(row, "method");
                 String description = file.text(row, "description");
                 String source = file.text(row, "source");
+                for (String flowCoefficient : List.of("kv", "cv")) {
+                    if (row.cells().containsKey(flowCoefficient) && !file.isBlank(row, flowCoefficient)) {
+                        file.positive(row, flowCoefficient);
+                    }
+                }
                 Fitting fitting;
                 switch (method) {
                     case "fixed":
                         requireUnused(file, row, method, "k1", "k_inf", "k_d");
-                        fitting =
-                                new FixedK(id, description, file.nonNegativeAtMost(row, "k", MAX_COEFFICIENT), source);
+                        fitting = new Weisbach1845FixedK(
+                                id, description, file.nonNegativeAtMost(row, "k", MAX_COEFFICIENT), source);
                         break;
                     case "2-k":
                         requireUnused(file, row, method, "k", "k_d");
-                        fitting = new TwoK(
+                        fitting = new Hooper1981TwoK(
                                 id,
                                 description,
                                 file.nonNegativeAtMost(row, "k1", MAX_COEFFICIENT),
@@ -567,7 +579,7 @@ public final class Catalog {
                         break;
                     case "3-k":
                         requireUnused(file, row, method, "k");
-                        fitting = new ThreeK(
+                        fitting = new Darby2001ThreeK(
                                 id,
                                 description,
                                 file.nonNegativeAtMost(row, "k1", MAX_COEFFICIENT),

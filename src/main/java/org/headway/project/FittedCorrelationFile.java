@@ -15,8 +15,8 @@ import java.util.Set;
 import org.headway.caution.InputException;
 import org.headway.correlation.FitStatistics;
 import org.headway.correlation.FittedCorrelation;
-import org.headway.correlation.FittedParameter;
-import org.headway.correlation.VariableRange;
+import org.headway.fitting.FittedParameter;
+import org.headway.fitting.VariableRange;
 
 /**
  * Saves and loads a {@link FittedCorrelation} as a small JSON file:

@@ -19,9 +19,9 @@ import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
-import org.headway.correlation.RigFluidProperties;
-import org.headway.correlation.RigPoint;
-import org.headway.fluid.FluidState;
+import org.headway.rig.RigFluid;
+import org.headway.rig.RigFluidProperties;
+import org.headway.rig.RigPoint;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
 
@@ -43,8 +43,6 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
     public static final int MAX_RECORD_CHARS = 4 << 20;
     /** Distinct temperatures whose fluid properties are remembered. */
     static final int PROPERTY_CACHE_SIZE = 4096;
-    /** Temperature step of the central difference for dρ/dT and dμ/dT (K). */
-    static final double SLOPE_STEP = 0.05;
 
     private static final Pattern HEADER = Pattern.compile("^\\s*(.*?)\\s*(?:\\[(.*)\\])?\\s*$");
 
@@ -52,7 +50,7 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
     private final CSVParser parser;
     private final Iterator<CSVRecord> records;
     private final String file;
-    private final RigFile.FluidSpec fluid;
+    private final RigFluid fluid;
     private final int flowColumn;
     private final int pressureColumn;
     private final int temperatureColumn;
@@ -75,7 +73,7 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
         }
     }
 
-    RigDataReader(Reader reader, String file, RigFile.Columns columns, RigFile.FluidSpec fluid) {
+    RigDataReader(Reader reader, String file, RigFile.Columns columns, RigFluid fluid) {
         this.file = file;
         this.fluid = fluid;
         this.limited = new LimitedReader(reader);
@@ -151,7 +149,7 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
         this.carriedIndex = carried.stream().mapToInt(Integer::intValue).toArray();
         this.carriedNames = List.copyOf(carriedHeader);
         if (fluid.model() == null) {
-            constantProperties = RigFluidProperties.constant(fluid.density(), fluid.viscosity());
+            constantProperties = fluid.constantProperties();
         } else if (fluid.fixedTemperature() != null) {
             constantProperties = properties(fluid.fixedTemperature(), at);
         } else {
@@ -311,37 +309,17 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
         return p;
     }
 
-    /**
-     * Properties at a temperature with central-difference slopes (error O(h²), h = 0.05 K); a
-     * one-sided difference where one neighbour lies outside the fluid model (e.g. within 0.05 K of
-     * freezing).
-     */
     private RigFluidProperties properties(double temperature, String where) {
-        FluidState state;
+        RigFluidProperties properties;
         try {
-            state = fluid.model().state(temperature, fluid.pressure());
+            properties = fluid.propertiesAt(temperature);
         } catch (InputException e) {
             throw e.at(where + ": ");
         }
-        FluidState above = neighbour(temperature + SLOPE_STEP);
-        FluidState below = neighbour(temperature - SLOPE_STEP);
-        FluidState high = above == null ? state : above;
-        FluidState low = below == null ? state : below;
-        double step = (above == null ? 0 : SLOPE_STEP) + (below == null ? 0 : SLOPE_STEP);
-        double densitySlope = step == 0 ? 0.0 : (high.density() - low.density()) / step;
-        double viscositySlope = step == 0 ? 0.0 : (high.dynamicViscosity() - low.dynamicViscosity()) / step;
-        for (Caution c : state.cautions()) {
+        for (Caution c : properties.state().cautions()) {
             cautions.putIfAbsent(c.code(), c.about("first at " + where));
         }
-        return new RigFluidProperties(state.density(), state.dynamicViscosity(), densitySlope, viscositySlope);
-    }
-
-    private FluidState neighbour(double temperature) {
-        try {
-            return fluid.model().state(temperature, fluid.pressure());
-        } catch (InputException e) {
-            return null;
-        }
+        return properties;
     }
 
     @Override

@@ -24,17 +24,19 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
-import org.headway.correlation.InstrumentUncertainty;
-import org.headway.correlation.RigAnalysis;
-import org.headway.correlation.RigDescription;
-import org.headway.correlation.RigPointResult;
-import org.headway.correlation.RigReport;
-import org.headway.correlation.RigUncertainty;
-import org.headway.correlation.UncertaintySource;
 import org.headway.fluid.Fluid;
 import org.headway.fluid.Fluids;
 import org.headway.friction.FrictionCorrelation;
 import org.headway.friction.FrictionMethods;
+import org.headway.rig.InstrumentUncertainty;
+import org.headway.rig.RigAnalysis;
+import org.headway.rig.RigDescription;
+import org.headway.rig.RigFluid;
+import org.headway.rig.RigPointResult;
+import org.headway.rig.RigReport;
+import org.headway.rig.RigUncertainty;
+import org.headway.rig.UncertaintySource;
+import org.headway.system.SiteAtmosphere;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
 
@@ -71,7 +73,7 @@ public final class RigFile {
     /** Current file version. */
     public static final int VERSION = 1;
     /** Pressure at which fluid properties are evaluated when the file gives none (Pa). */
-    public static final double DEFAULT_PRESSURE = 101_325.0;
+    public static final double DEFAULT_PRESSURE = SiteAtmosphere.SEA_LEVEL_PRESSURE;
 
     private static final ObjectMapper MAPPER = ProjectFile.mapper();
     private static final Pattern PERCENT =
@@ -82,9 +84,9 @@ public final class RigFile {
     private final RigDescription description;
     private final DataSource data;
     private final Columns columns;
-    private final FluidSpec fluid;
+    private final RigFluid fluid;
 
-    private RigFile(RigDescription description, DataSource data, Columns columns, FluidSpec fluid) {
+    private RigFile(RigDescription description, DataSource data, Columns columns, RigFluid fluid) {
         this.description = description;
         this.data = data;
         this.columns = columns;
@@ -102,12 +104,6 @@ public final class RigFile {
 
     /** Column names of the measured quantities. */
     record Columns(String flow, String pressureDrop, String temperature) {}
-
-    /**
-     * How fluid properties are found: a fluid model at a temperature (fixed or per point), or
-     * constant properties.
-     */
-    record FluidSpec(Fluid model, Double fixedTemperature, double pressure, Double density, Double viscosity) {}
 
     /**
      * Reads a rig file from disk; its data path is taken relative to the file's folder.
@@ -248,7 +244,7 @@ public final class RigFile {
             throw new InputException("$.compareWith", e.problem());
         }
         Columns columns = columns(root);
-        FluidSpec fluid = fluid(root);
+        RigFluid fluid = fluid(root);
         RigUncertainty uncertainty = uncertainty(root);
         String dataPath = Json.text(root, "$", "data");
         DataSource data = resolver.resolve(dataPath);
@@ -285,7 +281,7 @@ public final class RigFile {
                 c.has("temperature") ? Json.text(c, "$.columns", "temperature") : "T");
     }
 
-    private static FluidSpec fluid(JsonNode root) {
+    private static RigFluid fluid(JsonNode root) {
         JsonNode f = Json.required(root, "$", "fluid");
         String path = "$.fluid";
         Json.object(f, path);
@@ -305,7 +301,7 @@ public final class RigFile {
             double viscosity = quantity(f, path, "viscosity", QuantityKind.DYNAMIC_VISCOSITY);
             InputException.requirePositive(path + ".density", density);
             InputException.requirePositive(path + ".viscosity", viscosity);
-            return new FluidSpec(null, temperature, pressure, density, viscosity);
+            return new RigFluid(null, temperature, pressure, density, viscosity);
         }
         Fluid model;
         try {
@@ -314,7 +310,7 @@ public final class RigFile {
             throw new InputException(
                     path + ".name", e.problem() + "; or give constant properties with \"density\" and \"viscosity\"");
         }
-        return new FluidSpec(model, temperature, pressure, null, null);
+        return new RigFluid(model, temperature, pressure, null, null);
     }
 
     private static RigUncertainty uncertainty(JsonNode root) {

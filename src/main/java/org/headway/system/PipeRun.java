@@ -47,9 +47,6 @@ public record PipeRun(
     /** Largest design flow accepted (m³/s), above the flow of most rivers; guards against unit slips. */
     public static final double MAX_FLOW = 1e4;
 
-    /** Standard atmosphere, 101 325 Pa (ISO 2533). */
-    public static final double STANDARD_ATMOSPHERE = SiteAtmosphere.SEA_LEVEL_PRESSURE;
-
     public PipeRun {
         Objects.requireNonNull(fluid, "fluid");
         Objects.requireNonNull(friction, "friction");
@@ -126,7 +123,7 @@ public record PipeRun(
             }
             elements.add(pumpPosition, new PumpElement(id, pump.get()));
         }
-        SiteAtmosphere site = atmosphericPressure == STANDARD_ATMOSPHERE
+        SiteAtmosphere site = atmosphericPressure == SiteAtmosphere.SEA_LEVEL_PRESSURE
                 ? SiteAtmosphere.SEA_LEVEL
                 : SiteAtmosphere.ofPressure(atmosphericPressure);
         return new PipeRun(

@@ -214,27 +214,6 @@ public record Segment(
                 highPoint);
     }
 
-    /** A copy with another length (used to check that loss scales with length). */
-    public Segment withLength(double newLength) {
-        return new Segment(
-                id,
-                name,
-                newLength,
-                innerDiameter,
-                roughness,
-                roughnessLow,
-                roughnessHigh,
-                roughnessSource,
-                pipeDescription,
-                pipeCondition,
-                fittings,
-                extraLossCoefficient,
-                elevationChange,
-                frictionOverride,
-                hazenWilliams,
-                highPoint);
-    }
-
     /** A copy with the roughness moved to another value inside or at the ends of its range. */
     public Segment withRoughness(double newRoughness) {
         return new Segment(

@@ -73,7 +73,7 @@ public final class DimensionParser {
      * @param where what to name in an error message, e.g. {@code --var rho}
      * @return exponent of each SI base dimension in the order mass, length, time, temperature,
      *     current, amount of substance, luminous intensity (the order of {@code
-     *     org.headway.correlation.Dimension})
+     *     org.headway.dimensional.Dimension})
      * @throws InputException naming the character position and the unknown symbol or bad syntax
      */
     public static int[] parse(String unit, String where) {

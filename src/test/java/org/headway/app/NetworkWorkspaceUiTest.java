@@ -180,7 +180,7 @@ class NetworkWorkspaceUiTest {
             worst = Math.max(worst, relative(l.get("flow_m3_per_s").asDouble(), r.flow()));
             worst = Math.max(worst, relative(l.get("head_loss_m").asDouble(), r.headLoss()));
         }
-        System.out.println("network workspace vs command line: largest relative difference " + worst);
+        org.headway.Fuzz.summary("network workspace vs command line: largest relative difference " + worst);
         assertTrue(worst <= SAME_ENGINE, "largest relative difference " + worst);
 
         // Continuity at each junction from the flows shown (mass balance, no engine involved).

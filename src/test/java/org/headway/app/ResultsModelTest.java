@@ -18,9 +18,13 @@ import org.headway.project.ProjectResolver;
 import org.headway.system.HeadLossCalculator;
 import org.headway.system.PipeRun;
 import org.headway.system.RunResult;
+import org.headway.system.SegmentResult;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
 import org.headway.units.UnitSystem;
+import org.jfree.chart.JFreeChart;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -162,7 +166,6 @@ class ResultsModelTest {
     @Test
     void chartsAreBuiltWithTheResults() {
         assertNotNull(results.frictionChartProperty().get());
-        assertNotNull(results.gradeChartProperty().get());
         assertNotNull(results.systemChartProperty().get());
         assertEquals(
                 "Pump operating point",
@@ -171,6 +174,26 @@ class ResultsModelTest {
                         .findFirst()
                         .orElseThrow()
                         .label());
+        // The grade chart must draw the engine's grade lines: along the length typed in the project
+        // file (read here independently of the view-model), each pipe's energy grade falling by
+        // exactly its head loss (major + minor) as the engine computes it.
+        JFreeChart grade = results.gradeChartProperty().get();
+        XYSeriesCollection data = (XYSeriesCollection) grade.getXYPlot().getDataset();
+        XYSeries egl = data.getSeries("energy grade line");
+        RunResult reference = engine(demo, null);
+        List<SegmentResult> pipes = reference.segments();
+        assertEquals(2 * pipes.size(), egl.getItemCount());
+        double typedLength = 0;
+        for (var spec : ProjectFile.load(demo).segments()) {
+            typedLength += Quantities.parse(spec.length(), QuantityKind.LENGTH);
+        }
+        double drawnLength = egl.getX(egl.getItemCount() - 1).doubleValue();
+        assertEquals(typedLength, drawnLength, 1e-9 * typedLength, "SI display draws metres");
+        for (int i = 0; i < pipes.size(); i++) {
+            double drop = egl.getY(2 * i).doubleValue() - egl.getY(2 * i + 1).doubleValue();
+            double loss = pipes.get(i).majorHeadLoss() + pipes.get(i).minorHeadLoss();
+            assertEquals(loss, drop, 1e-9 * Math.max(1, loss), pipes.get(i).id());
+        }
     }
 
     @Test

@@ -11,7 +11,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
-import org.headway.correlation.UncertaintySource;
+import org.headway.rig.UncertaintySource;
 import org.headway.units.Decimals;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;

@@ -6,6 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.headway.caution.InputException;
+import org.headway.fitting.FitForm;
+import org.headway.fitting.FitResult;
+import org.headway.fitting.FittedParameter;
+import org.headway.fitting.LeastSquaresFitter;
+import org.headway.fitting.Observations;
+import org.headway.fitting.VariableRange;
 import org.headway.friction.FlowRegime;
 import org.headway.friction.FrictionResult;
 import org.junit.jupiter.api.Test;
@@ -24,7 +30,7 @@ class FittedCorrelationTest {
         }
         FitResult fit =
                 new LeastSquaresFitter().fit(Observations.of("f", f, List.of("Re"), re), new FitForm.Power(false));
-        return fit.toCorrelation();
+        return FittedCorrelation.of(fit);
     }
 
     @Test
@@ -61,9 +67,8 @@ class FittedCorrelationTest {
         // A straight line through falling f crosses zero when extrapolated far enough.
         double[] re = {4000, 8000, 16000, 32000};
         double[] f = {0.040, 0.034, 0.028, 0.023};
-        FittedCorrelation line = new LeastSquaresFitter()
-                .fit(Observations.of("f", f, List.of("Re"), re), new FitForm.Linear())
-                .toCorrelation();
+        FittedCorrelation line = FittedCorrelation.of(
+                new LeastSquaresFitter().fit(Observations.of("f", f, List.of("Re"), re), new FitForm.Linear()));
         FittedFrictionCorrelation friction = new FittedFrictionCorrelation("line", line);
         InputException e = assertThrows(InputException.class, () -> friction.evaluate(1e6, 0.0));
         assertTrue(e.getMessage().contains("unusable friction factor"), e.getMessage());
@@ -99,7 +104,7 @@ class FittedCorrelationTest {
                 .fit(
                         Observations.of("K", k, List.of("Re"), re),
                         new FitForm.UserExpression("kinf + k1/Re", java.util.Map.of("kinf", 1.0, "k1", 1.0)));
-        FittedLossCoefficient loss = new FittedLossCoefficient("strainer", fit.toCorrelation());
+        FittedLossCoefficient loss = new FittedLossCoefficient("strainer", FittedCorrelation.of(fit));
         var estimate = loss.evaluate(2e4);
         assertEquals(0.4 + 800 / 2e4, estimate.lossCoefficient(), 1e-10);
         assertTrue(estimate.cautions().isEmpty());
@@ -127,7 +132,7 @@ class FittedCorrelationTest {
                                 "(k*log10((rr/3.7)^1.11 + c/Re))^(-2)", java.util.Map.of("k", -2.0, "c", 5.0)));
         assertEquals(-1.8, fit.parameter("k").value(), 1e-9);
         assertEquals(6.9, fit.parameter("c").value(), 1e-7);
-        FittedFrictionCorrelation friction = new FittedFrictionCorrelation("rig", fit.toCorrelation());
+        FittedFrictionCorrelation friction = new FittedFrictionCorrelation("rig", FittedCorrelation.of(fit));
         FrictionResult r = friction.evaluate(1e5, 1e-4);
         double s = -1.8 * Math.log10(Math.pow(1e-4 / 3.7, 1.11) + 6.9 / 1e5);
         assertEquals(1 / (s * s), r.frictionFactor(), 1e-10);

@@ -29,6 +29,7 @@ import org.headway.system.PumpElement;
 import org.headway.system.RatedComponent;
 import org.headway.system.RunResult;
 import org.headway.system.Segment;
+import org.headway.system.SiteAtmosphere;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -100,7 +101,7 @@ class NetworkSolverTest {
                         EndCondition.OPEN_AT_PIPE_END,
                         Optional.empty(),
                         0,
-                        PipeRun.STANDARD_ATMOSPHERE,
+                        SiteAtmosphere.SEA_LEVEL_PRESSURE,
                         q,
                         0,
                         DesignLimits.USUAL)
@@ -329,7 +330,7 @@ class NetworkSolverTest {
                 new EndCondition(0, 0),
                 Optional.of(curve),
                 1,
-                PipeRun.STANDARD_ATMOSPHERE,
+                SiteAtmosphere.SEA_LEVEL_PRESSURE,
                 0.01,
                 0,
                 DesignLimits.USUAL);

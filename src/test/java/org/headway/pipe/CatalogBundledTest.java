@@ -89,7 +89,7 @@ class CatalogBundledTest {
     })
     void darbyNinetyDegreeElbowsCarryTheCoefficientsOfTheirRadius(
             String id, String radius, double k1, double ki, double kd) {
-        ThreeK elbow = (ThreeK) catalog.fitting(id);
+        Darby2001ThreeK elbow = (Darby2001ThreeK) catalog.fitting(id);
         assertTrue(elbow.description().contains("(" + radius + ")"), elbow.description());
         assertEquals(k1, elbow.laminarCoefficient(), 0.0, id);
         assertEquals(ki, elbow.turbulentCoefficient(), 0.0, id);

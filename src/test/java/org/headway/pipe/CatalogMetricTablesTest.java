@@ -238,9 +238,9 @@ class CatalogMetricTablesTest {
     void basketStrainerKFollowsThePublishedCv() {
         double d = 1.049;
         double k = Math.pow(29.9 * d * d / 22.5, 2);
-        FixedK basket = (FixedK) catalog.fitting("strainer-basket-clean");
+        Weisbach1845FixedK basket = (Weisbach1845FixedK) catalog.fitting("strainer-basket-clean");
         assertEquals(k, basket.coefficient(), 0.05);
-        FixedK y = (FixedK) catalog.fitting("strainer-y-clean");
+        Weisbach1845FixedK y = (Weisbach1845FixedK) catalog.fitting("strainer-y-clean");
         assertTrue(y.coefficient() > 0);
         // data policy: a value nobody checked says so
         assertTrue(y.source().contains("from memory"), y.source());

@@ -69,6 +69,45 @@ class CatalogUserFolderTest {
     }
 
     @Test
+    void fittingsFileMayCarryTheKnownOptionalColumns() throws IOException {
+        // A maker's Kv/Cv and a notes column added to a user's file must not break it; K still comes
+        // from the row's method (invented rows for this test).
+        Files.writeString(
+                dir.resolve("fittings.csv"),
+                String.join(
+                        "\n",
+                        "# source: our valve survey (invented for this test)",
+                        "id,description,method,k,k1,k_inf,k_d,source,kv,notes,cv",
+                        "our-gate,Our gate valve,fixed,0.2,,,,ours,250,DN 80 maker sheet,",
+                        "our-elbow,Our elbow,2-k,,800,0.25,,ours,,,",
+                        ""));
+        Catalog catalog = Catalog.withUserFolder(dir);
+        Fitting gate = catalog.fitting("our-gate");
+        assertEquals(0.2, gate.lossCoefficient(1.0e5, 0.08), 0.0);
+        assertEquals(
+                Catalog.bundled().fitting("gate-valve-open").lossCoefficient(1.0e5, 0.08),
+                catalog.fitting("gate-valve-open").lossCoefficient(1.0e5, 0.08),
+                0.0);
+        assertTrue(catalog.fitting("our-elbow") instanceof Hooper1981TwoK);
+    }
+
+    @Test
+    void badOptionalFlowCoefficientIsRefusedWithItsPlace() throws IOException {
+        Files.writeString(
+                dir.resolve("fittings.csv"),
+                "# source: ours\nid,description,method,k,k1,k_inf,k_d,source,kv\nmy-valve,Valve,fixed,0.2,,,,ours,-4\n");
+        InputException e = assertThrows(InputException.class, () -> Catalog.withUserFolder(dir));
+        assertEquals(
+                dir.resolve("fittings.csv") + " line 3, column kv: must be greater than zero, got -4", e.getMessage());
+        Files.writeString(
+                dir.resolve("fittings.csv"),
+                "# source: ours\nid,description,method,k,k1,k_inf,k_d,source,kvs\nmy-valve,Valve,fixed,0.2,,,,ours,4\n");
+        InputException unknown = assertThrows(InputException.class, () -> Catalog.withUserFolder(dir));
+        assertTrue(unknown.getMessage().contains("unknown column 'kvs'"), unknown.getMessage());
+        assertTrue(unknown.getMessage().contains("optionally kv,cv,notes"), unknown.getMessage());
+    }
+
+    @Test
     void emptyOrMissingFolderIsRejected() {
         InputException empty = assertThrows(InputException.class, () -> Catalog.withUserFolder(dir));
         assertTrue(empty.getMessage().contains("no catalog files found"), empty.getMessage());

@@ -12,8 +12,8 @@ import org.headway.Fuzz;
 import org.headway.caution.InputException;
 import org.headway.correlation.FitStatistics;
 import org.headway.correlation.FittedCorrelation;
-import org.headway.correlation.FittedParameter;
-import org.headway.correlation.VariableRange;
+import org.headway.fitting.FittedParameter;
+import org.headway.fitting.VariableRange;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

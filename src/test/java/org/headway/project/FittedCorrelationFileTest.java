@@ -8,10 +8,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.headway.caution.InputException;
-import org.headway.correlation.FitForm;
 import org.headway.correlation.FittedCorrelation;
-import org.headway.correlation.LeastSquaresFitter;
-import org.headway.correlation.Observations;
+import org.headway.fitting.FitForm;
+import org.headway.fitting.LeastSquaresFitter;
+import org.headway.fitting.Observations;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -24,9 +24,8 @@ class FittedCorrelationFileTest {
     private static FittedCorrelation sample() {
         double[] x = {1, 2, 3, 4, 5, 6};
         double[] y = {2.1, 3.9, 6.2, 7.8, 10.1, 12.2};
-        return new LeastSquaresFitter()
-                .fit(Observations.of("dp", y, List.of("Q"), x), new FitForm.Polynomial(2))
-                .toCorrelation();
+        return FittedCorrelation.of(
+                new LeastSquaresFitter().fit(Observations.of("dp", y, List.of("Q"), x), new FitForm.Polynomial(2)));
     }
 
     @Test

@@ -12,14 +12,15 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.headway.caution.InputException;
-import org.headway.correlation.EffectiveRoughness;
-import org.headway.correlation.InstrumentUncertainty;
-import org.headway.correlation.RigPoint;
-import org.headway.correlation.RigPointResult;
-import org.headway.correlation.RigReport;
-import org.headway.correlation.UncertaintySource;
 import org.headway.fluid.FluidState;
 import org.headway.fluid.Fluids;
+import org.headway.rig.EffectiveRoughness;
+import org.headway.rig.InstrumentUncertainty;
+import org.headway.rig.RigFluid;
+import org.headway.rig.RigPoint;
+import org.headway.rig.RigPointResult;
+import org.headway.rig.RigReport;
+import org.headway.rig.UncertaintySource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -184,7 +185,7 @@ class RigFileTest {
             @Override
             public void close() {}
         };
-        RigFile.FluidSpec fluid = new RigFile.FluidSpec(null, null, RigFile.DEFAULT_PRESSURE, 998.0, 1e-3);
+        RigFluid fluid = new RigFluid(null, null, RigFile.DEFAULT_PRESSURE, 998.0, 1e-3);
         RigFile.Columns columns = new RigFile.Columns("flow", "dp", "T");
         InputException e = assertThrows(InputException.class, () -> {
             try (RigDataReader reader = new RigDataReader(huge, "huge.csv", columns, fluid)) {

@@ -13,10 +13,10 @@ import org.headway.caution.InputException;
 import org.headway.fluid.FluidState;
 import org.headway.friction.FlowRegimes;
 import org.headway.friction.FrictionMethods;
-import org.headway.pipe.FixedK;
+import org.headway.pipe.Darby2001ThreeK;
 import org.headway.pipe.HazenWilliamsCoefficient;
-import org.headway.pipe.ThreeK;
-import org.headway.pipe.TwoK;
+import org.headway.pipe.Hooper1981TwoK;
+import org.headway.pipe.Weisbach1845FixedK;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -139,13 +139,16 @@ class ElementFuzzTest {
         for (int f = 0; f < fittings; f++) {
             int count = 1 + r.nextInt(6);
             switch (r.nextInt(3)) {
-                case 0 -> b.fitting(new FittingUse(new FixedK("k" + f, "fixed", uniform(r, 0, 5), "random"), count));
+                case 0 ->
+                    b.fitting(new FittingUse(
+                            new Weisbach1845FixedK("k" + f, "fixed", uniform(r, 0, 5), "random"), count));
                 case 1 ->
                     b.fitting(new FittingUse(
-                            new TwoK("t" + f, "2-K", uniform(r, 0, 2000), uniform(r, 0, 1), "random"), count));
+                            new Hooper1981TwoK("t" + f, "2-K", uniform(r, 0, 2000), uniform(r, 0, 1), "random"),
+                            count));
                 default ->
                     b.fitting(new FittingUse(
-                            new ThreeK(
+                            new Darby2001ThreeK(
                                     "h" + f, "3-K", uniform(r, 0, 2000), uniform(r, 0, 1), uniform(r, 0, 5), "random"),
                             count));
             }
@@ -422,7 +425,7 @@ class ElementFuzzTest {
                     int bad = -r.nextInt(1000);
                     expectRefusal(
                             () -> base.get()
-                                    .fitting(new FittingUse(new FixedK("e", "e", 0.3, "x"), bad))
+                                    .fitting(new FittingUse(new Weisbach1845FixedK("e", "e", 0.3, "x"), bad))
                                     .build(),
                             "count",
                             label + " count " + bad);
@@ -430,12 +433,22 @@ class ElementFuzzTest {
                 case 7 -> {
                     double bad = notNonNegative(r);
                     switch (r.nextInt(4)) {
-                        case 0 -> expectRefusal(() -> new FixedK("e", "e", bad, "x"), "k", label + " fixed K " + bad);
-                        case 1 -> expectRefusal(() -> new TwoK("e", "e", bad, 0.2, "x"), "k1", label + " K1 " + bad);
+                        case 0 ->
+                            expectRefusal(
+                                    () -> new Weisbach1845FixedK("e", "e", bad, "x"), "k", label + " fixed K " + bad);
+                        case 1 ->
+                            expectRefusal(
+                                    () -> new Hooper1981TwoK("e", "e", bad, 0.2, "x"), "k1", label + " K1 " + bad);
                         case 2 ->
-                            expectRefusal(() -> new ThreeK("e", "e", 500, bad, 4, "x"), "k_inf", label + " Ki " + bad);
+                            expectRefusal(
+                                    () -> new Darby2001ThreeK("e", "e", 500, bad, 4, "x"),
+                                    "k_inf",
+                                    label + " Ki " + bad);
                         default ->
-                            expectRefusal(() -> new ThreeK("e", "e", 500, 0.1, bad, "x"), "k_d", label + " Kd " + bad);
+                            expectRefusal(
+                                    () -> new Darby2001ThreeK("e", "e", 500, 0.1, bad, "x"),
+                                    "k_d",
+                                    label + " Kd " + bad);
                     }
                 }
                 case 8 -> {

@@ -10,10 +10,10 @@ import java.util.OptionalDouble;
 import org.headway.caution.InputException;
 import org.headway.fluid.FluidState;
 import org.headway.friction.FrictionMethods;
-import org.headway.pipe.FixedK;
+import org.headway.pipe.Darby2001ThreeK;
 import org.headway.pipe.HazenWilliamsCoefficient;
-import org.headway.pipe.ThreeK;
-import org.headway.pipe.TwoK;
+import org.headway.pipe.Hooper1981TwoK;
+import org.headway.pipe.Weisbach1845FixedK;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -409,9 +409,9 @@ class ElementLawTest {
         double diameter = 0.1023; // about a 4-in bore
         double length = 60;
         double extraK = 0.5;
-        TwoK elbow = new TwoK("elbow", "90° elbow", 800, 0.25, "invented");
-        ThreeK tee = new ThreeK("tee", "tee through branch", 500, 0.07, 4.0, "invented");
-        FixedK entrance = new FixedK("entrance", "square entrance", 0.5, "invented");
+        Hooper1981TwoK elbow = new Hooper1981TwoK("elbow", "90° elbow", 800, 0.25, "invented");
+        Darby2001ThreeK tee = new Darby2001ThreeK("tee", "tee through branch", 500, 0.07, 4.0, "invented");
+        Weisbach1845FixedK entrance = new Weisbach1845FixedK("entrance", "square entrance", 0.5, "invented");
         Segment pipe = Segment.builder("branch")
                 .length(length)
                 .bore(diameter, 4.6e-5)

@@ -11,10 +11,10 @@ import org.headway.caution.InputException;
 import org.headway.fluid.FluidState;
 import org.headway.friction.FrictionCorrelation;
 import org.headway.friction.FrictionMethods;
-import org.headway.pipe.FixedK;
+import org.headway.pipe.Darby2001ThreeK;
 import org.headway.pipe.HazenWilliamsCoefficient;
-import org.headway.pipe.ThreeK;
-import org.headway.pipe.TwoK;
+import org.headway.pipe.Hooper1981TwoK;
+import org.headway.pipe.Weisbach1845FixedK;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -60,9 +60,9 @@ class ElementSlopeTest {
         return Segment.builder("fitted")
                 .length(length)
                 .bore(diameter, 4.6e-5)
-                .fitting(new FittingUse(new TwoK("elbow", "90° elbow", 800, 0.25, "invented"), 4))
-                .fitting(new FittingUse(new ThreeK("tee", "tee", 500, 0.07, 4.0, "invented"), 2))
-                .fitting(new FittingUse(new FixedK("exit", "exit", 1.0, "invented"), 1))
+                .fitting(new FittingUse(new Hooper1981TwoK("elbow", "90° elbow", 800, 0.25, "invented"), 4))
+                .fitting(new FittingUse(new Darby2001ThreeK("tee", "tee", 500, 0.07, 4.0, "invented"), 2))
+                .fitting(new FittingUse(new Weisbach1845FixedK("exit", "exit", 1.0, "invented"), 1))
                 .extraLossCoefficient(0.8)
                 .build();
     }
@@ -72,7 +72,7 @@ class ElementSlopeTest {
                 .length(900)
                 .bore(diameter, 1e-4)
                 .hazenWilliams(new HazenWilliamsCoefficient(120, "invented"))
-                .fitting(new FittingUse(new TwoK("elbow", "90° elbow", 800, 0.25, "invented"), 2))
+                .fitting(new FittingUse(new Hooper1981TwoK("elbow", "90° elbow", 800, 0.25, "invented"), 2))
                 .build();
     }
 

@@ -146,7 +146,7 @@ class HeadLossCalculatorTest {
                 new EndCondition(1, 0),
                 Optional.of(pump),
                 1,
-                PipeRun.STANDARD_ATMOSPHERE,
+                SiteAtmosphere.SEA_LEVEL_PRESSURE,
                 0.01,
                 0.05,
                 DesignLimits.USUAL);
@@ -160,7 +160,7 @@ class HeadLossCalculatorTest {
         double expected = 2
                 - r.segments().get(0).headLoss()
                 - (-1)
-                + (PipeRun.STANDARD_ATMOSPHERE - 2339) / (WATER.density() * g);
+                + (SiteAtmosphere.SEA_LEVEL_PRESSURE - 2339) / (WATER.density() * g);
         assertEquals(expected, r.npshAvailable().getAsDouble(), 1e-9);
         assertTrue(r.cautions().contains(Caution.GENERAL_REVIEW));
     }
@@ -185,7 +185,7 @@ class HeadLossCalculatorTest {
                 new EndCondition(0, 0),
                 Optional.of(pump),
                 1,
-                PipeRun.STANDARD_ATMOSPHERE,
+                SiteAtmosphere.SEA_LEVEL_PRESSURE,
                 0.006,
                 0,
                 DesignLimits.USUAL);

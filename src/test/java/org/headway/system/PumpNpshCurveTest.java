@@ -87,7 +87,7 @@ class PumpNpshCurveTest {
                 new EndCondition(0, 0),
                 Optional.of(pump),
                 1,
-                PipeRun.STANDARD_ATMOSPHERE,
+                SiteAtmosphere.SEA_LEVEL_PRESSURE,
                 0.01,
                 0,
                 new DesignLimits(0.3, 3.0, 100, Double.POSITIVE_INFINITY, 0.5));

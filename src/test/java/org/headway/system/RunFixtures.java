@@ -42,7 +42,7 @@ final class RunFixtures {
                 EndCondition.OPEN_AT_PIPE_END,
                 Optional.empty(),
                 0,
-                PipeRun.STANDARD_ATMOSPHERE,
+                SiteAtmosphere.SEA_LEVEL_PRESSURE,
                 0.01,
                 0.0,
                 DesignLimits.USUAL);

@@ -41,7 +41,7 @@ class SolveModesTest {
                 EndCondition.OPEN_AT_PIPE_END,
                 Optional.empty(),
                 0,
-                PipeRun.STANDARD_ATMOSPHERE,
+                SiteAtmosphere.SEA_LEVEL_PRESSURE,
                 0.01,
                 0.05,
                 DesignLimits.USUAL);
@@ -167,7 +167,7 @@ class SolveModesTest {
                 new EndCondition(20, 0),
                 Optional.of(pump),
                 0,
-                PipeRun.STANDARD_ATMOSPHERE,
+                SiteAtmosphere.SEA_LEVEL_PRESSURE,
                 0.01,
                 0,
                 DesignLimits.USUAL);
@@ -193,7 +193,7 @@ class SolveModesTest {
                 new EndCondition(30, 0),
                 Optional.of(weak),
                 0,
-                PipeRun.STANDARD_ATMOSPHERE,
+                SiteAtmosphere.SEA_LEVEL_PRESSURE,
                 0.01,
                 0,
                 DesignLimits.USUAL);
