@@ -1,4 +1,4 @@
-package org.headway.correlation;
+package org.headway.fitting;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -7,10 +7,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
-import org.headway.fitting.FitForm;
-import org.headway.fitting.FitResult;
-import org.headway.fitting.LeastSquaresFitter;
-import org.headway.fitting.Observations;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Measurement;
