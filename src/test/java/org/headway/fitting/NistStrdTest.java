@@ -18,7 +18,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 
 /**
  * Accuracy of the fitter against the NIST Statistical Reference Datasets (certified values from the
- * .dat files in src/test/resources/org/headway/correlation/nist-strd, see SOURCE.md there).
+ * .dat files in src/test/resources/org/headway/fitting/nist-strd, see SOURCE.md there).
  *
  * <p>Score: LRE = −log10(|estimate − certified| / |certified|), capped at the certified digits
  * (11 nonlinear, 15 linear). Writes the table to target/nist-lre.txt.
