@@ -97,6 +97,18 @@ final class NetworkWorkspaceView extends BorderPane {
     }
 
     private final VBox form = new VBox(6);
+    private final javafx.scene.control.TabPane sideTabs = new javafx.scene.control.TabPane();
+    private final DesignPane design;
+
+    DesignPane design() {
+        return design;
+    }
+
+    /** Shows the design studies' tab (or the selected element's). */
+    void showDesign(boolean on) {
+        sideTabs.getSelectionModel().select(on ? 1 : 0);
+    }
+
     private final SchematicView schematic;
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "headway-network-solve");
@@ -142,9 +154,23 @@ final class NetworkWorkspaceView extends BorderPane {
         form.setId("element-form");
         ScrollPane formScroll = new ScrollPane(form);
         formScroll.setFitToWidth(true);
-        formScroll.setMinWidth(300);
-        SplitPane lower = new SplitPane(formScroll, schematic);
+        design = new DesignPane(editor, dialogs, startFolder);
+        ScrollPane designScroll = new ScrollPane(design);
+        designScroll.setFitToWidth(true);
+        javafx.scene.control.Tab selectedTab = new javafx.scene.control.Tab("Selected element", formScroll);
+        selectedTab.setId("tab-selected");
+        javafx.scene.control.Tab designTab = new javafx.scene.control.Tab("Design studies", designScroll);
+        designTab.setId("tab-design");
+        sideTabs.getTabs().addAll(selectedTab, designTab);
+        sideTabs.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
+        sideTabs.setId("workspace-side-tabs");
+        sideTabs.setMinWidth(300);
+        SplitPane lower = new SplitPane(sideTabs, schematic);
         lower.setDividerPositions(0.34);
+        // The studies' tables want more room than one element's fields.
+        sideTabs.getSelectionModel()
+                .selectedItemProperty()
+                .addListener((o, a, b) -> lower.setDividerPositions(b == designTab ? 0.58 : 0.34));
         SplitPane body = new SplitPane(tables, lower);
         body.setOrientation(Orientation.VERTICAL);
         body.setDividerPositions(0.5);
