@@ -54,13 +54,22 @@ final class DesignPane extends VBox {
     private final Supplier<Path> startFolder;
     private final ProgressBar progress = new ProgressBar();
     private final Button cancel = new Button("Cancel");
-    private final Label status = new Label("Choose a study and run it on the line list as it stands.");
+    private final Label status = new Label("Open a study below and run it.");
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "headway-network-design");
         t.setDaemon(true);
         return t;
     });
     private Task<?> running;
+    private final javafx.scene.control.Accordion studies = new javafx.scene.control.Accordion();
+
+    /** Opens one study's section (by its id: design-cases, design-sizing, design-balancing, design-fire). */
+    void expand(String id) {
+        studies.getPanes().stream()
+                .filter(p -> id.equals(p.getId()))
+                .findFirst()
+                .ifPresent(studies::setExpandedPane);
+    }
 
     /** Runs before each study's work on the worker thread (tests put a wait in to see progress and cancel). */
     Consumer<NetworkSolution.Progress> beforeWork = p -> {};
@@ -112,23 +121,25 @@ final class DesignPane extends VBox {
         status.setId("design-status");
         status.setWrapText(true);
         status.getStyleClass().add("status");
-        HBox runLine = new HBox(8, progress, cancel);
+        progress.managedProperty().bind(progress.visibleProperty());
+        cancel.managedProperty().bind(cancel.visibleProperty());
+        HBox.setHgrow(status, Priority.ALWAYS);
+        HBox runLine = new HBox(8, progress, cancel, status);
         runLine.setAlignment(Pos.CENTER_LEFT);
 
-        Label intro = new Label("Design studies on the line list as it stands. Results are estimates for review"
-                + " against local codes by a qualified engineer.");
+        Label intro = new Label("On the line list as it stands; estimates for review against local codes by a"
+                + " qualified engineer.");
         intro.setWrapText(true);
         intro.getStyleClass().add("hint");
 
-        getChildren()
+        studies.getPanes()
                 .addAll(
-                        intro,
-                        status,
-                        runLine,
                         section("Demand cases and pressure limits", "design-cases", casesSection()),
                         section("Pipe sizing", "design-sizing", sizingSection()),
                         section("Valve balancing", "design-balancing", balancingSection()),
                         section("Fire flow", "design-fire", fireSection()));
+        studies.setExpandedPane(studies.getPanes().get(0));
+        getChildren().addAll(intro, runLine, studies);
         editor.unitSystemProperty().addListener((o, a, b) -> redraw());
         editor.draftProperty().addListener((o, a, b) -> draftChanged());
         draftChanged();
@@ -150,7 +161,6 @@ final class DesignPane extends VBox {
     private static TitledPane section(String title, String id, VBox content) {
         TitledPane p = new TitledPane(title, content);
         p.setId(id);
-        p.setExpanded(true);
         p.setAnimated(false);
         return p;
     }
@@ -456,6 +466,12 @@ final class DesignPane extends VBox {
             col.setSortable(false);
             col.setCellValueFactory(d -> new ReadOnlyStringWrapper(
                     c < d.getValue().size() ? d.getValue().get(c) : ""));
+            // The constrained policy shares the width in proportion to these: widest text first.
+            int chars = headings.get(i).length();
+            for (List<String> r : rows) {
+                chars = Math.max(chars, c < r.size() ? r.get(c).length() : 0);
+            }
+            col.setPrefWidth(16 + 7.2 * chars);
             t.getColumns().add(col);
         }
         t.getItems().setAll(rows);
@@ -499,7 +515,7 @@ final class DesignPane extends VBox {
             pc.ranges().forEach(r -> ranges.put(r.node(), r));
             pc.violations()
                     .forEach(v -> outside.computeIfAbsent(v.node(), k -> new ArrayList<>())
-                            .add(v.caseName() + " " + (v.bound().equals("minimum") ? "low" : "high")));
+                            .add((v.bound().equals("minimum") ? "below in " : "above in ") + v.caseName()));
         });
         List<List<String>> rows = new ArrayList<>();
         java.util.Set<String> fixed = new java.util.HashSet<>();
@@ -519,7 +535,7 @@ final class DesignPane extends VBox {
                 PressureCheck.NodeRange range = ranges.get(n.id());
                 row.add(range == null ? "—" : pressure(range.minimumPressure()) + " (" + range.minimumCase() + ")");
                 List<String> v = outside.get(n.id());
-                row.add(v == null ? "within" : "OUTSIDE: " + String.join(", ", v));
+                row.add(v == null ? "within" : String.join(", ", v));
             }
             rows.add(row);
         }
@@ -579,11 +595,11 @@ final class DesignPane extends VBox {
             rows.add(List.of(
                     l.id(),
                     l.givenSize(),
-                    l.chosenSize() + " (" + of(l.chosenDiameter(), QuantityKind.DIAMETER) + ")",
+                    l.chosenSize(),
+                    of(l.chosenDiameter(), QuantityKind.DIAMETER),
                     flow(l.flow(), qMax),
                     of(l.velocity(), QuantityKind.VELOCITY),
-                    gradientText(l.gradient()),
-                    reason(l)));
+                    gradientText(l.gradient())));
         }
         return rows;
     }
@@ -603,8 +619,18 @@ final class DesignPane extends VBox {
                         + (z.notSized().isEmpty() ? "" : " Kept as given: " + String.join(", ", z.notSized()) + ".")));
         out.add(table(
                 "design-sizing-table",
-                List.of("Pipe", "Given", "Chosen", "Flow", "Velocity", "Gradient", "Why"),
+                List.of("Pipe", "Given", "Chosen", "Bore", "Flow", "Velocity", "Gradient"),
                 sizingRows(s)));
+        Label why = line(
+                "design-sizing-why",
+                "Why: "
+                        + String.join(
+                                "; ",
+                                s.links().stream()
+                                        .map(l -> l.id() + " " + reason(l))
+                                        .toList()) + ".");
+        why.getStyleClass().add("hint");
+        out.add(why);
         out.addAll(cautionLines(s.cautions()));
         sizingOut.getChildren().setAll(out);
     }

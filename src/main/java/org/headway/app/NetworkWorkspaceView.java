@@ -167,13 +167,15 @@ final class NetworkWorkspaceView extends BorderPane {
         sideTabs.setMinWidth(300);
         SplitPane lower = new SplitPane(sideTabs, schematic);
         lower.setDividerPositions(0.34);
-        // The studies' tables want more room than one element's fields.
-        sideTabs.getSelectionModel()
-                .selectedItemProperty()
-                .addListener((o, a, b) -> lower.setDividerPositions(b == designTab ? 0.58 : 0.34));
+
         SplitPane body = new SplitPane(tables, lower);
         body.setOrientation(Orientation.VERTICAL);
         body.setDividerPositions(0.5);
+        // The studies' tables want more room than one element's fields.
+        sideTabs.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            lower.setDividerPositions(b == designTab ? 0.58 : 0.34);
+            body.setDividerPositions(b == designTab ? 0.34 : 0.5);
+        });
 
         problem.setId("network-problem");
         problem.getStyleClass().add("problem");
