@@ -148,6 +148,36 @@ final class RunEditorView extends VBox {
         ends.setExpanded(false);
         ends.setAnimated(false);
 
+        GridPane sheetGrid = form();
+        String[][] titleBlock = {
+            {"job", "Job number"},
+            {"revision", "Revision"},
+            {"preparedBy", "Prepared by"},
+            {"checkedBy", "Checked by"},
+            {"date", "Date"},
+            {"notes", "Notes"}
+        };
+        int tb = 0;
+        for (String[] f : titleBlock) {
+            textField(
+                    sheetGrid,
+                    tb++,
+                    f[1],
+                    "reference." + f[0],
+                    "title-block-" + f[0],
+                    () -> editor.titleBlockField(f[0]),
+                    text -> editor.setTitleBlockField(f[0], text));
+        }
+        Label sheetHint = new Label("Printed in the head-loss sheet's reference block with the title above (the"
+                + " project file's \"reference\" entries); blank fields print a line to sign.");
+        sheetHint.setWrapText(true);
+        sheetHint.getStyleClass().add("hint");
+        sheetGrid.add(sheetHint, 0, tb, 3, 1);
+        javafx.scene.control.TitledPane sheet = new javafx.scene.control.TitledPane("Sheet title block", sheetGrid);
+        sheet.setId("sheet-title-block");
+        sheet.setExpanded(false);
+        sheet.setAnimated(false);
+
         Label segmentsHeading = heading("Segments, in flow order");
         buildTable();
         HBox buttons = new HBox(6);
@@ -172,7 +202,8 @@ final class RunEditorView extends VBox {
         segmentHeading.getStyleClass().add("subheading");
         buildSegmentForm();
 
-        getChildren().addAll(runHeading, run, ends, segmentsHeading, table, buttons, segmentHeading, segmentForm);
+        getChildren()
+                .addAll(runHeading, run, ends, sheet, segmentsHeading, table, buttons, segmentHeading, segmentForm);
 
         editor.projectProperty().addListener((o, a, b) -> refresh());
         editor.unitSystemProperty().addListener((o, a, b) -> refresh());
