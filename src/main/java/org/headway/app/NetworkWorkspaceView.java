@@ -654,7 +654,43 @@ final class NetworkWorkspaceView extends BorderPane {
                     commit.run();
                 }
             });
-            grid.add(t, 1, r++);
+            if (column.equals("material") || column.equals("size")) {
+                Button find = new Button("Find…");
+                find.setId("form-" + column + "-find");
+                find.setMinWidth(Region.USE_PREF_SIZE);
+                find.setOnAction(e -> {
+                    List<CatalogPicker.Entry> entries;
+                    try {
+                        entries = column.equals("material")
+                                ? CatalogPicker.materials(editor.catalog())
+                                : CatalogPicker.sizes(
+                                        editor.catalog(),
+                                        editor.cell(part, row, "material"),
+                                        editor.cell(part, row, "schedule"),
+                                        units());
+                    } catch (InputException x) {
+                        entries = List.of();
+                    }
+                    CatalogPicker.show(
+                            find,
+                            column.equals("material")
+                                    ? "Material"
+                                    : entries.isEmpty()
+                                            ? "Sizes (choose a catalog material with a size table first)"
+                                            : "Nominal size",
+                            entries,
+                            picked -> {
+                                t.setText(picked.id());
+                                editor.setCell(part, row, column, picked.id());
+                            });
+                });
+                HBox.setHgrow(t, Priority.ALWAYS);
+                HBox line = new HBox(4, t, find);
+                line.setAlignment(Pos.CENTER_LEFT);
+                grid.add(line, 1, r++);
+            } else {
+                grid.add(t, 1, r++);
+            }
             Label m = new Label();
             m.setId("form-" + column + "-message");
             m.getStyleClass().add("field-message");
