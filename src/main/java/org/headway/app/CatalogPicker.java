@@ -123,7 +123,7 @@ final class CatalogPicker {
         FilteredList<Entry> shown = new FilteredList<>(FXCollections.observableArrayList(entries));
         ListView<Entry> list = new ListView<>(shown);
         list.setId("picker-list");
-        list.setPrefSize(440, 300);
+        list.setPrefSize(540, 300);
         Label count = new Label();
         count.getStyleClass().add("hint");
         Runnable recount = () -> count.setText(shown.size() + " of " + entries.size());

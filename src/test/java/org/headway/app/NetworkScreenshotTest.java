@@ -178,4 +178,25 @@ class NetworkScreenshotTest {
         awaitStudy(pane);
         snap(robot, "network-design-sizing");
     }
+
+    /** The searchable material list over the network form (the popup drawn on its own). */
+    @Test
+    void theCatalogPickerIsWritten(FxRobot robot) throws Exception {
+        Files.createDirectories(ScreenshotTest.FOLDER);
+        robot.interact(() -> {
+            fx.window.showNetwork(true);
+            fx.window.network().selectionProperty().set(new NetworkEditor.Selection(NetworkEditor.Part.LINK, 0));
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn("#form-material-find");
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.write("steel");
+        WaitForAsyncUtils.waitForFxEvents();
+        Path file = ScreenshotTest.FOLDER.resolve("catalog-picker.png");
+        WritableImage[] image = new WritableImage[1];
+        robot.interact(
+                () -> image[0] = CatalogPicker.lastShown.getScene().getRoot().snapshot(null, null));
+        ImageIO.write(SwingFXUtils.fromFXImage(image[0], null), "png", file.toFile());
+        assertTrue(Files.size(file) > 5_000, file + " holds a drawn list");
+    }
 }
