@@ -173,4 +173,55 @@ class DesignPaneUiTest {
                 pane.statusLabel().getText());
         assertNotNull(robot.lookup("#design-sizing").tryQuery().orElse(null));
     }
+
+    @Test
+    void balancingShowsTheEnginesKvAndAuthority(FxRobot robot) throws Exception {
+        // The invented two-pipe circuit of NetworkDesignCommandTest: supply at 30 m, return at 18 m.
+        StringBuilder nodes = new StringBuilder("id,elevation [m],fixed_head [m],demand [L/s]\nS,0,30,\nR,0,18,\n");
+        for (String id : List.of("s1", "s2", "s3", "m1", "m2", "m3", "r1", "r2", "r3")) {
+            nodes.append(id).append(",0,,\n");
+        }
+        String links = "id,from,to,kind,length [m],diameter [mm],hw_c,rated_pressure_drop [kPa],rated_flow [L/s],kv,"
+                + "design_flow [L/s]\n"
+                + "fh1,S,s1,pipe,20,80,130,,,,\nfh2,s1,s2,pipe,15,65,130,,,,\nfh3,s2,s3,pipe,15,50,130,,,,\n"
+                + "rh1,r1,R,pipe,20,80,130,,,,\nrh2,r2,r1,pipe,15,65,130,,,,\nrh3,r3,r2,pipe,15,50,130,,,,\n"
+                + "c1,s1,m1,component,,,,20,2,,\nc2,s2,m2,component,,,,25,1.5,,\nc3,s3,m3,component,,,,30,1,,\n"
+                + "V1,m1,r1,valve,,,,,,16,2\nV2,m2,r2,valve,,,,,,16,1.5\nV3,m3,r3,valve,,,,,,16,1\n";
+        Project circuit = Project.network(
+                "Circuit (invented)",
+                "water",
+                "15 degC",
+                "hazen-williams",
+                LineList.parse("nodes", nodes.toString(), "links", links, Catalog.bundled(), true));
+        robot.interact(() -> {
+            fx.window.network().load(circuit, null);
+            fx.window.showNetwork(true);
+            fx.window.networkView().showDesign(true);
+        });
+        DesignPane pane = fx.window.networkView().design();
+        robot.interact(() -> pane.expand("design-balancing"));
+        robot.clickOn("#design-run-balancing");
+        awaitDone(pane);
+        var direct = org.headway.network.design.Balancing.standard()
+                .balance(ProjectResolver.resolveNetwork(circuit, Catalog.bundled(), fx.dir));
+        @SuppressWarnings("unchecked")
+        TableView<List<String>> table = robot.lookup("#design-balance-table").queryAs(TableView.class);
+        assertEquals(3, table.getItems().size());
+        for (int i = 0; i < 3; i++) {
+            var v = direct.valves().get(i);
+            assertEquals(v.id(), table.getItems().get(i).get(0));
+            assertEquals(
+                    Quantities.formatNumber(v.flowCoefficient()),
+                    table.getItems().get(i).get(3),
+                    v.id());
+            assertEquals(
+                    Quantities.formatNumber(v.authority()),
+                    table.getItems().get(i).get(4),
+                    v.id());
+        }
+        assertTrue(robot.lookup("#design-balance-summary")
+                .queryAs(Label.class)
+                .getText()
+                .contains("index valve " + direct.indexValve().orElseThrow()));
+    }
 }
