@@ -72,4 +72,12 @@ public interface Dialogs {
      * @return the rig file (JSON naming its data CSV) chosen, or empty when the user cancels
      */
     Optional<Path> chooseRigFile(Path startFolder);
+
+    /**
+     * Shows a page of reference text (the Help menu's pages), read-only and selectable.
+     *
+     * @param heading what the page is
+     * @param text the page
+     */
+    void showText(String heading, String text);
 }

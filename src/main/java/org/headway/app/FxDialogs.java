@@ -130,4 +130,21 @@ final class FxDialogs implements Dialogs {
         }
         return chooser;
     }
+
+    @Override
+    public void showText(String heading, String text) {
+        Alert alert = new Alert(Alert.AlertType.INFORMATION);
+        alert.initOwner(owner);
+        alert.setTitle("Headway — " + heading);
+        alert.setHeaderText(heading);
+        javafx.scene.control.TextArea area = new javafx.scene.control.TextArea(text);
+        area.setEditable(false);
+        area.setWrapText(true);
+        area.setPrefColumnCount(90);
+        area.setPrefRowCount(28);
+        area.setStyle("-fx-font-family: 'DejaVu Sans Mono', monospace;");
+        alert.getDialogPane().setContent(area);
+        alert.setResizable(true);
+        alert.showAndWait();
+    }
 }

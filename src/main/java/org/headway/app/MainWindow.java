@@ -437,9 +437,72 @@ public final class MainWindow {
         editor.unitSystemProperty().addListener((o, a, b) -> itemOf.apply(b).setSelected(true));
         view.getItems().addAll(si, process, us);
 
-        MenuBar bar = new MenuBar(file, edit, workspace, view);
+        MenuItem designStudies = item("Design studies", "Shortcut+D", () -> {
+            networkShown.set(true);
+            networkView.showDesign(true);
+        });
+        designStudies.setId("design-studies");
+        workspace.getItems().add(workspace.getItems().indexOf(solveNetwork) + 1, designStudies);
+
+        Menu help = new Menu("Help");
+        MenuItem keys = item("Keyboard shortcuts", "F1", this::showShortcuts);
+        keys.setId("help-shortcuts");
+        MenuItem methods = new MenuItem("Methods and their sources");
+        methods.setId("help-methods");
+        methods.setOnAction(e -> dialogs.showText("Methods and their sources", HelpContent.methodsText()));
+        Menu pages = new Menu("Reference pages");
+        pages.setId("help-pages");
+        for (String page : HelpContent.PAGES) {
+            MenuItem m = new MenuItem(page.replace(".md", "").replace('-', ' '));
+            m.setMnemonicParsing(false);
+            m.setOnAction(e -> dialogs.showText(
+                    "Reference: " + page,
+                    HelpContent.page(page)
+                            .orElse("This build does not hold the page " + page
+                                    + "; it is in the source tree under src/site/docs/.")));
+            pages.getItems().add(m);
+        }
+        MenuItem about = new MenuItem("About Headway");
+        about.setId("help-about");
+        about.setOnAction(e -> dialogs.showText("About Headway", HelpContent.aboutText(HeadwayApp.version())));
+        help.getItems().addAll(keys, methods, pages, new SeparatorMenuItem(), about);
+
+        MenuBar bar = new MenuBar(file, edit, workspace, view, help);
         bar.setId("menus");
+        menuBar = bar;
         return bar;
+    }
+
+    private MenuBar menuBar;
+
+    /** The window's shortcuts, read from its menus (so the list cannot drift from them), plus the keys the window takes itself. */
+    List<HelpContent.Shortcut> shortcuts() {
+        List<HelpContent.Shortcut> out = new java.util.ArrayList<>();
+        for (Menu m : menuBar.getMenus()) {
+            collect(m, m.getText(), out);
+        }
+        out.add(new HelpContent.Shortcut("Edit › Redo (also)", REDO_ALT.getDisplayText()));
+        return out;
+    }
+
+    private static void collect(Menu menu, String path, List<HelpContent.Shortcut> out) {
+        for (MenuItem i : menu.getItems()) {
+            if (i instanceof Menu sub) {
+                collect(sub, path + " › " + sub.getText(), out);
+            } else if (i.getAccelerator() != null) {
+                String keys = i.getAccelerator().getDisplayText();
+                if (i.getAccelerator() instanceof javafx.scene.input.KeyCodeCombination k
+                        && k.getCode() == javafx.scene.input.KeyCode.ENTER) {
+                    // The platform writes Enter as an arrow glyph; a word reads better in a list.
+                    keys = keys.substring(0, keys.lastIndexOf('+') + 1) + "Enter";
+                }
+                out.add(new HelpContent.Shortcut(path + " › " + i.getText(), keys));
+            }
+        }
+    }
+
+    private void showShortcuts() {
+        dialogs.showText("Keyboard shortcuts", HelpContent.shortcutsText(shortcuts()));
     }
 
     private void undo() {

@@ -510,6 +510,17 @@ public final class NetworkEditor {
         }
     }
 
+    /** Replaces the demand cases (read from a cases CSV), undoably. */
+    public void setCases(List<Project.DemandCaseSpec> cases) {
+        Draft d = draft.get();
+        replace(new Draft(d.base(), d.title(), d.fluid(), d.temperature(), d.friction(), d.nodes(), d.links(), cases));
+    }
+
+    /** The current line list as the reader reads it (for a cases CSV to be checked against). */
+    public Project.NetworkSpec readDraft() {
+        return read(draft.get());
+    }
+
     private void replace(Draft next) {
         Draft current = draft.get();
         if (current.equals(next)) {

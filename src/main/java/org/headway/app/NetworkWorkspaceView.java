@@ -97,6 +97,18 @@ final class NetworkWorkspaceView extends BorderPane {
     }
 
     private final VBox form = new VBox(6);
+    private final javafx.scene.control.TabPane sideTabs = new javafx.scene.control.TabPane();
+    private final DesignPane design;
+
+    DesignPane design() {
+        return design;
+    }
+
+    /** Shows the design studies' tab (or the selected element's). */
+    void showDesign(boolean on) {
+        sideTabs.getSelectionModel().select(on ? 1 : 0);
+    }
+
     private final SchematicView schematic;
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "headway-network-solve");
@@ -142,12 +154,28 @@ final class NetworkWorkspaceView extends BorderPane {
         form.setId("element-form");
         ScrollPane formScroll = new ScrollPane(form);
         formScroll.setFitToWidth(true);
-        formScroll.setMinWidth(300);
-        SplitPane lower = new SplitPane(formScroll, schematic);
+        design = new DesignPane(editor, dialogs, startFolder);
+        ScrollPane designScroll = new ScrollPane(design);
+        designScroll.setFitToWidth(true);
+        javafx.scene.control.Tab selectedTab = new javafx.scene.control.Tab("Selected element", formScroll);
+        selectedTab.setId("tab-selected");
+        javafx.scene.control.Tab designTab = new javafx.scene.control.Tab("Design studies", designScroll);
+        designTab.setId("tab-design");
+        sideTabs.getTabs().addAll(selectedTab, designTab);
+        sideTabs.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
+        sideTabs.setId("workspace-side-tabs");
+        sideTabs.setMinWidth(300);
+        SplitPane lower = new SplitPane(sideTabs, schematic);
         lower.setDividerPositions(0.34);
+
         SplitPane body = new SplitPane(tables, lower);
         body.setOrientation(Orientation.VERTICAL);
         body.setDividerPositions(0.5);
+        // The studies' tables want more room than one element's fields.
+        sideTabs.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
+            lower.setDividerPositions(b == designTab ? 0.58 : 0.34);
+            body.setDividerPositions(b == designTab ? 0.34 : 0.5);
+        });
 
         problem.setId("network-problem");
         problem.getStyleClass().add("problem");
@@ -626,7 +654,43 @@ final class NetworkWorkspaceView extends BorderPane {
                     commit.run();
                 }
             });
-            grid.add(t, 1, r++);
+            if (column.equals("material") || column.equals("size")) {
+                Button find = new Button("Find…");
+                find.setId("form-" + column + "-find");
+                find.setMinWidth(Region.USE_PREF_SIZE);
+                find.setOnAction(e -> {
+                    List<CatalogPicker.Entry> entries;
+                    try {
+                        entries = column.equals("material")
+                                ? CatalogPicker.materials(editor.catalog())
+                                : CatalogPicker.sizes(
+                                        editor.catalog(),
+                                        editor.cell(part, row, "material"),
+                                        editor.cell(part, row, "schedule"),
+                                        units());
+                    } catch (InputException x) {
+                        entries = List.of();
+                    }
+                    CatalogPicker.show(
+                            find,
+                            column.equals("material")
+                                    ? "Material"
+                                    : entries.isEmpty()
+                                            ? "Sizes (choose a catalog material with a size table first)"
+                                            : "Nominal size",
+                            entries,
+                            picked -> {
+                                t.setText(picked.id());
+                                editor.setCell(part, row, column, picked.id());
+                            });
+                });
+                HBox.setHgrow(t, Priority.ALWAYS);
+                HBox line = new HBox(4, t, find);
+                line.setAlignment(Pos.CENTER_LEFT);
+                grid.add(line, 1, r++);
+            } else {
+                grid.add(t, 1, r++);
+            }
             Label m = new Label();
             m.setId("form-" + column + "-message");
             m.getStyleClass().add("field-message");

@@ -248,6 +248,80 @@ public final class ProjectEditor {
         return accept("title", () -> with(p, text.strip(), p.fluid(), p.flow(), p.friction(), p.segments()));
     }
 
+    /** The sheet's title-block fields, by their project-file keys under {@code reference}. */
+    public static final List<String> TITLE_BLOCK_KEYS =
+            List.of("job", "revision", "preparedBy", "checkedBy", "date", "notes");
+
+    /** A title-block field's text as the project holds it. */
+    public String titleBlockField(String key) {
+        Project.TitleBlock t = project.get().titleBlock();
+        return switch (key) {
+            case "job" -> t.job();
+            case "revision" -> t.revision();
+            case "preparedBy" -> t.preparedBy();
+            case "checkedBy" -> t.checkedBy();
+            case "date" -> t.date();
+            case "notes" -> t.notes();
+            default -> throw new IllegalArgumentException("no title-block field " + key);
+        };
+    }
+
+    /**
+     * Sets one field of the sheet's title block (project-file key under {@code reference}), as one
+     * undo step; the sheet prints it in its reference block.
+     *
+     * @param key one of {@link #TITLE_BLOCK_KEYS}
+     */
+    public boolean setTitleBlockField(String key, String text) {
+        Project p = project.get();
+        Project.TitleBlock t = p.titleBlock();
+        String v = text == null ? "" : text.strip();
+        return accept("reference." + key, () -> {
+            if (v.length() > TITLE_BLOCK_LIMIT) {
+                throw new InputException(
+                        "reference." + key,
+                        "at most " + TITLE_BLOCK_LIMIT + " characters fit the sheet's title block, got " + v.length());
+            }
+            if (v.chars().anyMatch(c -> c < 0x20)) {
+                throw new InputException("reference." + key, "control characters cannot be printed on the sheet");
+            }
+            Project.TitleBlock n = switch (key) {
+                case "job" ->
+                    new Project.TitleBlock(v, t.revision(), t.preparedBy(), t.checkedBy(), t.date(), t.notes());
+                case "revision" ->
+                    new Project.TitleBlock(t.job(), v, t.preparedBy(), t.checkedBy(), t.date(), t.notes());
+                case "preparedBy" ->
+                    new Project.TitleBlock(t.job(), t.revision(), v, t.checkedBy(), t.date(), t.notes());
+                case "checkedBy" ->
+                    new Project.TitleBlock(t.job(), t.revision(), t.preparedBy(), v, t.date(), t.notes());
+                case "date" ->
+                    new Project.TitleBlock(t.job(), t.revision(), t.preparedBy(), t.checkedBy(), v, t.notes());
+                case "notes" ->
+                    new Project.TitleBlock(t.job(), t.revision(), t.preparedBy(), t.checkedBy(), t.date(), v);
+                default -> throw new IllegalArgumentException("no title-block field " + key);
+            };
+            return new Project(
+                    p.title(),
+                    n,
+                    p.fluid(),
+                    p.flow(),
+                    p.flowUncertainty(),
+                    p.friction(),
+                    p.elements(),
+                    p.ends(),
+                    p.limits(),
+                    p.sizing(),
+                    p.curve(),
+                    p.site(),
+                    p.pressureLimits(),
+                    p.inletLevel(),
+                    p.network());
+        });
+    }
+
+    /** Longest title-block entry taken: a sheet line, with room (common practice, no source). */
+    static final int TITLE_BLOCK_LIMIT = 200;
+
     /** @param text a fluid id from {@link Fluids#ids()} (or {@code seawater:35} and the like) */
     public boolean setFluid(String text) {
         Project p = project.get();

@@ -21,6 +21,7 @@ import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.headway.caution.InputException;
 import org.headway.fluid.Fluids;
@@ -148,6 +149,36 @@ final class RunEditorView extends VBox {
         ends.setExpanded(false);
         ends.setAnimated(false);
 
+        GridPane sheetGrid = form();
+        String[][] titleBlock = {
+            {"job", "Job number"},
+            {"revision", "Revision"},
+            {"preparedBy", "Prepared by"},
+            {"checkedBy", "Checked by"},
+            {"date", "Date"},
+            {"notes", "Notes"}
+        };
+        int tb = 0;
+        for (String[] f : titleBlock) {
+            textField(
+                    sheetGrid,
+                    tb++,
+                    f[1],
+                    "reference." + f[0],
+                    "title-block-" + f[0],
+                    () -> editor.titleBlockField(f[0]),
+                    text -> editor.setTitleBlockField(f[0], text));
+        }
+        Label sheetHint = new Label("Printed in the head-loss sheet's reference block with the title above (the"
+                + " project file's \"reference\" entries); blank fields print a line to sign.");
+        sheetHint.setWrapText(true);
+        sheetHint.getStyleClass().add("hint");
+        sheetGrid.add(sheetHint, 0, tb, 3, 1);
+        javafx.scene.control.TitledPane sheet = new javafx.scene.control.TitledPane("Sheet title block", sheetGrid);
+        sheet.setId("sheet-title-block");
+        sheet.setExpanded(false);
+        sheet.setAnimated(false);
+
         Label segmentsHeading = heading("Segments, in flow order");
         buildTable();
         HBox buttons = new HBox(6);
@@ -172,7 +203,8 @@ final class RunEditorView extends VBox {
         segmentHeading.getStyleClass().add("subheading");
         buildSegmentForm();
 
-        getChildren().addAll(runHeading, run, ends, segmentsHeading, table, buttons, segmentHeading, segmentForm);
+        getChildren()
+                .addAll(runHeading, run, ends, sheet, segmentsHeading, table, buttons, segmentHeading, segmentForm);
 
         editor.projectProperty().addListener((o, a, b) -> refresh());
         editor.unitSystemProperty().addListener((o, a, b) -> refresh());
@@ -324,7 +356,7 @@ final class RunEditorView extends VBox {
                 "segment-roughness",
                 () -> spec().roughness(),
                 t -> set(SegmentField.ROUGHNESS, t));
-        textField(
+        TextField fittings = textField(
                 segmentForm,
                 row++,
                 "Fittings",
@@ -332,6 +364,16 @@ final class RunEditorView extends VBox {
                 "segment-fittings",
                 () -> FittingsText.format(spec().fittings()),
                 t -> set(SegmentField.FITTINGS, t));
+        Button addFitting = new Button("Add fitting from the catalog…");
+        addFitting.setId("segment-add-fitting");
+        addFitting.setOnAction(e ->
+                CatalogPicker.show(addFitting, "Add a fitting", CatalogPicker.fittings(editor.catalog()), f -> {
+                    String now = FittingsText.format(spec().fittings());
+                    String next = now.isBlank() ? f.id() : now + ", " + f.id();
+                    fittings.setText(next);
+                    set(SegmentField.FITTINGS, next);
+                }));
+        segmentForm.add(addFitting, 1, row++);
         textField(
                 segmentForm,
                 row++,
@@ -383,7 +425,7 @@ final class RunEditorView extends VBox {
     private List<Choice> materialChoices() {
         List<Choice> list = new ArrayList<>();
         for (Material m : editor.catalog().materials()) {
-            list.add(new Choice(m.id(), m.name()));
+            list.add(new Choice(m.id(), m.name() + "   [" + m.id() + "]"));
         }
         list.add(new Choice("", "— explicit bore and roughness —"));
         return list;
@@ -455,7 +497,19 @@ final class RunEditorView extends VBox {
         box.setMaxWidth(Double.MAX_VALUE);
         Label message = messageLabel(id);
         segmentForm.add(new Label(label), 0, row);
-        segmentForm.add(box, 1, row);
+        segmentForm.add(
+                withFinder(
+                        box,
+                        id,
+                        label,
+                        () -> choices.get().stream()
+                                .filter(c -> !c.id().isEmpty())
+                                .map(c -> new CatalogPicker.Entry(
+                                        c.id(), c.label().replace("   [" + c.id() + "]", "")))
+                                .toList(),
+                        e -> set(field, e.id())),
+                1,
+                row);
         segmentForm.add(message, 2, row);
         refreshers.add(() -> {
             List<Choice> list = choices.get();
@@ -489,7 +543,18 @@ final class RunEditorView extends VBox {
         box.setMaxWidth(Double.MAX_VALUE);
         Label message = messageLabel(id);
         grid.add(new Label(label), 0, row);
-        grid.add(box, 1, row);
+        if (id.equals("fluid")) {
+            grid.add(
+                    withFinder(box, id, "Fluid", CatalogPicker::fluids, e -> {
+                        if (!refreshing) {
+                            setter.test(e.id());
+                        }
+                    }),
+                    1,
+                    row);
+        } else {
+            grid.add(box, 1, row);
+        }
         grid.add(message, 2, row);
         ObservableList<Choice> items = box.getItems();
         refreshers.add(() -> {
@@ -515,6 +580,25 @@ final class RunEditorView extends VBox {
                 setter.test(b.id());
             }
         });
+    }
+
+    /** A control with a "Find…" button beside it that opens the searchable catalog list. */
+    private static javafx.scene.layout.HBox withFinder(
+            javafx.scene.control.Control control,
+            String id,
+            String what,
+            Supplier<List<CatalogPicker.Entry>> entries,
+            java.util.function.Consumer<CatalogPicker.Entry> picked) {
+        Button find = new Button("Find…");
+        find.setId(id + "-find");
+        find.setMinWidth(Region.USE_PREF_SIZE);
+        find.setTooltip(new Tooltip("Search the list by id or name"));
+        find.setOnAction(e -> CatalogPicker.show(find, what, entries.get(), picked));
+        control.setMaxWidth(Double.MAX_VALUE);
+        javafx.scene.layout.HBox.setHgrow(control, Priority.ALWAYS);
+        javafx.scene.layout.HBox line = new javafx.scene.layout.HBox(4, control, find);
+        line.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        return line;
     }
 
     /**

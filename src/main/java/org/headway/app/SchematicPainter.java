@@ -278,7 +278,22 @@ final class SchematicPainter {
                                     Quantities.withoutNoise(r.pressure(), 1000 * 9.81 * headScale),
                                     QuantityKind.PRESSURE,
                                     units);
-                    taken.add(label(g, text, sx[i] + 9, sy[i] + 6 + fm.getAscent(), INK, fm));
+                    // Below right of the node as a rule; where a neighbour's label is already there
+                    // (a tank's head beside its outlet junction), below left, then centred a line lower.
+                    double w = fm.stringWidth(text);
+                    double base = sy[i] + 6 + fm.getAscent();
+                    double[][] spots = {{sx[i] + 9, base}, {sx[i] - 9 - w, base}, {sx[i] - w / 2, base + fm.getHeight()}
+                    };
+                    double[] at = spots[0];
+                    for (double[] spot : spots) {
+                        Rectangle2D box =
+                                new Rectangle2D.Double(spot[0] - 2, spot[1] - fm.getAscent(), w + 4, fm.getHeight());
+                        if (taken.stream().noneMatch(box::intersects)) {
+                            at = spot;
+                            break;
+                        }
+                    }
+                    taken.add(label(g, text, at[0], at[1], INK, fm));
                 }
             }
         }

@@ -67,4 +67,11 @@ final class FakeDialogs implements Dialogs {
     public Optional<Path> chooseRigFile(Path startFolder) {
         return Optional.ofNullable(files.poll());
     }
+
+    final List<String> texts = new ArrayList<>();
+
+    @Override
+    public void showText(String heading, String text) {
+        texts.add(heading + "\n" + text);
+    }
 }

@@ -107,4 +107,96 @@ class NetworkScreenshotTest {
         NetworkWorkspaceUiTest.solve(robot, fx);
         snap(robot, "network-devices");
     }
+
+    private static void awaitStudy(DesignPane pane) throws Exception {
+        WaitForAsyncUtils.waitFor(
+                20,
+                java.util.concurrent.TimeUnit.SECONDS,
+                () -> pane.running() != null && pane.running().isDone());
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    /** The design studies tab on the invented demo network: demand cases, fire flow, then sizing. */
+    @Test
+    void theDesignStudiesAreWritten(FxRobot robot) throws Exception {
+        Files.createDirectories(ScreenshotTest.FOLDER);
+        Path examples = Path.of("fluids-data", "examples", "network");
+        Project.NetworkSpec read = LineList.read(
+                examples.resolve("hillcrest-nodes.csv"),
+                examples.resolve("hillcrest-links.csv"),
+                Catalog.bundled(),
+                false);
+        Project.NetworkSpec spec =
+                read.withDemandCases(LineList.readCases(examples.resolve("hillcrest-cases.csv"), read));
+        Path file = fx.dir.resolve("hillcrest.json");
+        ProjectFile.save(
+                Project.network("Hillcrest (invented demo)", "water", "15 degC", "auto", spec)
+                        .withPressureLimits(new Project.PressureLimitsSpec("250 kPa", "450 kPa")),
+                file);
+        robot.interact(() -> {
+            fx.editor.openFile(file);
+            fx.window.networkView().showDesign(true);
+        });
+        DesignPane pane = fx.window.networkView().design();
+        NetworkWorkspaceUiTest.solve(robot, fx);
+        robot.interact(pane::runCases);
+        awaitStudy(pane);
+        snap(robot, "network-design-cases");
+        robot.interact(() -> {
+            pane.expand("design-fire");
+            ((javafx.scene.control.ComboBox<?>)
+                            robot.lookup("#design-fire-node").query())
+                    .getEditor()
+                    .setText("J6");
+            robot.lookup("#design-residual-pressure")
+                    .queryAs(javafx.scene.control.TextField.class)
+                    .setText("140 kPa");
+            pane.runFire();
+        });
+        awaitStudy(pane);
+        snap(robot, "network-design-fire");
+        // An invented steel branch given by catalog sizes, for sizing.
+        String nodes = "id,elevation [m],demand [L/s],fixed_head [m],x [m],y [m]\n"
+                + "SRC,0,,40,0,0\nA,2,0.5,,100,0\nB,4,1.2,,200,0\nC,3,0.8,,100,-80\nD,6,0.6,,200,-80\n";
+        String links = "id,from,to,kind,length [m],material,size,schedule\n"
+                + "M1,SRC,A,pipe,40,steel-commercial-new,4,40\n"
+                + "M2,A,B,pipe,60,steel-commercial-new,4,40\n"
+                + "M3,A,C,pipe,35,steel-commercial-new,4,40\n"
+                + "M5,B,D,pipe,25,steel-commercial-new,4,40\n"
+                + "M6,C,D,pipe,30,steel-commercial-new,4,40\n";
+        Project.NetworkSpec steel = LineList.parse("nodes", nodes, "links", links, Catalog.bundled(), false);
+        robot.interact(() -> {
+            fx.window
+                    .network()
+                    .load(Project.network("Steel branch (invented)", "water", "15 degC", "auto", steel), null);
+            pane.expand("design-sizing");
+            robot.lookup("#design-head-budget")
+                    .queryAs(javafx.scene.control.TextField.class)
+                    .setText("3 m");
+            pane.runSizing();
+        });
+        awaitStudy(pane);
+        snap(robot, "network-design-sizing");
+    }
+
+    /** The searchable material list over the network form (the popup drawn on its own). */
+    @Test
+    void theCatalogPickerIsWritten(FxRobot robot) throws Exception {
+        Files.createDirectories(ScreenshotTest.FOLDER);
+        robot.interact(() -> {
+            fx.window.showNetwork(true);
+            fx.window.network().selectionProperty().set(new NetworkEditor.Selection(NetworkEditor.Part.LINK, 0));
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn("#form-material-find");
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.write("steel");
+        WaitForAsyncUtils.waitForFxEvents();
+        Path file = ScreenshotTest.FOLDER.resolve("catalog-picker.png");
+        WritableImage[] image = new WritableImage[1];
+        robot.interact(
+                () -> image[0] = CatalogPicker.lastShown.getScene().getRoot().snapshot(null, null));
+        ImageIO.write(SwingFXUtils.fromFXImage(image[0], null), "png", file.toFile());
+        assertTrue(Files.size(file) > 5_000, file + " holds a drawn list");
+    }
 }
