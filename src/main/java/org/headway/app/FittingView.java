@@ -243,11 +243,6 @@ final class FittingView extends BorderPane {
         thread.start();
     }
 
-    /** The import task last started, for tests. */
-    Task<DataTable> importTask() {
-        return importing;
-    }
-
     /** Starts the ticked forms in a background task; a run in progress is left to finish. */
     void runFits() {
         if ((running != null && running.isRunning()) || (importing != null && importing.isRunning())) {
@@ -298,11 +293,6 @@ final class FittingView extends BorderPane {
         progress.progressProperty().unbind();
         progressText.textProperty().unbind();
         setRunning(false);
-    }
-
-    /** The task last started, for tests. */
-    Task<FitComparison> fitTask() {
-        return running;
     }
 
     private static TableColumn<FittingModel.FitRow, String> column(

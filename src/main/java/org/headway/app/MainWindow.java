@@ -625,9 +625,4 @@ public final class MainWindow {
         cancel.setVisible(false);
         status.setText(message);
     }
-
-    /** The export task last started, for tests. */
-    Task<List<Path>> exportTask() {
-        return export;
-    }
 }

@@ -3,7 +3,6 @@ package org.headway.app;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Set;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
@@ -263,13 +262,6 @@ public final class ResultsModel {
         return cautions.stream().filter(c -> !isGeneral(c)).count();
     }
 
-    /** Severities present, for the panel's heading. */
-    public Set<Severity> severities() {
-        Set<Severity> set = java.util.EnumSet.noneOf(Severity.class);
-        cautions.stream().filter(c -> !isGeneral(c)).forEach(c -> set.add(c.severity()));
-        return set;
-    }
-
     public ObservableList<SegmentRow> rows() {
         return rows;
     }
@@ -292,10 +284,6 @@ public final class ResultsModel {
 
     public BooleanProperty computingProperty() {
         return computing;
-    }
-
-    public ReadOnlyObjectProperty<Recalculation.Outcome> outcomeProperty() {
-        return outcome;
     }
 
     public ReadOnlyObjectProperty<JFreeChart> gradeChartProperty() {
