@@ -739,6 +739,15 @@ public final class LeastSquaresFitter {
         }
     }
 
+    /** Relative step below which damped iterations in Gauss–Newton's regime hand over to polishing. */
+    static final double HANDOVER = 1e-5;
+
+    /**
+     * Relative step below which a rejected step is taken as rounding (the cost of so small a step is
+     * decided by the last digits of the sums): the polishing takes over.
+     */
+    static final double ROUNDING_STEP = 1e-10;
+
     /** Iterations the damped normal-equation method may take before MINPACK's takes over. */
     static final int DAMPED_BUDGET = 500;
 
@@ -785,6 +794,7 @@ public final class LeastSquaresFitter {
         double[] scale = new double[p];
         double mu = 1e-3;
         double nu = 2.0;
+        double previousStep = Double.POSITIVE_INFINITY;
         double[] trialValues = new double[n];
         for (int iteration = 1; iteration <= budget; iteration++) {
             for (int k = 0; k < p; k++) {
@@ -850,6 +860,19 @@ public final class LeastSquaresFitter {
                             "Levenberg–Marquardt met its relative tolerance " + tolerance + " (step)",
                             degenerate(a, scale));
                 }
+                boolean contracting = stepNorm <= 1e-2 * previousStep;
+                previousStep = stepNorm;
+                if (rho > 0.75 && rho < 1.25 && mu < 1e-3 && contracting && stepNorm <= HANDOVER * xNorm) {
+                    // The linear model predicts the cost well, the damping has gone and the steps
+                    // shrink a hundredfold at a time: Gauss–Newton's quadratic regime, where the Householder polishing
+                    // that follows converges faster and to
+                    // more digits than further normal-equation steps.
+                    return new Damped(
+                            iteration,
+                            "Levenberg–Marquardt reached the Gauss–Newton regime (step below " + HANDOVER
+                                    + " relative)",
+                            degenerate(a, scale));
+                }
                 if (reduction <= tolerance && rho <= 2.0 && stepNorm <= 1e-8 * xNorm) {
                     return new Damped(
                             iteration,
@@ -857,7 +880,7 @@ public final class LeastSquaresFitter {
                             degenerate(a, scale));
                 }
             } else {
-                if (stepNorm <= tolerance * xNorm) {
+                if (stepNorm <= Math.max(tolerance, ROUNDING_STEP) * xNorm) {
                     // Even a step this small no longer lowers the cost: rounding has the last word.
                     return new Damped(
                             iteration,
