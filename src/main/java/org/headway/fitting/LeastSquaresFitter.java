@@ -678,15 +678,18 @@ public final class LeastSquaresFitter {
             stop = "Levenberg–Marquardt on the normal equations did not settle in " + spent
                     + " iterations; then MINPACK's Levenberg–Marquardt from the start: " + outcome[2];
         }
-        Pair<double[], Integer> polishing = polish(model, model.bestPoint, n, p);
-        double[] point = polishing.getFirst();
-        int polished = polishing.getSecond();
+        Polished polishing = polish(model, model.bestPoint, n, p);
+        double[] point = polishing.point();
+        int polished = polishing.accepted();
         if (polished > 0) {
             stop += "; then " + polished + " Gauss–Newton polishing step(s)";
         }
         double[][][] jac = new double[1][][];
         model.evaluate(point, new double[n], jac, bad);
-        Covariance cov = covariance(new HouseholderQr(jac[0]), plan.parameterNames);
+        // The polishing's last factorisation, where it was made at the final point, is the one needed.
+        Covariance cov = covariance(
+                polishing.factorisedAtPoint() != null ? polishing.factorisedAtPoint() : new HouseholderQr(jac[0]),
+                plan.parameterNames);
         double[] predicted = new double[n];
         expression.evaluate(columns, point, predicted, null);
         List<Caution> extra = new ArrayList<>();
@@ -1010,9 +1013,13 @@ public final class LeastSquaresFitter {
      *
      * @return the polished point and the number of steps kept
      */
-    private static Pair<double[], Integer> polish(TrackedModel model, double[] from, int n, int p) {
+    /** The polished point, the steps kept, and the factorisation of J at the point if one was made. */
+    private record Polished(double[] point, int accepted, HouseholderQr factorisedAtPoint) {}
+
+    private static Polished polish(TrackedModel model, double[] from, int n, int p) {
         int accepted = 0;
         double[] point = from.clone();
+        HouseholderQr atPoint = null;
         double[] values = new double[n];
         double[][][] jac = new double[1][][];
         int[] bad = new int[1];
@@ -1024,6 +1031,7 @@ public final class LeastSquaresFitter {
                 r[i] = model.target[i] - values[i];
             }
             HouseholderQr qr = new HouseholderQr(jac[0]);
+            atPoint = qr;
             if (!(qr.diagonalRatio() > 0.0)) {
                 break;
             }
@@ -1050,6 +1058,7 @@ public final class LeastSquaresFitter {
             }
             accepted++;
             point = trial;
+            atPoint = null;
             values = trialValues;
             jac = trialJac;
             cost = trialCost;
@@ -1058,7 +1067,7 @@ public final class LeastSquaresFitter {
                 break;
             }
         }
-        return new Pair<>(point, accepted);
+        return new Polished(point, accepted, atPoint);
     }
 
     private static String startText(Plan plan) {
