@@ -5,10 +5,8 @@ import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Collections;
-import java.util.Deque;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -155,10 +153,7 @@ public final class NetworkEditor {
     private final BooleanProperty stale = new SimpleBooleanProperty(false);
     private final StringProperty problem = new SimpleStringProperty("");
     private final ObservableMap<String, String> messages = FXCollections.observableHashMap();
-    private final Deque<Draft> undo = new ArrayDeque<>();
-    private final Deque<Draft> redo = new ArrayDeque<>();
-    private final BooleanProperty canUndo = new SimpleBooleanProperty(false);
-    private final BooleanProperty canRedo = new SimpleBooleanProperty(false);
+    private final UndoHistory<Draft> history = new UndoHistory<>(draft, UNDO_LIMIT);
     private final BooleanBinding dirty;
 
     public NetworkEditor(Catalog catalog, ObjectProperty<UnitSystem> units) {
@@ -262,11 +257,11 @@ public final class NetworkEditor {
     }
 
     public ReadOnlyBooleanProperty canUndoProperty() {
-        return canUndo;
+        return history.canUndoProperty();
     }
 
     public ReadOnlyBooleanProperty canRedoProperty() {
-        return canRedo;
+        return history.canRedoProperty();
     }
 
     public BooleanBinding dirtyProperty() {
@@ -522,44 +517,30 @@ public final class NetworkEditor {
     }
 
     private void replace(Draft next) {
-        Draft current = draft.get();
-        if (current.equals(next)) {
-            return;
+        if (history.replace(next)) {
+            afterChange();
         }
-        undo.push(current);
-        if (undo.size() > UNDO_LIMIT) {
-            undo.removeLast();
-        }
-        redo.clear();
-        draft.set(next);
-        afterChange();
     }
 
     public boolean undo() {
-        if (undo.isEmpty()) {
+        if (!history.undo()) {
             return false;
         }
-        redo.push(draft.get());
-        draft.set(undo.pop());
         messages.clear();
         afterChange();
         return true;
     }
 
     public boolean redo() {
-        if (redo.isEmpty()) {
+        if (!history.redo()) {
             return false;
         }
-        undo.push(draft.get());
-        draft.set(redo.pop());
         messages.clear();
         afterChange();
         return true;
     }
 
     private void afterChange() {
-        canUndo.set(!undo.isEmpty());
-        canRedo.set(!redo.isEmpty());
         problem.set(check(draft.get()).map(Problem::text).orElse(""));
         Selection s = selection.get();
         if (s.row() >= draft.get().rows(s.part()).size()) {
@@ -729,29 +710,25 @@ public final class NetworkEditor {
     public void load(Project p, Path path) {
         Project.NetworkSpec spec = p.network().orElseThrow(() -> new InputException("nodes", "not a network project"));
         Draft d = rows(spec, p, p.title(), p.fluid().name(), p.fluid().temperature(), p.friction());
-        undo.clear();
-        redo.clear();
         messages.clear();
         file.set(path);
         saved.set(d);
         selection.set(Selection.NONE);
         solution.set(null);
-        draft.set(d);
+        history.reset(d);
         stale.set(false);
         afterChange();
     }
 
     /** Starts a new network. */
     public void newNetwork() {
-        undo.clear();
-        redo.clear();
         messages.clear();
         file.set(null);
         Draft d = blank();
         saved.set(d);
         selection.set(Selection.NONE);
         solution.set(null);
-        draft.set(d);
+        history.reset(d);
         stale.set(false);
         afterChange();
     }

@@ -2,10 +2,8 @@ package org.headway.app;
 
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
-import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.Deque;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
@@ -13,11 +11,9 @@ import java.util.function.BiConsumer;
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.BooleanBinding;
 import javafx.beans.binding.StringBinding;
-import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.ReadOnlyBooleanProperty;
 import javafx.beans.property.ReadOnlyObjectProperty;
-import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableMap;
@@ -53,10 +49,7 @@ public final class ProjectEditor {
     private final ObjectProperty<Path> file = new SimpleObjectProperty<>();
     private final ObjectProperty<UnitSystem> unitSystem = new SimpleObjectProperty<>(UnitSystem.SI);
     private final ObservableMap<String, String> messages = FXCollections.observableHashMap();
-    private final Deque<Project> undo = new ArrayDeque<>();
-    private final Deque<Project> redo = new ArrayDeque<>();
-    private final BooleanProperty canUndo = new SimpleBooleanProperty(false);
-    private final BooleanProperty canRedo = new SimpleBooleanProperty(false);
+    private final UndoHistory<Project> history = new UndoHistory<>(project, UNDO_LIMIT);
     private final BooleanBinding dirty;
     private final StringBinding windowTitle;
     private BiConsumer<Project, Path> writer = ProjectFile::save;
@@ -137,11 +130,11 @@ public final class ProjectEditor {
     }
 
     public ReadOnlyBooleanProperty canUndoProperty() {
-        return canUndo;
+        return history.canUndoProperty();
     }
 
     public ReadOnlyBooleanProperty canRedoProperty() {
-        return canRedo;
+        return history.canRedoProperty();
     }
 
     public Catalog catalog() {
@@ -1008,44 +1001,23 @@ public final class ProjectEditor {
     }
 
     private void replace(Project next) {
-        Project current = project.get();
-        if (current.equals(next)) {
-            return;
-        }
-        undo.push(current);
-        if (undo.size() > UNDO_LIMIT) {
-            undo.removeLast();
-        }
-        redo.clear();
-        project.set(next);
-        updateUndoState();
+        history.replace(next);
     }
 
     public boolean undo() {
-        if (undo.isEmpty()) {
+        if (!history.undo()) {
             return false;
         }
-        redo.push(project.get());
-        project.set(undo.pop());
         messages.clear();
-        updateUndoState();
         return true;
     }
 
     public boolean redo() {
-        if (redo.isEmpty()) {
+        if (!history.redo()) {
             return false;
         }
-        undo.push(project.get());
-        project.set(redo.pop());
         messages.clear();
-        updateUndoState();
         return true;
-    }
-
-    private void updateUndoState() {
-        canUndo.set(!undo.isEmpty());
-        canRedo.set(!redo.isEmpty());
     }
 
     // ---- project actions ----
@@ -1125,13 +1097,10 @@ public final class ProjectEditor {
     }
 
     private void load(Project p, Path path) {
-        undo.clear();
-        redo.clear();
         messages.clear();
         file.set(path);
         saved.set(p);
-        project.set(p);
-        updateUndoState();
+        history.reset(p);
     }
 
     /**
@@ -1139,15 +1108,9 @@ public final class ProjectEditor {
      * title shows them, Save writes them, Undo goes back to the file's version.
      */
     public void restoreUnsaved(Project p) {
-        Project current = project.get();
-        if (p.equals(current)) {
-            return;
+        if (history.replace(p)) {
+            messages.clear();
         }
-        undo.push(current);
-        redo.clear();
-        messages.clear();
-        project.set(p);
-        updateUndoState();
     }
 
     /**
