@@ -661,22 +661,22 @@ public final class LeastSquaresFitter {
             // A parameter lost its influence on the way (e.g. an exponent run off to where exp(−b x)
             // is 0): a stationary point of no use. MINPACK's method goes from the start again, and
             // the better of the two points found is kept (the model remembers it).
-            Object[] outcome = minpack(model, plan.start, target, tolerance, maxIterations);
-            converged = (Boolean) outcome[0];
-            iterations = damped.iterations() + (Integer) outcome[1];
+            Minpack outcome = minpack(model, plan.start, target, tolerance, maxIterations);
+            converged = outcome.converged();
+            iterations = damped.iterations() + outcome.iterations();
             stop = "Levenberg–Marquardt on the normal equations stopped where a parameter had lost its influence;"
-                    + " then MINPACK's Levenberg–Marquardt from the start: " + outcome[2];
+                    + " then MINPACK's Levenberg–Marquardt from the start: " + outcome.stop();
         } else if (damped != null) {
             converged = true;
             iterations = damped.iterations();
             stop = damped.stop();
         } else {
             int spent = Math.min(maxIterations, DAMPED_BUDGET);
-            Object[] outcome = minpack(model, plan.start, target, tolerance, maxIterations);
-            converged = (Boolean) outcome[0];
-            iterations = spent + (Integer) outcome[1];
+            Minpack outcome = minpack(model, plan.start, target, tolerance, maxIterations);
+            converged = outcome.converged();
+            iterations = spent + outcome.iterations();
             stop = "Levenberg–Marquardt on the normal equations did not settle in " + spent
-                    + " iterations; then MINPACK's Levenberg–Marquardt from the start: " + outcome[2];
+                    + " iterations; then MINPACK's Levenberg–Marquardt from the start: " + outcome.stop();
         }
         Polished polishing = polish(model, model.bestPoint, n, p);
         double[] point = polishing.point();
@@ -713,9 +713,9 @@ public final class LeastSquaresFitter {
      * MINPACK's Levenberg–Marquardt (Moré 1978, as ported in Commons Math) from {@code start}: the
      * fallback where the damped normal-equation iterations do not settle.
      *
-     * @return converged (Boolean), iterations (Integer), how it stopped (String)
+     * @return whether it converged, its iterations and how it stopped
      */
-    private static Object[] minpack(
+    private static Minpack minpack(
             TrackedModel model, double[] start, double[] target, double tolerance, int maxIterations) {
         LeastSquaresProblem problem = new LeastSquaresBuilder()
                 .start(start)
@@ -731,14 +731,15 @@ public final class LeastSquaresFitter {
                 .withOrthoTolerance(tolerance);
         try {
             LeastSquaresOptimizer.Optimum optimum = optimizer.optimize(problem);
-            return new Object[] {true, optimum.getIterations(), "met its relative tolerance " + tolerance};
+            return new Minpack(true, optimum.getIterations(), "met its relative tolerance " + tolerance);
         } catch (TooManyEvaluationsException | TooManyIterationsException e) {
-            return new Object[] {false, maxIterations, "used its whole budget of " + maxIterations + " iterations"};
+            return new Minpack(false, maxIterations, "used its whole budget of " + maxIterations + " iterations");
         } catch (ConvergenceException e) {
             // MINPACK's "tolerance too small": no further reduction possible in double precision.
-            return new Object[] {
-                true, model.evaluations, "stopped: no further reduction of the residual possible in double precision"
-            };
+            return new Minpack(
+                    true,
+                    model.evaluations,
+                    "stopped: no further reduction of the residual possible in double precision");
         }
     }
 
@@ -750,6 +751,9 @@ public final class LeastSquaresFitter {
      * decided by the last digits of the sums): the polishing takes over.
      */
     static final double ROUNDING_STEP = 1e-10;
+
+    /** How MINPACK's method ended. */
+    private record Minpack(boolean converged, int iterations, String stop) {}
 
     /** Iterations the damped normal-equation method may take before MINPACK's takes over. */
     static final int DAMPED_BUDGET = 500;
