@@ -497,16 +497,20 @@ final class NetworkOutput {
 
     static void nodesCsv(NetworkResult r, Appendable out) throws IOException {
         row(out, NODE_HEADER);
-        String[] cells = new String[6];
-        for (NetworkResult.NodeResult n : r.nodes()) {
-            cells[0] = SafeText.cell(n.id());
-            cells[1] = num(n.head());
-            cells[2] = num(n.pressure());
-            cells[3] = num(n.elevation());
-            cells[4] = num(n.demand());
-            cells[5] = n.fixed() ? "yes" : "no";
-            row(out, cells);
-        }
+        List<NetworkResult.NodeResult> nodes = r.nodes();
+        inChunks(nodes.size(), out, (from, to, sb) -> {
+            String[] cells = new String[6];
+            for (int i = from; i < to; i++) {
+                NetworkResult.NodeResult n = nodes.get(i);
+                cells[0] = SafeText.cell(n.id());
+                cells[1] = num(n.head());
+                cells[2] = num(n.pressure());
+                cells[3] = num(n.elevation());
+                cells[4] = num(n.demand());
+                cells[5] = n.fixed() ? "yes" : "no";
+                row(sb, cells);
+            }
+        });
     }
 
     static void linksCsv(NetworkResult r, Appendable out) throws IOException {
@@ -518,31 +522,81 @@ final class NetworkOutput {
 
     static void linksCsv(NetworkResult r, NetworkDesign.Results design, Appendable out) throws IOException {
         BalancingResult balance = design.balance();
-        String[] cells = new String[balance == null ? 9 : 11];
+        int width = balance == null ? 9 : 11;
         if (balance == null) {
             row(out, LINK_HEADER);
         } else {
-            System.arraycopy(LINK_HEADER, 0, cells, 0, 9);
-            System.arraycopy(BALANCING_COLUMNS, 0, cells, 9, 2);
-            row(out, cells);
+            String[] header = new String[width];
+            System.arraycopy(LINK_HEADER, 0, header, 0, 9);
+            System.arraycopy(BALANCING_COLUMNS, 0, header, 9, 2);
+            row(out, header);
         }
-        for (NetworkResult.LinkResult l : r.links()) {
-            cells[0] = SafeText.cell(l.id());
-            cells[1] = l.kind();
-            cells[2] = SafeText.cell(l.from());
-            cells[3] = SafeText.cell(l.to());
-            cells[4] = num(l.flow());
-            cells[5] = num(l.velocity());
-            cells[6] = num(l.headLoss());
-            cells[7] = num(l.frictionFactor());
-            cells[8] = l.status();
-            if (balance != null) {
-                var v = balance.valve(l.id());
-                cells[9] = num(
-                        v.map(BalancingResult.BalancedValve::flowCoefficient).orElse(Double.NaN));
-                cells[10] = num(v.map(BalancingResult.BalancedValve::setting).orElse(Double.NaN));
+        List<NetworkResult.LinkResult> links = r.links();
+        inChunks(links.size(), out, (from, to, sb) -> {
+            String[] cells = new String[width];
+            for (int i = from; i < to; i++) {
+                NetworkResult.LinkResult l = links.get(i);
+                cells[0] = SafeText.cell(l.id());
+                cells[1] = l.kind();
+                cells[2] = SafeText.cell(l.from());
+                cells[3] = SafeText.cell(l.to());
+                cells[4] = num(l.flow());
+                cells[5] = num(l.velocity());
+                cells[6] = num(l.headLoss());
+                cells[7] = num(l.frictionFactor());
+                cells[8] = l.status();
+                if (balance != null) {
+                    var v = balance.valve(l.id());
+                    cells[9] = num(v.map(BalancingResult.BalancedValve::flowCoefficient)
+                            .orElse(Double.NaN));
+                    cells[10] =
+                            num(v.map(BalancingResult.BalancedValve::setting).orElse(Double.NaN));
+                }
+                row(sb, cells);
             }
-            row(out, cells);
+        });
+    }
+
+    /** Formats rows [from, to) of a table into a buffer. */
+    @FunctionalInterface
+    interface RowRange {
+        void format(int from, int to, StringBuilder sb) throws IOException;
+    }
+
+    /** Rows per chunk when a large table is formatted on every core. */
+    static final int CHUNK_ROWS = 4096;
+
+    /**
+     * Formats rows 0 .. count−1 and appends them in order. A large table's rows are formatted in
+     * chunks of {@value #CHUNK_ROWS}, a window of chunks at a time on every core (rows depend only on
+     * their own result), so the text held at once stays bounded; a small one is formatted in order.
+     */
+    static void inChunks(int count, Appendable out, RowRange rows) throws IOException {
+        if (count < 2 * CHUNK_ROWS) {
+            StringBuilder sb = new StringBuilder();
+            rows.format(0, count, sb);
+            out.append(sb);
+            return;
+        }
+        int chunks = (count + CHUNK_ROWS - 1) / CHUNK_ROWS;
+        int window = 4 * Math.max(1, Runtime.getRuntime().availableProcessors());
+        for (int w0 = 0; w0 < chunks; w0 += window) {
+            int w1 = Math.min(chunks, w0 + window);
+            String[] parts = java.util.stream.IntStream.range(w0, w1)
+                    .parallel()
+                    .mapToObj(c -> {
+                        StringBuilder sb = new StringBuilder(CHUNK_ROWS * 96);
+                        try {
+                            rows.format(c * CHUNK_ROWS, Math.min(count, (c + 1) * CHUNK_ROWS), sb);
+                        } catch (IOException e) {
+                            throw new java.io.UncheckedIOException(e);
+                        }
+                        return sb.toString();
+                    })
+                    .toArray(String[]::new);
+            for (String part : parts) {
+                out.append(part);
+            }
         }
     }
 

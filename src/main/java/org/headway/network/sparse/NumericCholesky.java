@@ -45,6 +45,20 @@ public final class NumericCholesky {
     private final int[] cursor;
     /** Update buffer: up to four columns of the largest supernode's rows. */
     private final double[] update;
+    /** The second half's update buffer when one update is split between two cores. */
+    private final double[] updateOther;
+
+    /**
+     * Multiply–adds (about) from which one supernode's update of another is split between two cores:
+     * below it the fork costs more than it saves.
+     */
+    static final long PARALLEL_UPDATE_WORK = 400_000;
+
+    /** The split threshold this factor uses (tests set it to Long.MAX_VALUE for the in-order path). */
+    long parallelUpdateWork = PARALLEL_UPDATE_WORK;
+
+    /** Updates split between two cores in the last factorization. */
+    long splitUpdates;
 
     private boolean valid;
 
@@ -64,6 +78,7 @@ public final class NumericCholesky {
             maxRows = Math.max(maxRows, rs[s + 1] - rs[s]);
         }
         this.update = new double[4 * maxRows];
+        this.updateOther = new double[4 * maxRows];
     }
 
     /**
@@ -113,6 +128,7 @@ public final class NumericCholesky {
         double[] v = values;
         int ns = first.length - 1;
         Arrays.fill(head, -1);
+        splitUpdates = 0;
 
         for (int sj = 0; sj < ns; sj++) {
             int f = first[sj];
@@ -148,18 +164,30 @@ public final class NumericCholesky {
                     p1++;
                 }
                 int len = rowsK - p0;
-                for (int b0 = p0; b0 < p1; b0 += 4) {
-                    int nb = Math.min(4, p1 - b0);
-                    Arrays.fill(update, 0, nb * len, 0.0);
-                    // update[(a − p0) + j·len] = −Σ_c L_K(a, c) L_K(b0 + j, c), rows a ≥ b0.
-                    subtractProducts(v, vk, rowsK, 0, wK, b0, rowsK, b0, nb, update, -p0, len);
-                    for (int j = 0; j < nb; j++) {
-                        int target = vj + (rows[rk + b0 + j] - f) * r;
-                        int u = j * len - p0;
-                        for (int a = b0 + j; a < rowsK; a++) {
-                            v[target + map[rows[rk + a]]] += update[u + a];
-                        }
+                // Work ∝ wK × Σ over the target columns b of (rowsK − b).
+                long work = (long) wK * (p1 - p0) * (2L * rowsK - p0 - p1);
+                if (work >= parallelUpdateWork && p1 - p0 >= 8) {
+                    splitUpdates++;
+                    // Split the target columns in two halves of equal work, in whole blocks of four: each
+                    // half writes its own columns of J, so the two run at once and the sums are the same,
+                    // term by term, as in order.
+                    int mid = p0;
+                    long half = work / 2;
+                    long acc = 0;
+                    while (mid + 4 < p1 && acc < half) {
+                        int nb = Math.min(4, p1 - mid);
+                        acc += (long) wK * nb * 2L * (rowsK - mid);
+                        mid += nb;
                     }
+                    final int sMid = mid;
+                    final int sP1 = p1;
+                    java.util.concurrent.ForkJoinTask<?> other = java.util.concurrent.ForkJoinTask.adapt(() ->
+                                    applyUpdates(v, vk, rowsK, wK, sMid, sP1, p0, len, rk, vj, f, r, rows, updateOther))
+                            .fork();
+                    applyUpdates(v, vk, rowsK, wK, p0, mid, p0, len, rk, vj, f, r, rows, update);
+                    other.join();
+                } else {
+                    applyUpdates(v, vk, rowsK, wK, p0, p1, p0, len, rk, vj, f, r, rows, update);
                 }
                 cursor[sk] = p1;
                 if (p1 < rowsK) {
@@ -205,6 +233,40 @@ public final class NumericCholesky {
         }
         valid = true;
         return this;
+    }
+
+    /**
+     * Applies supernode K's update to J's target columns rows[rk + b] for b in [b0Start, b1), four at a
+     * time, through the buffer buf (4 × len).
+     */
+    private void applyUpdates(
+            double[] v,
+            int vk,
+            int rowsK,
+            int wK,
+            int b0Start,
+            int b1,
+            int p0,
+            int len,
+            int rk,
+            int vj,
+            int f,
+            int r,
+            int[] rows,
+            double[] buf) {
+        for (int b0 = b0Start; b0 < b1; b0 += 4) {
+            int nb = Math.min(4, b1 - b0);
+            Arrays.fill(buf, 0, nb * len, 0.0);
+            // buf[(a − p0) + j·len] = −Σ_c L_K(a, c) L_K(b0 + j, c), rows a ≥ b0.
+            subtractProducts(v, vk, rowsK, 0, wK, b0, rowsK, b0, nb, buf, -p0, len);
+            for (int j = 0; j < nb; j++) {
+                int target = vj + (rows[rk + b0 + j] - f) * r;
+                int u = j * len - p0;
+                for (int a = b0 + j; a < rowsK; a++) {
+                    v[target + map[rows[rk + a]]] += buf[u + a];
+                }
+            }
+        }
     }
 
     /**

@@ -90,6 +90,31 @@ class SparseCholeskySolveTest {
     }
 
     /**
+     * A large grounded grid (150 × 150) has supernodes big enough that an update is split between two
+     * cores: the split factor must equal the in-order one entry for entry (each entry's sum is formed
+     * in the same order), and the solve must have a residual at rounding level.
+     */
+    @Test
+    void splitUpdatesGiveTheInOrderFactorExactly() {
+        Graph g = SparseTestMatrices.grid(150);
+        Problem pr = SparseTestMatrices.spd(g, 0.0, new Random(11));
+        SymbolicCholesky s = SymbolicCholesky.analyse(pr.pattern());
+        NumericCholesky inOrder = new NumericCholesky(s);
+        inOrder.parallelUpdateWork = Long.MAX_VALUE;
+        inOrder.refactor(pr.diag(), pr.off());
+        assertEquals(0, inOrder.splitUpdates);
+        NumericCholesky split = new NumericCholesky(s);
+        split.refactor(pr.diag(), pr.off());
+        assertTrue(split.splitUpdates > 0, "no update was large enough to split");
+        double[] b = SparseTestMatrices.randomVector(pr.n(), new Random(12));
+        double[] x1 = inOrder.solve(b);
+        double[] x2 = split.solve(b);
+        assertArrayEquals(x1, x2, 0.0);
+        assertEquals(inOrder.logDeterminant(), split.logDeterminant(), 0.0);
+        assertTrue(SparseTestMatrices.distance(pr.multiply(x2), b) / SparseTestMatrices.norm(b) < 1e-12);
+    }
+
+    /**
      * Newton-style reuse: one symbolic factor, new values each round into the same numeric factor;
      * every round against Commons Math's dense Cholesky. Also solveInPlace gives solve's answer.
      */
