@@ -262,6 +262,23 @@ public final class NetworkSolver {
             slot = new int[nLinks];
             int pairs = 0;
             for (int k = 0; k < nLinks; k++) {
+                slot[k] = junction[from[k]] >= 0 && junction[to[k]] >= 0 ? pairs++ : -1;
+            }
+            pairCount = pairs;
+            int[] pa = new int[pairs];
+            int[] pb = new int[pairs];
+            for (int k = 0; k < nLinks; k++) {
+                if (slot[k] >= 0) {
+                    pa[slot[k]] = junction[from[k]];
+                    pb[slot[k]] = junction[to[k]];
+                }
+            }
+            // The ordering and symbolic factor depend on the topology alone: for a large network they are
+            // computed on the other core while the element laws' floors and start flows are found here.
+            java.util.concurrent.CompletableFuture<SpdSolver> analysis = nJunctions >= PARALLEL_LINKS
+                    ? java.util.concurrent.CompletableFuture.supplyAsync(() -> solvers.create(nJunctions, pa, pb))
+                    : null;
+            for (int k = 0; k < nLinks; k++) {
                 Element e = element[k];
                 status[k] = e.isClosed()
                         ? CLOSED
@@ -296,23 +313,20 @@ public final class NetworkSolver {
                         : status[k] == ACTIVE ? setting(k) : 0;
                 minSlope[k] = slopeFloor(e);
                 zeroFlowLoss[k] = e.blocksReverseFlow() ? e.headLoss(0, ctx) : 0;
-                if (junction[from[k]] >= 0 && junction[to[k]] >= 0) {
-                    slot[k] = pairs++;
-                } else {
-                    slot[k] = -1;
-                }
-            }
-            pairCount = pairs;
-            int[] pa = new int[pairs];
-            int[] pb = new int[pairs];
-            for (int k = 0; k < nLinks; k++) {
-                if (slot[k] >= 0) {
-                    pa[slot[k]] = junction[from[k]];
-                    pb[slot[k]] = junction[to[k]];
-                }
             }
             requireEveryJunctionReachable();
-            linear = nJunctions == 0 ? null : solvers.create(nJunctions, pa, pb);
+            if (analysis == null) {
+                linear = nJunctions == 0 ? null : solvers.create(nJunctions, pa, pb);
+            } else {
+                try {
+                    linear = analysis.join();
+                } catch (java.util.concurrent.CompletionException ex) {
+                    if (ex.getCause() instanceof RuntimeException re) {
+                        throw re;
+                    }
+                    throw ex;
+                }
+            }
         }
 
         double setting(int k) {
