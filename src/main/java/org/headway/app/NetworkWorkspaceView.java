@@ -109,6 +109,17 @@ final class NetworkWorkspaceView extends BorderPane {
         sideTabs.getSelectionModel().select(on ? 1 : 0);
     }
 
+    private final GradeLinePane grade;
+
+    GradeLinePane grade() {
+        return grade;
+    }
+
+    /** Shows the grade-line tab. */
+    void showGrade() {
+        sideTabs.getSelectionModel().select(2);
+    }
+
     private final SchematicView schematic;
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "headway-network-solve");
@@ -161,7 +172,13 @@ final class NetworkWorkspaceView extends BorderPane {
         selectedTab.setId("tab-selected");
         javafx.scene.control.Tab designTab = new javafx.scene.control.Tab("Design studies", designScroll);
         designTab.setId("tab-design");
-        sideTabs.getTabs().addAll(selectedTab, designTab);
+        grade = new GradeLinePane(editor, dialogs, startFolder);
+        ScrollPane gradeScroll = new ScrollPane(grade);
+        gradeScroll.setFitToWidth(true);
+        gradeScroll.setFitToHeight(true);
+        javafx.scene.control.Tab gradeTab = new javafx.scene.control.Tab("Grade line", gradeScroll);
+        gradeTab.setId("tab-grade");
+        sideTabs.getTabs().addAll(selectedTab, designTab, gradeTab);
         sideTabs.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         sideTabs.setId("workspace-side-tabs");
         sideTabs.setMinWidth(300);
@@ -173,8 +190,9 @@ final class NetworkWorkspaceView extends BorderPane {
         body.setDividerPositions(0.5);
         // The studies' tables want more room than one element's fields.
         sideTabs.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
-            lower.setDividerPositions(b == designTab ? 0.58 : 0.34);
-            body.setDividerPositions(b == designTab ? 0.34 : 0.5);
+            boolean wide = b == designTab || b == gradeTab;
+            lower.setDividerPositions(wide ? 0.58 : 0.34);
+            body.setDividerPositions(wide ? 0.34 : 0.5);
         });
 
         problem.setId("network-problem");
