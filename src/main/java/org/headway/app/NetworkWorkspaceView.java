@@ -178,7 +178,11 @@ final class NetworkWorkspaceView extends BorderPane {
         gradeScroll.setFitToHeight(true);
         javafx.scene.control.Tab gradeTab = new javafx.scene.control.Tab("Grade line", gradeScroll);
         gradeTab.setId("tab-grade");
-        sideTabs.getTabs().addAll(selectedTab, designTab, gradeTab);
+        ScrollPane sheetScroll = new ScrollPane(titleBlockForm());
+        sheetScroll.setFitToWidth(true);
+        javafx.scene.control.Tab sheetTab = new javafx.scene.control.Tab("Sheet title block", sheetScroll);
+        sheetTab.setId("tab-title-block");
+        sideTabs.getTabs().addAll(selectedTab, designTab, gradeTab, sheetTab);
         sideTabs.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         sideTabs.setId("workspace-side-tabs");
         sideTabs.setMinWidth(300);
@@ -544,10 +548,66 @@ final class NetworkWorkspaceView extends BorderPane {
         buildForm();
     }
 
+    private final Label titleBlockMessage = message("network-title-block-message");
+
+    /** The network sheet's title block (the project file's {@code reference} entries). */
+    private GridPane titleBlockForm() {
+        GridPane grid = new GridPane();
+        grid.setId("network-title-block");
+        grid.setHgap(8);
+        grid.setVgap(4);
+        grid.setPadding(new Insets(8, 12, 8, 12));
+        ColumnConstraints labels = new ColumnConstraints();
+        labels.setMinWidth(100);
+        ColumnConstraints fields = new ColumnConstraints();
+        fields.setHgrow(Priority.ALWAYS);
+        grid.getColumnConstraints().addAll(labels, fields);
+        String[][] keys = {
+            {"job", "Job number"},
+            {"revision", "Revision"},
+            {"preparedBy", "Prepared by"},
+            {"checkedBy", "Checked by"},
+            {"date", "Date"},
+            {"notes", "Notes"}
+        };
+        int r = 0;
+        for (String[] k : keys) {
+            TextField t = new TextField(editor.titleBlockField(k[0]));
+            t.setId("network-title-block-" + k[0]);
+            Runnable commit = () -> {
+                if (!t.getText().strip().equals(editor.titleBlockField(k[0]))) {
+                    editor.setTitleBlockField(k[0], t.getText());
+                }
+            };
+            t.setOnAction(e -> commit.run());
+            t.focusedProperty().addListener((o, a, b) -> {
+                if (!b) {
+                    commit.run();
+                }
+            });
+            editor.draftProperty().addListener((o, a, b) -> {
+                if (!t.isFocused()) {
+                    t.setText(editor.titleBlockField(k[0]));
+                }
+            });
+            grid.add(new Label(k[1]), 0, r);
+            grid.add(t, 1, r++);
+        }
+        grid.add(titleBlockMessage, 0, r++, 2, 1);
+        Label hint = new Label("Printed in the network sheet's reference block with the title above (the project"
+                + " file's \"reference\" entries); blank fields print a line to sign. Saved with the project.");
+        hint.setWrapText(true);
+        hint.getStyleClass().add("hint");
+        grid.add(hint, 0, r, 2, 1);
+        return grid;
+    }
+
     private void showMessages() {
         List<String> n = new ArrayList<>();
         List<String> l = new ArrayList<>();
-        editor.messages().forEach((k, v) -> (k.startsWith("nodes[") ? n : l).add(v));
+        List<String> t = new ArrayList<>();
+        editor.messages().forEach((k, v) -> (k.startsWith("nodes[") ? n : k.startsWith("reference.") ? t : l).add(v));
+        titleBlockMessage.setText(String.join("\n", t));
         nodeMessage.setText(String.join("\n", n));
         linkMessage.setText(String.join("\n", l));
         for (javafx.scene.Node field : form.lookupAll(".text-field")) {
