@@ -423,6 +423,49 @@ public final class NetworkEditor {
                 });
     }
 
+    /** A title-block field (project-file key under {@code reference}) of the network project. */
+    public String titleBlockField(String key) {
+        return ProjectEditor.titleBlockField(draft.get().base().titleBlock(), key);
+    }
+
+    /**
+     * Sets one field of the network sheet's title block, as one undo step; refused with the field
+     * named (in {@link #messages()} under {@code reference.KEY}) when too long or unprintable.
+     *
+     * @param key one of {@link ProjectEditor#TITLE_BLOCK_KEYS}
+     * @return whether the text was taken
+     */
+    public boolean setTitleBlockField(String key, String text) {
+        Draft d = draft.get();
+        Project.TitleBlock n;
+        try {
+            n = ProjectEditor.titleBlockWith(d.base().titleBlock(), key, text);
+        } catch (InputException e) {
+            messages.put("reference." + key, inWords(e));
+            return false;
+        }
+        messages.remove("reference." + key);
+        Project b = d.base();
+        Project base = new Project(
+                b.title(),
+                n,
+                b.fluid(),
+                b.flow(),
+                b.flowUncertainty(),
+                b.friction(),
+                b.elements(),
+                b.ends(),
+                b.limits(),
+                b.sizing(),
+                b.curve(),
+                b.site(),
+                b.pressureLimits(),
+                b.inletLevel(),
+                b.network());
+        replace(new Draft(base, d.title(), d.fluid(), d.temperature(), d.friction(), d.nodes(), d.links(), d.cases()));
+        return true;
+    }
+
     /**
      * Adds a row after the selected one (or at the end): a node with a fresh id, or a link like the
      * selected or last link from the last node but one to the last node.

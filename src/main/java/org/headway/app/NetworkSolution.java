@@ -11,6 +11,7 @@ import org.headway.network.NetworkStudy;
 import org.headway.pipe.Catalog;
 import org.headway.project.Project;
 import org.headway.project.ProjectResolver;
+import org.headway.system.PressureLimits;
 
 /**
  * One solve of the network workspace's line list, plain work with no toolkit (run off the FX
@@ -20,8 +21,9 @@ import org.headway.project.ProjectResolver;
  * @param draft the list solved
  * @param solved the network's own demands solved (the project's demand cases are not solved here)
  * @param nanos wall time of the solve (ns)
+ * @param limits the project's gauge-pressure limits (for the grade line's band)
  */
-public record NetworkSolution(NetworkEditor.Draft draft, CaseResult solved, long nanos) {
+public record NetworkSolution(NetworkEditor.Draft draft, CaseResult solved, long nanos, PressureLimits limits) {
 
     /** Reports how far the work is. */
     @FunctionalInterface
@@ -73,6 +75,6 @@ public record NetworkSolution(NetworkEditor.Draft draft, CaseResult solved, long
         NetworkStudy base = new NetworkStudy(study.network(), List.of(), study.pressureLimits(), study.npshMargin());
         CaseResult solved = base.solve(NetworkSolver.standard()).base();
         progress.at(3, 3, "Solved");
-        return new NetworkSolution(draft, solved, System.nanoTime() - t0);
+        return new NetworkSolution(draft, solved, System.nanoTime() - t0, study.pressureLimits());
     }
 }

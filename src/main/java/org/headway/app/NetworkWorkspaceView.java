@@ -109,6 +109,17 @@ final class NetworkWorkspaceView extends BorderPane {
         sideTabs.getSelectionModel().select(on ? 1 : 0);
     }
 
+    private final GradeLinePane grade;
+
+    GradeLinePane grade() {
+        return grade;
+    }
+
+    /** Shows the grade-line tab. */
+    void showGrade() {
+        sideTabs.getSelectionModel().select(2);
+    }
+
     private final SchematicView schematic;
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "headway-network-solve");
@@ -161,7 +172,17 @@ final class NetworkWorkspaceView extends BorderPane {
         selectedTab.setId("tab-selected");
         javafx.scene.control.Tab designTab = new javafx.scene.control.Tab("Design studies", designScroll);
         designTab.setId("tab-design");
-        sideTabs.getTabs().addAll(selectedTab, designTab);
+        grade = new GradeLinePane(editor, dialogs, startFolder);
+        ScrollPane gradeScroll = new ScrollPane(grade);
+        gradeScroll.setFitToWidth(true);
+        gradeScroll.setFitToHeight(true);
+        javafx.scene.control.Tab gradeTab = new javafx.scene.control.Tab("Grade line", gradeScroll);
+        gradeTab.setId("tab-grade");
+        ScrollPane sheetScroll = new ScrollPane(titleBlockForm());
+        sheetScroll.setFitToWidth(true);
+        javafx.scene.control.Tab sheetTab = new javafx.scene.control.Tab("Sheet title block", sheetScroll);
+        sheetTab.setId("tab-title-block");
+        sideTabs.getTabs().addAll(selectedTab, designTab, gradeTab, sheetTab);
         sideTabs.setTabClosingPolicy(javafx.scene.control.TabPane.TabClosingPolicy.UNAVAILABLE);
         sideTabs.setId("workspace-side-tabs");
         sideTabs.setMinWidth(300);
@@ -173,8 +194,9 @@ final class NetworkWorkspaceView extends BorderPane {
         body.setDividerPositions(0.5);
         // The studies' tables want more room than one element's fields.
         sideTabs.getSelectionModel().selectedItemProperty().addListener((o, a, b) -> {
-            lower.setDividerPositions(b == designTab ? 0.58 : 0.34);
-            body.setDividerPositions(b == designTab ? 0.34 : 0.5);
+            boolean wide = b == designTab || b == gradeTab;
+            lower.setDividerPositions(wide ? 0.58 : 0.34);
+            body.setDividerPositions(wide ? 0.34 : 0.5);
         });
 
         problem.setId("network-problem");
@@ -526,10 +548,66 @@ final class NetworkWorkspaceView extends BorderPane {
         buildForm();
     }
 
+    private final Label titleBlockMessage = message("network-title-block-message");
+
+    /** The network sheet's title block (the project file's {@code reference} entries). */
+    private GridPane titleBlockForm() {
+        GridPane grid = new GridPane();
+        grid.setId("network-title-block");
+        grid.setHgap(8);
+        grid.setVgap(4);
+        grid.setPadding(new Insets(8, 12, 8, 12));
+        ColumnConstraints labels = new ColumnConstraints();
+        labels.setMinWidth(100);
+        ColumnConstraints fields = new ColumnConstraints();
+        fields.setHgrow(Priority.ALWAYS);
+        grid.getColumnConstraints().addAll(labels, fields);
+        String[][] keys = {
+            {"job", "Job number"},
+            {"revision", "Revision"},
+            {"preparedBy", "Prepared by"},
+            {"checkedBy", "Checked by"},
+            {"date", "Date"},
+            {"notes", "Notes"}
+        };
+        int r = 0;
+        for (String[] k : keys) {
+            TextField t = new TextField(editor.titleBlockField(k[0]));
+            t.setId("network-title-block-" + k[0]);
+            Runnable commit = () -> {
+                if (!t.getText().strip().equals(editor.titleBlockField(k[0]))) {
+                    editor.setTitleBlockField(k[0], t.getText());
+                }
+            };
+            t.setOnAction(e -> commit.run());
+            t.focusedProperty().addListener((o, a, b) -> {
+                if (!b) {
+                    commit.run();
+                }
+            });
+            editor.draftProperty().addListener((o, a, b) -> {
+                if (!t.isFocused()) {
+                    t.setText(editor.titleBlockField(k[0]));
+                }
+            });
+            grid.add(new Label(k[1]), 0, r);
+            grid.add(t, 1, r++);
+        }
+        grid.add(titleBlockMessage, 0, r++, 2, 1);
+        Label hint = new Label("Printed in the network sheet's reference block with the title above (the project"
+                + " file's \"reference\" entries); blank fields print a line to sign. Saved with the project.");
+        hint.setWrapText(true);
+        hint.getStyleClass().add("hint");
+        grid.add(hint, 0, r, 2, 1);
+        return grid;
+    }
+
     private void showMessages() {
         List<String> n = new ArrayList<>();
         List<String> l = new ArrayList<>();
-        editor.messages().forEach((k, v) -> (k.startsWith("nodes[") ? n : l).add(v));
+        List<String> t = new ArrayList<>();
+        editor.messages().forEach((k, v) -> (k.startsWith("nodes[") ? n : k.startsWith("reference.") ? t : l).add(v));
+        titleBlockMessage.setText(String.join("\n", t));
         nodeMessage.setText(String.join("\n", n));
         linkMessage.setText(String.join("\n", l));
         for (javafx.scene.Node field : form.lookupAll(".text-field")) {

@@ -270,29 +270,7 @@ public final class ProjectEditor {
         Project.TitleBlock t = p.titleBlock();
         String v = text == null ? "" : text.strip();
         return accept("reference." + key, () -> {
-            if (v.length() > TITLE_BLOCK_LIMIT) {
-                throw new InputException(
-                        "reference." + key,
-                        "at most " + TITLE_BLOCK_LIMIT + " characters fit the sheet's title block, got " + v.length());
-            }
-            if (v.chars().anyMatch(c -> c < 0x20)) {
-                throw new InputException("reference." + key, "control characters cannot be printed on the sheet");
-            }
-            Project.TitleBlock n = switch (key) {
-                case "job" ->
-                    new Project.TitleBlock(v, t.revision(), t.preparedBy(), t.checkedBy(), t.date(), t.notes());
-                case "revision" ->
-                    new Project.TitleBlock(t.job(), v, t.preparedBy(), t.checkedBy(), t.date(), t.notes());
-                case "preparedBy" ->
-                    new Project.TitleBlock(t.job(), t.revision(), v, t.checkedBy(), t.date(), t.notes());
-                case "checkedBy" ->
-                    new Project.TitleBlock(t.job(), t.revision(), t.preparedBy(), v, t.date(), t.notes());
-                case "date" ->
-                    new Project.TitleBlock(t.job(), t.revision(), t.preparedBy(), t.checkedBy(), v, t.notes());
-                case "notes" ->
-                    new Project.TitleBlock(t.job(), t.revision(), t.preparedBy(), t.checkedBy(), t.date(), v);
-                default -> throw new IllegalArgumentException("no title-block field " + key);
-            };
+            Project.TitleBlock n = titleBlockWith(t, key, v);
             return new Project(
                     p.title(),
                     n,
@@ -310,6 +288,46 @@ public final class ProjectEditor {
                     p.inletLevel(),
                     p.network());
         });
+    }
+
+    /**
+     * A title block with one field changed, checked as the sheet needs it (shared by the run editor
+     * and the network workspace).
+     *
+     * @throws InputException at {@code reference.KEY}: too long, or control characters
+     */
+    static Project.TitleBlock titleBlockWith(Project.TitleBlock t, String key, String text) {
+        String v = text == null ? "" : text.strip();
+        if (v.length() > TITLE_BLOCK_LIMIT) {
+            throw new InputException(
+                    "reference." + key,
+                    "at most " + TITLE_BLOCK_LIMIT + " characters fit the sheet's title block, got " + v.length());
+        }
+        if (v.chars().anyMatch(c -> c < 0x20)) {
+            throw new InputException("reference." + key, "control characters cannot be printed on the sheet");
+        }
+        return switch (key) {
+            case "job" -> new Project.TitleBlock(v, t.revision(), t.preparedBy(), t.checkedBy(), t.date(), t.notes());
+            case "revision" -> new Project.TitleBlock(t.job(), v, t.preparedBy(), t.checkedBy(), t.date(), t.notes());
+            case "preparedBy" -> new Project.TitleBlock(t.job(), t.revision(), v, t.checkedBy(), t.date(), t.notes());
+            case "checkedBy" -> new Project.TitleBlock(t.job(), t.revision(), t.preparedBy(), v, t.date(), t.notes());
+            case "date" -> new Project.TitleBlock(t.job(), t.revision(), t.preparedBy(), t.checkedBy(), v, t.notes());
+            case "notes" -> new Project.TitleBlock(t.job(), t.revision(), t.preparedBy(), t.checkedBy(), t.date(), v);
+            default -> throw new IllegalArgumentException("no title-block field " + key);
+        };
+    }
+
+    /** A title-block field's text from a title block. */
+    static String titleBlockField(Project.TitleBlock t, String key) {
+        return switch (key) {
+            case "job" -> t.job();
+            case "revision" -> t.revision();
+            case "preparedBy" -> t.preparedBy();
+            case "checkedBy" -> t.checkedBy();
+            case "date" -> t.date();
+            case "notes" -> t.notes();
+            default -> throw new IllegalArgumentException("no title-block field " + key);
+        };
     }
 
     /** Longest title-block entry taken: a sheet line, with room (common practice, no source). */

@@ -495,6 +495,11 @@ final class RunEditorView extends VBox {
         ComboBox<Choice> box = new ComboBox<>();
         box.setId(id);
         box.setMaxWidth(Double.MAX_VALUE);
+        // Wide enough for the catalog's longer material names at the default window size; the
+        // tooltip shows any longer one whole.
+        Tooltip whole = new Tooltip();
+        box.setTooltip(whole);
+        box.valueProperty().addListener((o, a, b) -> whole.setText(b == null ? "" : b.label()));
         Label message = messageLabel(id);
         segmentForm.add(new Label(label), 0, row);
         segmentForm.add(
@@ -686,10 +691,12 @@ final class RunEditorView extends VBox {
         grid.setHgap(8);
         grid.setVgap(6);
         ColumnConstraints labels = new ColumnConstraints(122);
-        ColumnConstraints fields = new ColumnConstraints(180, 240, 320);
-        fields.setHgrow(Priority.SOMETIMES);
-        ColumnConstraints messages = new ColumnConstraints(0, 220, 260);
-        messages.setHgrow(Priority.ALWAYS);
+        // The fields take the room first so that long catalog names show whole at the default
+        // window size; a message beside a field wraps in what is left.
+        ColumnConstraints fields = new ColumnConstraints(180, 390, 440);
+        fields.setHgrow(Priority.ALWAYS);
+        ColumnConstraints messages = new ColumnConstraints(0, 60, 260);
+        messages.setHgrow(Priority.SOMETIMES);
         grid.getColumnConstraints().addAll(labels, fields, messages);
         return grid;
     }

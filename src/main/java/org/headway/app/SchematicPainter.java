@@ -11,6 +11,7 @@ import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
 import java.awt.geom.RoundRectangle2D;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -148,6 +149,23 @@ final class SchematicPainter {
             sy[i] = v.sy(layout.y()[i]);
         }
         Set<String> index = new HashSet<>(solution == null ? List.of() : solution.indexLinks());
+        // Results by id once per drawing (a search per element is quadratic at 10⁴ elements).
+        Map<String, NetworkResult.LinkResult> linkResults = new HashMap<>();
+        Map<String, NetworkResult.NodeResult> nodeResults = new HashMap<>();
+        if (solution != null) {
+            for (NetworkResult.LinkResult l : solution.result().links()) {
+                linkResults.putIfAbsent(l.id(), l);
+            }
+            for (NetworkResult.NodeResult r : solution.result().nodes()) {
+                nodeResults.putIfAbsent(r.id(), r);
+            }
+        }
+        // Elements wholly outside the pane (with a margin for strokes, symbols and labels) are not drawn.
+        double margin = 60;
+        double clipLeft = -margin;
+        double clipTop = -margin;
+        double clipRight = width + margin;
+        double clipBottom = height + margin;
         double qMax = 0;
         double headScale = 0;
         if (solution != null) {
@@ -170,7 +188,10 @@ final class SchematicPainter {
         for (int k = 0; k < links.size() && k < layout.from().length; k++) {
             int a = layout.from()[k];
             int b = layout.to()[k];
-            if (a >= 0 && b >= 0 && index.contains(links.get(k).getOrDefault("id", ""))) {
+            if (a >= 0
+                    && b >= 0
+                    && !outside(sx[a], sy[a], sx[b], sy[b], clipLeft, clipTop, clipRight, clipBottom)
+                    && index.contains(links.get(k).getOrDefault("id", ""))) {
                 g.setColor(INDEX);
                 g.setStroke(new BasicStroke(9f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
                 g.draw(new Line2D.Double(sx[a], sy[a], sx[b], sy[b]));
@@ -197,14 +218,13 @@ final class SchematicPainter {
         for (int k = 0; k < links.size() && k < layout.from().length; k++) {
             int a = layout.from()[k];
             int b = layout.to()[k];
-            if (a < 0 || b < 0) {
+            if (a < 0 || b < 0 || outside(sx[a], sy[a], sx[b], sy[b], clipLeft, clipTop, clipRight, clipBottom)) {
                 continue;
             }
             Map<String, String> row = links.get(k);
             String id = row.getOrDefault("id", "");
             String kind = row.getOrDefault("kind", "pipe");
-            NetworkResult.LinkResult r =
-                    solution == null ? null : solution.link(id).orElse(null);
+            NetworkResult.LinkResult r = linkResults.get(id);
             boolean closed = kind.equals("closed")
                     || (r != null && (r.status().equals("closed") || r.status().equals("shut")));
             double share = r != null && qMax > 0 ? Math.sqrt(Math.abs(r.flow()) / qMax) : 0.3;
@@ -259,6 +279,9 @@ final class SchematicPainter {
         }
         boolean labels = n <= LABEL_LIMIT || v.scale() > 40;
         for (int i = 0; i < n; i++) {
+            if (outside(sx[i], sy[i], sx[i], sy[i], clipLeft, clipTop, clipRight, clipBottom)) {
+                continue;
+            }
             Map<String, String> row = draft.nodes().get(i);
             boolean fixedHead = row.containsKey("fixed_head") || row.containsKey("fixed_pressure");
             boolean reference = "yes".equalsIgnoreCase(row.getOrDefault("reference", ""));
@@ -269,8 +292,7 @@ final class SchematicPainter {
                 FontMetrics bm = g.getFontMetrics();
                 taken.add(label(g, id, sx[i] + 9, sy[i] - 7, INK, bm));
                 g.setFont(small);
-                NetworkResult.NodeResult r =
-                        solution == null ? null : solution.node(id).orElse(null);
+                NetworkResult.NodeResult r = nodeResults.get(id);
                 if (r != null && Double.isFinite(r.pressure())) {
                     String text = fixedHead
                             ? Quantities.format(r.head(), QuantityKind.HEAD, units) + " head"
@@ -319,6 +341,15 @@ final class SchematicPainter {
             }
         }
         legend(g, solution != null, stale, width, height);
+    }
+
+    /** Whether the segment's bounding box misses the rectangle. */
+    private static boolean outside(
+            double x0, double y0, double x1, double y1, double left, double top, double right, double bottom) {
+        return Math.max(x0, x1) < left
+                || Math.min(x0, x1) > right
+                || Math.max(y0, y1) < top
+                || Math.min(y0, y1) > bottom;
     }
 
     private static Rectangle2D label(Graphics2D g, String text, double x, double y, Color colour, FontMetrics fm) {

@@ -58,12 +58,10 @@ final class SchematicView extends Pane {
         });
         setOnMouseDragged(e -> {
             if (view != null) {
-                view = view.panned(e.getX() - dragX, e.getY() - dragY);
-                moved = true;
                 dragged = dragged || Math.hypot(e.getX() - dragX, e.getY() - dragY) > 2;
+                panBy(e.getX() - dragX, e.getY() - dragY);
                 dragX = e.getX();
                 dragY = e.getY();
-                redraw();
             }
         });
         setOnMouseClicked(e -> {
@@ -77,12 +75,35 @@ final class SchematicView extends Pane {
             select(e.getX(), e.getY());
         });
         setOnScroll(e -> {
-            if (view != null && e.getDeltaY() != 0) {
-                view = view.zoomed(Math.pow(1.0015, e.getDeltaY()), e.getX(), e.getY());
-                moved = true;
-                redraw();
+            if (e.getDeltaY() != 0) {
+                zoomBy(Math.pow(1.0015, e.getDeltaY()), e.getX(), e.getY());
             }
         });
+    }
+
+    /** Pans the drawing by a distance in the pane (px), as a drag does. */
+    void panBy(double dx, double dy) {
+        if (view != null) {
+            view = view.panned(dx, dy);
+            moved = true;
+            redraw();
+        }
+    }
+
+    /** Zooms by a factor about a point of the pane, as the wheel does. */
+    void zoomBy(double factor, double x, double y) {
+        if (view != null) {
+            view = view.zoomed(factor, x, y);
+            moved = true;
+            redraw();
+        }
+    }
+
+    private long lastPaintNanos;
+
+    /** How long the last redraw took (ns), for the redraw benchmark. */
+    long lastPaintNanos() {
+        return lastPaintNanos;
     }
 
     /** Selects what is under a point of the pane; true when something was there. */
@@ -156,6 +177,7 @@ final class SchematicView extends Pane {
         if (w <= 0 || h <= 0 || view == null) {
             return;
         }
+        long t0 = System.nanoTime();
         canvas.getGraphicsContext2D().clearRect(0, 0, w, h);
         SchematicPainter.paint(
                 g2,
@@ -168,6 +190,7 @@ final class SchematicView extends Pane {
                 view,
                 w,
                 h);
+        lastPaintNanos = System.nanoTime() - t0;
     }
 
     /**

@@ -179,6 +179,31 @@ class NetworkScreenshotTest {
         snap(robot, "network-design-sizing");
     }
 
+    /** The grade-line tab on the invented demo network, with its pressure limits as a band. */
+    @Test
+    void theGradeLineIsWritten(FxRobot robot) throws Exception {
+        Files.createDirectories(ScreenshotTest.FOLDER);
+        Path examples = Path.of("fluids-data", "examples", "network");
+        Project.NetworkSpec spec = LineList.read(
+                examples.resolve("hillcrest-nodes.csv"),
+                examples.resolve("hillcrest-links.csv"),
+                Catalog.bundled(),
+                false);
+        Path file = fx.dir.resolve("hillcrest.json");
+        ProjectFile.save(
+                Project.network("Hillcrest (invented demo)", "water", "15 degC", "auto", spec)
+                        .withPressureLimits(new Project.PressureLimitsSpec("250 kPa", "450 kPa")),
+                file);
+        robot.interact(() -> {
+            fx.editor.openFile(file);
+            fx.window.networkView().showGrade();
+        });
+        NetworkWorkspaceUiTest.solve(robot, fx);
+        robot.interact(() -> fx.window.networkView().grade().choose("TANK", "J7"));
+        assertTrue(fx.window.networkView().grade().shown() != null);
+        snap(robot, "network-grade-line");
+    }
+
     /** The searchable material list over the network form (the popup drawn on its own). */
     @Test
     void theCatalogPickerIsWritten(FxRobot robot) throws Exception {

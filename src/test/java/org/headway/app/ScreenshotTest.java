@@ -104,4 +104,20 @@ class ScreenshotTest {
         robot.interact(() -> image[0] = stage.getScene().snapshot(null));
         ImageIO.write(SwingFXUtils.fromFXImage(image[0], null), "png", file.toFile());
     }
+
+    /** The run editor with the catalog's longest material name in the segment form. */
+    @Test
+    void aLongMaterialNameIsShownWhole(FxRobot robot) throws Exception {
+        fx.awaitResults();
+        Files.createDirectories(FOLDER);
+        robot.interact(() -> {
+            fx.window.tabs().getSelectionModel().select(0);
+            fx.editor.setSegmentField(0, SegmentField.MATERIAL, "steel-en-10255-new");
+        });
+        fx.awaitResults();
+        javafx.scene.control.ComboBox<?> box =
+                robot.lookup("#segment-material").queryAs(javafx.scene.control.ComboBox.class);
+        assertTrue(box.getValue().toString().contains("EN 10255"), String.valueOf(box.getValue()));
+        snap(robot, 0, "run-editor-long-material");
+    }
 }
