@@ -631,8 +631,31 @@ final class DesignPane extends VBox {
                                         .toList()) + ".");
         why.getStyleClass().add("hint");
         out.add(why);
+        Button apply = new Button("Apply chosen sizes to the links");
+        apply.setId("design-apply-sizes");
+        Label applied = line("design-apply-sizes-result", "");
+        apply.setOnAction(e -> applySizes(s, applied));
+        out.add(new HBox(8, apply, applied));
         out.addAll(cautionLines(s.cautions()));
         sizingOut.getChildren().setAll(out);
+    }
+
+    /** Writes the study's chosen sizes into the link rows (one undo step) and says what changed. */
+    private void applySizes(NetworkSizingResult s, Label applied) {
+        Map<String, String> chosen = new java.util.LinkedHashMap<>();
+        for (NetworkSizingResult.LinkSizing l : s.links()) {
+            chosen.put(l.id(), l.chosenSize());
+        }
+        try {
+            List<String> changed = editor.applySizes(chosen);
+            applied.setText(
+                    changed.isEmpty()
+                            ? "The links already have these sizes."
+                            : changed.size() + " link(s) resized (" + String.join(", ", changed)
+                                    + "); Edit → Undo takes them back. Solve again to see the new heads.");
+        } catch (org.headway.caution.InputException e) {
+            applied.setText(NetworkEditor.inWords(e));
+        }
     }
 
     List<List<String>> balanceRows(BalancingResult b) {

@@ -548,6 +548,72 @@ public final class NetworkEditor {
         }
     }
 
+    /**
+     * Writes sizes chosen by a sizing study into the links' {@code size} cells, as one undoable step.
+     * Only links that are in the draft, take their bore from a catalog size, and whose size differs
+     * are changed; a study run on an earlier draft still applies by link id.
+     *
+     * @param chosen link id → the size as the study names it (e.g. {@code NPS 2-1/2 Sch 40}); the
+     *     size cell gets that size's nominal in the link's own table and schedule
+     * @return the ids of the links changed, in the draft's order (empty: nothing changed, no step)
+     */
+    public List<String> applySizes(Map<String, String> chosen) {
+        Draft d = draft.get();
+        List<Map<String, String>> next = new ArrayList<>(d.links());
+        List<String> changed = new ArrayList<>();
+        for (int i = 0; i < next.size(); i++) {
+            Map<String, String> link = next.get(i);
+            String size = chosen.get(link.getOrDefault("id", ""));
+            String kind = link.getOrDefault("kind", "");
+            boolean pipe = kind.isEmpty() || kind.equals("pipe");
+            if (size == null || !pipe || link.getOrDefault("material", "").isEmpty()) {
+                continue;
+            }
+            String nominal = nominalOf(link, size);
+            if (nominal.equals(link.getOrDefault("size", ""))) {
+                continue;
+            }
+            Map<String, String> m = new LinkedHashMap<>(link);
+            m.put("size", nominal);
+            next.set(i, m);
+            changed.add(link.get("id"));
+        }
+        if (changed.isEmpty()) {
+            return changed;
+        }
+        Draft candidate = d.with(Part.LINK, next);
+        Optional<Problem> found = check(candidate);
+        if (found.isPresent()) {
+            throw new InputException(
+                    rowName(found.get().part(), found.get().row()) + ", "
+                            + found.get().column(),
+                    "the chosen sizes could not be applied: " + found.get().problem());
+        }
+        replace(candidate);
+        return changed;
+    }
+
+    /** The nominal size, in the link's material table and schedule, that sizing names by a label. */
+    private String nominalOf(Map<String, String> link, String label) {
+        String id = link.getOrDefault("id", "");
+        try {
+            org.headway.pipe.Material material = catalog.material(link.get("material"));
+            org.headway.pipe.PipeSize given =
+                    catalog.size(material, link.getOrDefault("size", ""), link.getOrDefault("schedule", ""));
+            for (org.headway.pipe.PipeSize size : catalog.sizes(material.sizeTable(), given.schedule())) {
+                if (org.headway.project.ProjectResolver.candidateLabel(size).equals(label)) {
+                    return size.nominal();
+                }
+            }
+        } catch (InputException e) {
+            throw new InputException(
+                    "link " + id, "the chosen size " + label + " could not be applied: " + e.getMessage());
+        }
+        throw new InputException(
+                "link " + id,
+                "the chosen size " + label + " is not in the link's size table and schedule; it was not applied");
+    }
+
     /** Replaces the demand cases (read from a cases CSV), undoably. */
     public void setCases(List<Project.DemandCaseSpec> cases) {
         Draft d = draft.get();

@@ -1081,6 +1081,11 @@ public final class ProjectResolver {
     }
 
     /** "NPS 4" for the tables that use nominal pipe size, the bare nominal size otherwise. */
+    /** A catalog size as sizing names its candidates, e.g. {@code NPS 2-1/2 Sch 40}. */
+    public static String candidateLabel(PipeSize size) {
+        return sizeLabel(size) + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule()));
+    }
+
     static String sizeLabel(PipeSize size) {
         boolean nps = size.table().startsWith("asme-b36") || size.table().equals("astm-d1785");
         return (nps ? "NPS " : "") + size.nominal();
@@ -1203,9 +1208,7 @@ public final class ProjectResolver {
             List<SizeSelector.CandidateSize> list = new ArrayList<>();
             for (PipeSize size : catalog.sizes(material.sizeTable(), given.schedule())) {
                 list.add(new SizeSelector.CandidateSize(
-                        sizeLabel(size) + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())),
-                        size.innerDiameter(),
-                        size.nominalDiameter()));
+                        candidateLabel(size), size.innerDiameter(), size.nominalDiameter()));
             }
             map.put(id, list);
         }
@@ -1221,10 +1224,8 @@ public final class ProjectResolver {
         }
         List<SizeSelector.CandidateSize> list = new ArrayList<>();
         for (PipeSize size : catalog.sizes(material.sizeTable(), spec.schedule())) {
-            list.add(new SizeSelector.CandidateSize(
-                    sizeLabel(size) + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule())),
-                    size.innerDiameter(),
-                    size.nominalDiameter()));
+            list.add(
+                    new SizeSelector.CandidateSize(candidateLabel(size), size.innerDiameter(), size.nominalDiameter()));
         }
         if (list.isEmpty()) {
             throw new InputException(

@@ -200,6 +200,56 @@ class DesignStudiesTest {
         }
     }
 
+    /**
+     * The chosen sizes written back into the links: every sized pipe's size cell becomes the chosen
+     * size, the pipe with its own bore (X1) is left alone, the step undoes as one, and the written-back
+     * network re-solved by the CLI's line-list reader carries in M1 the velocity the study reported for
+     * the chosen bore (to the engine's own precision).
+     */
+    @Test
+    void chosenSizesAreWrittenBackAsOneUndoableStep() throws Exception {
+        steelBranch();
+        DesignStudies.Sizing app = DesignStudies.sizing(input(), "1.5 m/s", "4 m/100m", "", "20 mm", QUIET);
+        java.util.Map<String, String> chosen = new java.util.LinkedHashMap<>();
+        app.result().links().forEach(l -> chosen.put(l.id(), l.chosenSize()));
+        chosen.put("X1", "DN50");
+        NetworkEditor.Draft before = editor.draft();
+        List<String> changed = editor.applySizes(chosen);
+        assertTrue(!changed.isEmpty(), "nothing was resized");
+        assertTrue(!changed.contains("X1"), changed.toString());
+        for (java.util.Map<String, String> link : editor.draft().links()) {
+            String id = link.get("id");
+            if (id.equals("X1")) {
+                assertEquals("", link.getOrDefault("size", ""));
+            } else if (chosen.containsKey(id)) {
+                // The cell holds the nominal; read back through the catalog it is the size the study chose.
+                Catalog c = Catalog.bundled();
+                var size =
+                        c.size(c.material(link.get("material")), link.get("size"), link.getOrDefault("schedule", ""));
+                assertEquals(chosen.get(id), org.headway.project.ProjectResolver.candidateLabel(size), id);
+            }
+        }
+        Path nodes = dir.resolve("applied-nodes.csv");
+        Path links = dir.resolve("applied-links.csv");
+        editor.exportLineList(nodes, links);
+        JsonNode solved = cli("network", "--nodes", nodes.toString(), "--links", links.toString(), "--format", "json");
+        NetworkSizingResult.LinkSizing m1 = app.result().links().get(0);
+        for (JsonNode l : solved.get("links")) {
+            if (l.get("id").asText().equals(m1.id())) {
+                assertTrue(relative(l.get("velocity_m_per_s").asDouble(), m1.velocity()) <= 1e-9, l.toString());
+            }
+        }
+        assertTrue(editor.undo());
+        assertEquals(before, editor.draft());
+        // Applying a link's own size again changes nothing and makes no undo step.
+        Catalog c = Catalog.bundled();
+        java.util.Map<String, String> m1Row = before.links().get(0);
+        String ownLabel = org.headway.project.ProjectResolver.candidateLabel(
+                c.size(c.material(m1Row.get("material")), m1Row.get("size"), m1Row.getOrDefault("schedule", "")));
+        assertEquals(List.of(), editor.applySizes(java.util.Map.of("M1", ownLabel)));
+        assertEquals(before, editor.draft());
+    }
+
     /** The invented two-pipe circuit of {@code NetworkDesignCommandTest}: supply at 30 m, return at 18 m. */
     private void circuit() throws Exception {
         Path nodes = dir.resolve("circuit-nodes.csv");
