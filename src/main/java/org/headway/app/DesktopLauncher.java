@@ -41,6 +41,11 @@ public final class DesktopLauncher {
 
     /** Opens the window and returns when it is closed. */
     public static void launch(String... args) {
+        // The catalog files are read and parsed while the toolkit starts, on the other core, instead of
+        // after it on the FX thread (decision 0050); the window then finds them loaded.
+        Thread preload = new Thread(org.headway.pipe.Catalog::bundled, "headway-preload");
+        preload.setDaemon(true);
+        preload.start();
         Application.launch(HeadwayApp.class, args);
     }
 }

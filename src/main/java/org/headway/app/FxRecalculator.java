@@ -27,15 +27,33 @@ final class FxRecalculator implements Recalculator {
     private Consumer<Recalculation.Outcome> pendingDone;
     private Task<Recalculation.Outcome> running;
 
+    /** While true, requests wait (the window start holds the first solve until its first frame is drawn). */
+    private boolean held;
+
     FxRecalculator() {
         pause.setOnFinished(e -> start());
+    }
+
+    /** Holds requests until {@link #release()}: the newest is kept and started then. */
+    void hold() {
+        held = true;
+    }
+
+    /** Lets held requests go: the newest one starts after the usual pause. */
+    void release() {
+        held = false;
+        if (pending != null) {
+            pause.playFromStart();
+        }
     }
 
     @Override
     public void request(Supplier<Recalculation.Outcome> work, Consumer<Recalculation.Outcome> done) {
         pending = work;
         pendingDone = done;
-        pause.playFromStart();
+        if (!held) {
+            pause.playFromStart();
+        }
     }
 
     @Override

@@ -52,7 +52,9 @@ public final class MainWindow {
     private final BorderPane root = new BorderPane();
     private final TabPane tabs = new TabPane();
     private final RunEditorView editorView;
-    private final ChartView frictionView;
+    private final Lazy<ChartView> grades;
+    private final Lazy<ChartView> systemView;
+    private final Lazy<ChartView> frictionView;
     private final FittingModel fitting;
     private final PiGroupsModel piGroups;
     private final FittingView fittingView;
@@ -63,7 +65,9 @@ public final class MainWindow {
     private final Button cancel = new Button("Cancel export");
     private Task<List<Path>> export;
     private final NetworkEditor network;
-    private final NetworkWorkspaceView networkView;
+    /** Built the first time the network workspace is wanted: it is not on screen at start. */
+    private NetworkWorkspaceView networkView;
+
     private final SplitPane runWorkspace;
     private final javafx.beans.property.BooleanProperty networkShown =
             new javafx.beans.property.SimpleBooleanProperty(false);
@@ -78,33 +82,38 @@ public final class MainWindow {
         editorScroll.setFitToWidth(true);
         editorScroll.setMinWidth(380);
 
-        ChartView grades = new ChartView(
-                "grade-chart", results.gradeChartProperty(), false, dialogs, editor::startFolder, "grade-lines");
-        ChartView system = new ChartView(
-                "system-chart", results.systemChartProperty(), false, dialogs, editor::startFolder, "system-curve");
-        frictionView = new ChartView(
+        // The chart views (and the JFreeChart viewer classes behind them) are built when their tab is
+        // first shown: none is on screen at start (decision 0050). Each reads its chart's current value then.
+        grades = new Lazy<>(() -> new ChartView(
+                "grade-chart", results.gradeChartProperty(), false, dialogs, editor::startFolder, "grade-lines"));
+        systemView = new Lazy<>(() -> new ChartView(
+                "system-chart", results.systemChartProperty(), false, dialogs, editor::startFolder, "system-curve"));
+        frictionView = new Lazy<>(() -> new ChartView(
                 "friction-chart",
                 results.frictionChartProperty(),
                 true,
                 dialogs,
                 editor::startFolder,
-                "friction-chart");
+                "friction-chart"));
         fitting = new FittingModel(editor, dialogs);
         fittingView = new FittingView(fitting, results, dialogs, editor::startFolder);
         rigData = new RigDataModel(dialogs, editor.unitSystemProperty());
         rigView = new RigDataView(rigData, results, editor::startFolder);
         piGroups = new PiGroupsModel();
-        ScrollPane piScroll = new ScrollPane(new PiGroupsView(piGroups));
-        piScroll.setFitToWidth(true);
+        Lazy<javafx.scene.Node> piScroll = new Lazy<>(() -> {
+            ScrollPane scroll = new ScrollPane(new PiGroupsView(piGroups));
+            scroll.setFitToWidth(true);
+            return scroll;
+        });
         tabs.getTabs()
                 .addAll(
                         tab(TABS.get(0), new ScrollPane(new ResultsView(results))),
-                        tab(TABS.get(1), grades),
-                        tab(TABS.get(2), system),
-                        tab(TABS.get(3), frictionView),
+                        lazyTab(TABS.get(1), grades),
+                        lazyTab(TABS.get(2), systemView),
+                        lazyTab(TABS.get(3), frictionView),
                         tab(TABS.get(4), rigView),
                         tab(TABS.get(5), fittingView),
-                        tab(TABS.get(6), piScroll));
+                        lazyTab(TABS.get(6), piScroll));
         ((ScrollPane) tabs.getTabs().get(0).getContent()).setFitToWidth(true);
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         tabs.setId("views");
@@ -114,7 +123,6 @@ public final class MainWindow {
         split.setDividerPositions(0.44);
         runWorkspace = split;
         network = new NetworkEditor(editor.catalog(), editor.unitSystemProperty());
-        networkView = new NetworkWorkspaceView(network, dialogs, this::networkStartFolder);
 
         CautionsView cautions = new CautionsView(results, i -> {
             editorView.select(i);
@@ -125,9 +133,9 @@ public final class MainWindow {
         root.setBottom(new VBox(cautions, statusBar()));
         root.getStyleClass().add("headway");
         networkShown.addListener((o, a, b) -> {
-            root.setCenter(b ? networkView : runWorkspace);
+            root.setCenter(b ? networkView() : runWorkspace);
             if (b) {
-                javafx.application.Platform.runLater(networkView::focusTable);
+                javafx.application.Platform.runLater(networkView()::focusTable);
             }
             // The cautions panel speaks of the series run; the network's cautions are in its status line.
             cautions.setVisible(!b);
@@ -204,6 +212,9 @@ public final class MainWindow {
     }
 
     NetworkWorkspaceView networkView() {
+        if (networkView == null) {
+            networkView = new NetworkWorkspaceView(network, dialogs, this::networkStartFolder);
+        }
         return networkView;
     }
 
@@ -241,7 +252,7 @@ public final class MainWindow {
                 redo();
             } else if (SOLVE.match(e) && networkShown.get()) {
                 e.consume();
-                networkView.solve();
+                networkView().solve();
             }
         });
         stage.setOnCloseRequest(e -> {
@@ -281,7 +292,7 @@ public final class MainWindow {
     }
 
     ChartView frictionView() {
-        return frictionView;
+        return frictionView.get();
     }
 
     FittingModel fitting() {
@@ -302,6 +313,38 @@ public final class MainWindow {
 
     PiGroupsModel piGroups() {
         return piGroups;
+    }
+
+    /** A view built on first use. */
+    private static final class Lazy<T extends javafx.scene.Node> implements java.util.function.Supplier<T> {
+        private final java.util.function.Supplier<T> make;
+        private T made;
+
+        Lazy(java.util.function.Supplier<T> make) {
+            this.make = make;
+        }
+
+        @Override
+        public T get() {
+            if (made == null) {
+                made = make.get();
+            }
+            return made;
+        }
+    }
+
+    /** A tab whose content is built the first time the tab is selected (or the content is asked for). */
+    private static Tab lazyTab(String title, Lazy<? extends javafx.scene.Node> content) {
+        Tab t = tab(title, null);
+        if (t.isSelected()) {
+            t.setContent(content.get());
+        }
+        t.selectedProperty().addListener((o, a, b) -> {
+            if (b && t.getContent() == null) {
+                t.setContent(content.get());
+            }
+        });
+        return t;
     }
 
     private static Tab tab(String title, javafx.scene.Node content) {
@@ -398,15 +441,15 @@ public final class MainWindow {
         MenuItem importList = new MenuItem("Import line list (nodes and links CSV)…");
         importList.setOnAction(e -> {
             networkShown.set(true);
-            networkView.importLineList();
+            networkView().importLineList();
         });
         MenuItem exportList = new MenuItem("Export line list…");
-        exportList.setOnAction(e -> networkView.exportLineList());
+        exportList.setOnAction(e -> networkView().exportLineList());
         MenuItem solveNetwork = new MenuItem("Solve network");
         solveNetwork.setAccelerator(SOLVE);
         solveNetwork.setOnAction(e -> {
             networkShown.set(true);
-            networkView.solve();
+            networkView().solve();
         });
         workspace
                 .getItems()
@@ -439,7 +482,7 @@ public final class MainWindow {
 
         MenuItem designStudies = item("Design studies", "Shortcut+D", () -> {
             networkShown.set(true);
-            networkView.showDesign(true);
+            networkView().showDesign(true);
         });
         designStudies.setId("design-studies");
         workspace.getItems().add(workspace.getItems().indexOf(solveNetwork) + 1, designStudies);
