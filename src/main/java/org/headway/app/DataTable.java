@@ -139,10 +139,7 @@ public record DataTable(Path file, List<Column> columns) {
                     String cell = record.get(c);
                     double v;
                     try {
-                        if (!org.headway.units.Decimals.isPlainDecimal(cell)) {
-                            throw new NumberFormatException(cell);
-                        }
-                        v = Double.parseDouble(cell);
+                        v = org.headway.units.Decimals.parseDecimal(cell);
                     } catch (NumberFormatException e) {
                         throw new InputException(
                                 where + " line " + line + ", column " + names.get(c), "'" + cell + "' is not a number");

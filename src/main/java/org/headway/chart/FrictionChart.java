@@ -228,6 +228,56 @@ public final class FrictionChart {
         }
 
         // Rig data with uncertainty bars, thinned evenly when there are very many.
+        XYIntervalSeriesCollection rig = rigData(spec);
+        XYErrorRenderer rigRenderer = new XYErrorRenderer();
+        rigRenderer.setDefaultLinesVisible(false);
+        rigRenderer.setSeriesShapesVisible(0, true);
+        rigRenderer.setSeriesShape(0, new Ellipse2D.Double(-3, -3, 6, 6));
+        rigRenderer.setSeriesPaint(0, ChartStyle.ACCENT);
+        rigRenderer.setErrorPaint(new Color(0xC4622D).brighter());
+        rigRenderer.setErrorStroke(new BasicStroke(0.8f));
+        rigRenderer.setCapLength(3);
+
+        // Operating points of the run's segments.
+        XYSeriesCollection ops = operatingPoints(spec, plot);
+        XYLineAndShapeRenderer opRenderer = new XYLineAndShapeRenderer(false, true);
+        opRenderer.setSeriesShape(0, new Rectangle2D.Double(-4.5, -4.5, 9, 9));
+        opRenderer.setSeriesPaint(0, new Color(0x8A2F1B));
+
+        // Draw order: datasets with higher index are drawn first under the default order; keep points on top.
+        plot.setDataset(dataset, ops);
+        plot.setRenderer(dataset++, opRenderer);
+        plot.setDataset(dataset, rig);
+        plot.setRenderer(dataset++, rigRenderer);
+        plot.setDataset(dataset, fittedIn);
+        plot.setRenderer(dataset++, fitRenderer);
+        plot.setDataset(dataset, fittedOut);
+        plot.setRenderer(dataset++, fitOutRenderer);
+        plot.setDataset(dataset, laminar);
+        plot.setRenderer(dataset++, lamRenderer);
+        plot.setDataset(dataset, curves);
+        plot.setRenderer(dataset++, curveRenderer);
+        plot.setDataset(dataset, curvesLow);
+        plot.setRenderer(dataset, lowRenderer);
+        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.REVERSE);
+
+        IntervalMarker band = new IntervalMarker(FlowRegimes.LAMINAR_LIMIT, FlowRegimes.TURBULENT_LIMIT);
+        band.setPaint(ChartStyle.SHADE);
+        band.setAlpha(0.6f);
+        band.setLabel("transitional");
+        band.setLabelFont(ChartStyle.FONT.deriveFont(9f));
+        band.setLabelAnchor(RectangleAnchor.TOP);
+        band.setLabelTextAnchor(TextAnchor.TOP_CENTER);
+        plot.addDomainMarker(band, Layer.BACKGROUND);
+
+        String title = spec.title() == null ? "" : spec.title();
+        JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.FONT, plot, true);
+        ChartStyle.apply(chart);
+        return chart;
+    }
+
+    /** Rig data with uncertainty bars, thinned evenly when there are very many. */
+    private static XYIntervalSeriesCollection rigData(Spec spec) {
         XYIntervalSeriesCollection rig = new XYIntervalSeriesCollection();
         if (!spec.rigPoints().isEmpty()) {
             boolean bars =
@@ -247,16 +297,11 @@ public final class FrictionChart {
             }
             rig.addSeries(rs);
         }
-        XYErrorRenderer rigRenderer = new XYErrorRenderer();
-        rigRenderer.setDefaultLinesVisible(false);
-        rigRenderer.setSeriesShapesVisible(0, true);
-        rigRenderer.setSeriesShape(0, new Ellipse2D.Double(-3, -3, 6, 6));
-        rigRenderer.setSeriesPaint(0, ChartStyle.ACCENT);
-        rigRenderer.setErrorPaint(new Color(0xC4622D).brighter());
-        rigRenderer.setErrorStroke(new BasicStroke(0.8f));
-        rigRenderer.setCapLength(3);
+        return rig;
+    }
 
-        // Operating points of the run's segments.
+    /** Operating points of the run's segments, their labels added to the plot. */
+    private static XYSeriesCollection operatingPoints(Spec spec, XYPlot plot) {
         XYSeriesCollection ops = new XYSeriesCollection();
         if (!spec.operatingPoints().isEmpty()) {
             XYSeries os = new XYSeries("pipe-run segments", false, true);
@@ -292,40 +337,7 @@ public final class FrictionChart {
             }
             ops.addSeries(os);
         }
-        XYLineAndShapeRenderer opRenderer = new XYLineAndShapeRenderer(false, true);
-        opRenderer.setSeriesShape(0, new Rectangle2D.Double(-4.5, -4.5, 9, 9));
-        opRenderer.setSeriesPaint(0, new Color(0x8A2F1B));
-
-        // Draw order: datasets with higher index are drawn first under the default order; keep points on top.
-        plot.setDataset(dataset, ops);
-        plot.setRenderer(dataset++, opRenderer);
-        plot.setDataset(dataset, rig);
-        plot.setRenderer(dataset++, rigRenderer);
-        plot.setDataset(dataset, fittedIn);
-        plot.setRenderer(dataset++, fitRenderer);
-        plot.setDataset(dataset, fittedOut);
-        plot.setRenderer(dataset++, fitOutRenderer);
-        plot.setDataset(dataset, laminar);
-        plot.setRenderer(dataset++, lamRenderer);
-        plot.setDataset(dataset, curves);
-        plot.setRenderer(dataset++, curveRenderer);
-        plot.setDataset(dataset, curvesLow);
-        plot.setRenderer(dataset, lowRenderer);
-        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.REVERSE);
-
-        IntervalMarker band = new IntervalMarker(FlowRegimes.LAMINAR_LIMIT, FlowRegimes.TURBULENT_LIMIT);
-        band.setPaint(ChartStyle.SHADE);
-        band.setAlpha(0.6f);
-        band.setLabel("transitional");
-        band.setLabelFont(ChartStyle.FONT.deriveFont(9f));
-        band.setLabelAnchor(RectangleAnchor.TOP);
-        band.setLabelTextAnchor(TextAnchor.TOP_CENTER);
-        plot.addDomainMarker(band, Layer.BACKGROUND);
-
-        String title = spec.title() == null ? "" : spec.title();
-        JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.FONT, plot, true);
-        ChartStyle.apply(chart);
-        return chart;
+        return ops;
     }
 
     /** Evenly spaced values in log space from a to b inclusive. */

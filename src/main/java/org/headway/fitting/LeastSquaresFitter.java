@@ -178,93 +178,125 @@ public final class LeastSquaresFitter {
         double[] ones = new double[n];
         java.util.Arrays.fill(ones, 1.0);
         if (form instanceof FitForm.Constant) {
-            String a = unique("a", vars);
-            return new Plan(List.of(a), a, new double[][] {ones}, null, true);
+            return planConstant(data, form, vars, x, n, ones);
         }
         if (form instanceof FitForm.Linear || form instanceof FitForm.ThroughOrigin) {
-            boolean intercept = form instanceof FitForm.Linear;
-            requireColumns(vars, 1, Integer.MAX_VALUE, form);
-            List<String> names = new ArrayList<>();
-            List<double[]> design = new ArrayList<>();
-            StringBuilder text = new StringBuilder();
-            if (intercept) {
-                names.add(unique("a", vars));
-                design.add(ones);
-                text.append(names.get(0));
-            }
-            for (int v = 0; v < vars.size(); v++) {
-                String b = unique(vars.size() == 1 ? "b" : "b" + (v + 1), vars);
-                names.add(b);
-                design.add(x[v]);
-                text.append(text.length() == 0 ? "" : " + ")
-                        .append(b)
-                        .append('*')
-                        .append(vars.get(v));
-            }
-            return new Plan(names, text.toString(), design.toArray(new double[0][]), null, intercept);
+            return planLinear(data, form, vars, x, n, ones);
         }
         if (form instanceof FitForm.Logarithmic) {
-            requireColumns(vars, 1, 1, form);
-            requirePositive(vars.get(0), x[0], "the logarithm needs positive values");
-            double[] lx = new double[n];
-            for (int i = 0; i < n; i++) {
-                lx[i] = Math.log(x[0][i]);
-            }
-            String a = unique("a", vars);
-            String b = unique("b", vars);
-            return new Plan(
-                    List.of(a, b), a + " + " + b + "*ln(" + vars.get(0) + ")", new double[][] {ones, lx}, null, true);
+            return planLogarithmic(data, form, vars, x, n, ones);
         }
         if (form instanceof FitForm.Polynomial poly) {
-            requireColumns(vars, 1, 1, form);
-            List<String> names = new ArrayList<>();
-            double[][] design = new double[poly.degree() + 1][];
-            StringBuilder text = new StringBuilder();
-            for (int d = 0; d <= poly.degree(); d++) {
-                String c = unique("c" + d, vars);
-                names.add(c);
-                double[] col = new double[n];
-                for (int i = 0; i < n; i++) {
-                    col[i] = d == 0 ? 1.0 : Math.pow(x[0][i], d);
-                }
-                design[d] = col;
-                text.append(d == 0 ? c : " + " + c + "*" + vars.get(0) + (d == 1 ? "" : "^" + d));
-            }
-            return new Plan(names, text.toString(), design, null, true);
+            return planPolynomial(data, poly, vars, x, n, ones);
         }
         if (form instanceof FitForm.Power) {
-            requireColumns(vars, 1, 1, form);
-            requirePositive(vars.get(0), x[0], "a power law x^b needs positive x");
-            String a = unique("a", vars);
-            String b = unique("b", vars);
-            return new Plan(List.of(a, b), a + "*" + vars.get(0) + "^" + b, null, logLinearStart(data, x, 1.0), true);
+            return planPower(data, form, vars, x, n, ones);
         }
         if (form instanceof FitForm.PowerProduct) {
-            requireColumns(vars, 1, Integer.MAX_VALUE, form);
-            List<String> names = new ArrayList<>();
-            String c = unique("C", vars);
-            names.add(c);
-            StringBuilder text = new StringBuilder(c);
-            for (int v = 0; v < vars.size(); v++) {
-                requirePositive(vars.get(v), x[v], "a power product needs positive values");
-                String e = unique("n_" + vars.get(v), vars);
-                names.add(e);
-                text.append('*').append(vars.get(v)).append('^').append(e);
-            }
-            return new Plan(names, text.toString(), null, logLinearStart(data, x, 1.0), true);
+            return planPowerProduct(data, form, vars, x, n, ones);
         }
         if (form instanceof FitForm.Exponential) {
-            requireColumns(vars, 1, 1, form);
-            String a = unique("a", vars);
-            String b = unique("b", vars);
-            return new Plan(
-                    List.of(a, b), a + "*exp(" + b + "*" + vars.get(0) + ")", null, exponentialStart(data, x[0]), true);
+            return planExponential(data, form, vars, x, n, ones);
         }
-        FitForm.UserExpression user = (FitForm.UserExpression) form;
+        return planUserExpression((FitForm.UserExpression) form);
+    }
+
+    private static Plan planUserExpression(FitForm.UserExpression user) {
         List<String> names = List.copyOf(user.start().keySet());
         double[] start =
                 user.start().values().stream().mapToDouble(Double::doubleValue).toArray();
         return new Plan(names, user.expression(), null, start, true);
+    }
+
+    private Plan planConstant(Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
+        String a = unique("a", vars);
+        return new Plan(List.of(a), a, new double[][] {ones}, null, true);
+    }
+
+    private Plan planLinear(Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
+        boolean intercept = form instanceof FitForm.Linear;
+        requireColumns(vars, 1, Integer.MAX_VALUE, form);
+        List<String> names = new ArrayList<>();
+        List<double[]> design = new ArrayList<>();
+        StringBuilder text = new StringBuilder();
+        if (intercept) {
+            names.add(unique("a", vars));
+            design.add(ones);
+            text.append(names.get(0));
+        }
+        for (int v = 0; v < vars.size(); v++) {
+            String b = unique(vars.size() == 1 ? "b" : "b" + (v + 1), vars);
+            names.add(b);
+            design.add(x[v]);
+            text.append(text.length() == 0 ? "" : " + ").append(b).append('*').append(vars.get(v));
+        }
+        return new Plan(names, text.toString(), design.toArray(new double[0][]), null, intercept);
+    }
+
+    private Plan planLogarithmic(
+            Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
+        requireColumns(vars, 1, 1, form);
+        requirePositive(vars.get(0), x[0], "the logarithm needs positive values");
+        double[] lx = new double[n];
+        for (int i = 0; i < n; i++) {
+            lx[i] = Math.log(x[0][i]);
+        }
+        String a = unique("a", vars);
+        String b = unique("b", vars);
+        return new Plan(
+                List.of(a, b), a + " + " + b + "*ln(" + vars.get(0) + ")", new double[][] {ones, lx}, null, true);
+    }
+
+    private Plan planPolynomial(
+            Observations data, FitForm.Polynomial poly, List<String> vars, double[][] x, int n, double[] ones) {
+        requireColumns(vars, 1, 1, poly);
+        List<String> names = new ArrayList<>();
+        double[][] design = new double[poly.degree() + 1][];
+        StringBuilder text = new StringBuilder();
+        for (int d = 0; d <= poly.degree(); d++) {
+            String c = unique("c" + d, vars);
+            names.add(c);
+            double[] col = new double[n];
+            for (int i = 0; i < n; i++) {
+                col[i] = d == 0 ? 1.0 : Math.pow(x[0][i], d);
+            }
+            design[d] = col;
+            text.append(d == 0 ? c : " + " + c + "*" + vars.get(0) + (d == 1 ? "" : "^" + d));
+        }
+        return new Plan(names, text.toString(), design, null, true);
+    }
+
+    private Plan planPower(Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
+        requireColumns(vars, 1, 1, form);
+        requirePositive(vars.get(0), x[0], "a power law x^b needs positive x");
+        String a = unique("a", vars);
+        String b = unique("b", vars);
+        return new Plan(List.of(a, b), a + "*" + vars.get(0) + "^" + b, null, logLinearStart(data, x, 1.0), true);
+    }
+
+    private Plan planPowerProduct(
+            Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
+        requireColumns(vars, 1, Integer.MAX_VALUE, form);
+        List<String> names = new ArrayList<>();
+        String c = unique("C", vars);
+        names.add(c);
+        StringBuilder text = new StringBuilder(c);
+        for (int v = 0; v < vars.size(); v++) {
+            requirePositive(vars.get(v), x[v], "a power product needs positive values");
+            String e = unique("n_" + vars.get(v), vars);
+            names.add(e);
+            text.append('*').append(vars.get(v)).append('^').append(e);
+        }
+        return new Plan(names, text.toString(), null, logLinearStart(data, x, 1.0), true);
+    }
+
+    private Plan planExponential(
+            Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
+        requireColumns(vars, 1, 1, form);
+        String a = unique("a", vars);
+        String b = unique("b", vars);
+        return new Plan(
+                List.of(a, b), a + "*exp(" + b + "*" + vars.get(0) + ")", null, exponentialStart(data, x[0]), true);
     }
 
     private static String unique(String name, List<String> taken) {

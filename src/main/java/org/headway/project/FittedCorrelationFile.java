@@ -1,6 +1,5 @@
 package org.headway.project;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
@@ -9,7 +8,6 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Set;
 import org.headway.caution.InputException;
@@ -41,7 +39,7 @@ public final class FittedCorrelationFile {
     public static final int VERSION = 1;
 
     /** Same limits on hostile input as project files (size, nesting, string length, duplicates). */
-    private static final ObjectMapper MAPPER = ProjectFile.mapper();
+    private static final ObjectMapper MAPPER = StrictJson.mapper();
 
     private FittedCorrelationFile() {}
 
@@ -116,7 +114,7 @@ public final class FittedCorrelationFile {
      */
     public static FittedCorrelation load(Path file) {
         String text = org.headway.caution.TextFiles.read(
-                file, ProjectFile.MAX_DOCUMENT_LENGTH, "a fitted-correlation file is a few kilobytes");
+                file, StrictJson.MAX_DOCUMENT_LENGTH, "a fitted-correlation file is a few kilobytes");
         return parse(text, file.toString());
     }
 
@@ -127,18 +125,7 @@ public final class FittedCorrelationFile {
      * @param label the file as errors should name it
      */
     static FittedCorrelation parse(String text, String label) {
-        if (text.startsWith("\uFEFF")) {
-            text = text.substring(1);
-        }
-        JsonNode root;
-        try {
-            root = MAPPER.readTree(text);
-        } catch (JsonProcessingException e) {
-            // A limit exceeded (nesting, string length) may come without a location.
-            String at = ProjectFile.location(e, text);
-            String where = at.isEmpty() ? label : label + " " + at;
-            throw new InputException(where, "not valid JSON: " + ProjectFile.problem(e));
-        }
+        JsonNode root = StrictJson.read(StrictJson.withoutByteOrderMark(text), label);
         if (root == null || root.isMissingNode()) {
             throw new InputException(label, "is empty; expected a fitted-correlation JSON object");
         }
@@ -152,7 +139,7 @@ public final class FittedCorrelationFile {
     /** Reads the JSON tree; errors name the JSON path ($.parameters[1].value). */
     public static FittedCorrelation fromJson(JsonNode root) {
         object(root, "$");
-        keys(
+        StrictJson.keys(
                 root,
                 "$",
                 Set.of(
@@ -169,42 +156,42 @@ public final class FittedCorrelationFile {
         if (!format.equals(FORMAT)) {
             throw new InputException("$.format", "expected \"" + FORMAT + "\", got \"" + format + "\"");
         }
-        int version = integer(root, "$", "version");
+        int version = StrictJson.integer(root, "$", "version");
         if (version != VERSION) {
             throw new InputException("$.version", "this Headway reads version " + VERSION + ", got " + version);
         }
         List<String> names = new ArrayList<>();
         List<VariableRange> ranges = new ArrayList<>();
-        JsonNode vars = array(root, "$", "variables");
+        JsonNode vars = StrictJson.array(root, "$", "variables");
         for (int i = 0; i < vars.size(); i++) {
             String path = "$.variables[" + i + "]";
             JsonNode v = vars.get(i);
             object(v, path);
-            keys(v, path, Set.of("name", "min", "max"));
+            StrictJson.keys(v, path, Set.of("name", "min", "max"));
             String name = text(v, path, "name");
             names.add(name);
-            ranges.add(new VariableRange(name, number(v, path, "min"), number(v, path, "max")));
+            ranges.add(new VariableRange(name, StrictJson.number(v, path, "min"), StrictJson.number(v, path, "max")));
         }
         List<FittedParameter> parameters = new ArrayList<>();
-        JsonNode params = array(root, "$", "parameters");
+        JsonNode params = StrictJson.array(root, "$", "parameters");
         for (int i = 0; i < params.size(); i++) {
             String path = "$.parameters[" + i + "]";
             JsonNode p = params.get(i);
             object(p, path);
-            keys(p, path, Set.of("name", "value", "standard_error", "ci95_low", "ci95_high"));
+            StrictJson.keys(p, path, Set.of("name", "value", "standard_error", "ci95_low", "ci95_high"));
             parameters.add(new FittedParameter(
                     text(p, path, "name"),
-                    number(p, path, "value"),
-                    number(p, path, "standard_error"),
-                    number(p, path, "ci95_low"),
-                    number(p, path, "ci95_high")));
+                    StrictJson.number(p, path, "value"),
+                    StrictJson.number(p, path, "standard_error"),
+                    StrictJson.number(p, path, "ci95_low"),
+                    StrictJson.number(p, path, "ci95_high")));
         }
         JsonNode s = root.get("statistics");
         if (s == null) {
             throw new InputException("$.statistics", "missing");
         }
         object(s, "$.statistics");
-        keys(
+        StrictJson.keys(
                 s,
                 "$.statistics",
                 Set.of(
@@ -215,12 +202,12 @@ public final class FittedCorrelationFile {
                         "degrees_of_freedom",
                         "points"));
         FitStatistics stats = new FitStatistics(
-                number(s, "$.statistics", "residual_sum_of_squares"),
-                number(s, "$.statistics", "residual_standard_deviation"),
-                number(s, "$.statistics", "r_squared"),
-                number(s, "$.statistics", "adjusted_r_squared"),
-                integer(s, "$.statistics", "degrees_of_freedom"),
-                integer(s, "$.statistics", "points"));
+                StrictJson.number(s, "$.statistics", "residual_sum_of_squares"),
+                StrictJson.number(s, "$.statistics", "residual_standard_deviation"),
+                StrictJson.number(s, "$.statistics", "r_squared"),
+                StrictJson.number(s, "$.statistics", "adjusted_r_squared"),
+                StrictJson.integer(s, "$.statistics", "degrees_of_freedom"),
+                StrictJson.integer(s, "$.statistics", "points"));
         text(root, "$", "citation");
         try {
             return new FittedCorrelation(
@@ -236,63 +223,14 @@ public final class FittedCorrelationFile {
         }
     }
 
+    /** As {@link StrictJson#object} but, as this file always has, naming the node type in capitals. */
     private static void object(JsonNode node, String path) {
         if (!node.isObject()) {
             throw new InputException(path, "expected a JSON object, got " + node.getNodeType());
         }
     }
 
-    private static void keys(JsonNode node, String path, Set<String> allowed) {
-        for (Iterator<String> it = node.fieldNames(); it.hasNext(); ) {
-            String key = it.next();
-            if (!allowed.contains(key)) {
-                throw new InputException(
-                        path + "." + key, "unknown key; allowed keys are " + new java.util.TreeSet<>(allowed));
-            }
-        }
-    }
-
-    private static JsonNode required(JsonNode node, String path, String key) {
-        JsonNode v = node.get(key);
-        if (v == null || v.isNull()) {
-            throw new InputException(path + "." + key, "missing");
-        }
-        return v;
-    }
-
     private static String text(JsonNode node, String path, String key) {
-        JsonNode v = required(node, path, key);
-        if (!v.isTextual()) {
-            throw new InputException(path + "." + key, "expected text, got " + v);
-        }
-        return v.asText();
-    }
-
-    private static double number(JsonNode node, String path, String key) {
-        JsonNode v = required(node, path, key);
-        if (!v.isNumber()) {
-            throw new InputException(path + "." + key, "expected a number, got " + v);
-        }
-        double value = v.doubleValue();
-        if (!Double.isFinite(value)) {
-            throw new InputException(path + "." + key, "must be a finite number, got " + v.asText());
-        }
-        return value;
-    }
-
-    private static int integer(JsonNode node, String path, String key) {
-        JsonNode v = required(node, path, key);
-        if (!v.canConvertToInt() || !v.isIntegralNumber()) {
-            throw new InputException(path + "." + key, "expected a whole number, got " + v);
-        }
-        return v.intValue();
-    }
-
-    private static JsonNode array(JsonNode node, String path, String key) {
-        JsonNode v = required(node, path, key);
-        if (!v.isArray()) {
-            throw new InputException(path + "." + key, "expected a list, got " + v);
-        }
-        return v;
+        return StrictJson.text(node, path, key, "text");
     }
 }

@@ -1,13 +1,8 @@
 package org.headway.project;
 
-import com.fasterxml.jackson.core.JsonFactory;
-import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.core.StreamReadConstraints;
-import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
@@ -33,93 +28,15 @@ import org.headway.units.QuantityKind;
 public final class ProjectFile {
 
     /** Largest project file accepted (bytes). */
-    public static final long MAX_DOCUMENT_LENGTH = 16L * 1024 * 1024;
+    public static final long MAX_DOCUMENT_LENGTH = StrictJson.MAX_DOCUMENT_LENGTH;
     /** Deepest nesting accepted; a project needs about six levels. */
-    public static final int MAX_NESTING_DEPTH = 64;
+    public static final int MAX_NESTING_DEPTH = StrictJson.MAX_NESTING_DEPTH;
     /** Longest string accepted (characters). */
-    public static final int MAX_STRING_LENGTH = 100_000;
+    public static final int MAX_STRING_LENGTH = StrictJson.MAX_STRING_LENGTH;
 
-    private static final ObjectMapper MAPPER = createMapper();
+    private static final ObjectMapper MAPPER = StrictJson.mapper();
 
     private ProjectFile() {}
-
-    /** The JSON reader/writer with Headway's limits on hostile input and no polymorphic typing. */
-    static ObjectMapper createMapper() {
-        JsonFactory factory = JsonFactory.builder()
-                .streamReadConstraints(StreamReadConstraints.builder()
-                        .maxNestingDepth(MAX_NESTING_DEPTH)
-                        .maxStringLength(MAX_STRING_LENGTH)
-                        .maxDocumentLength(MAX_DOCUMENT_LENGTH)
-                        .maxNumberLength(100)
-                        .build())
-                .build();
-        ObjectMapper mapper = new ObjectMapper(factory);
-        mapper.enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY);
-        mapper.enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
-        // Text after the closing brace (a merge marker, a second project) is an error, not ignored.
-        mapper.enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
-        mapper.enable(SerializationFeature.INDENT_OUTPUT);
-        return mapper;
-    }
-
-    /**
-     * Where a JSON error is: line and column from the parser, or, for a limit the parser reports
-     * without a place (nesting too deep), the place found by scanning the text.
-     */
-    static String location(com.fasterxml.jackson.core.JsonProcessingException e, String text) {
-        if (e.getLocation() != null && e.getLocation().getLineNr() > 0) {
-            return "line " + e.getLocation().getLineNr() + ", column "
-                    + e.getLocation().getColumnNr();
-        }
-        int depth = 0;
-        int line = 1;
-        int column = 0;
-        boolean inString = false;
-        for (int i = 0; i < text.length(); i++) {
-            char c = text.charAt(i);
-            column++;
-            if (c == '\n') {
-                line++;
-                column = 0;
-            } else if (inString) {
-                if (c == '\\') {
-                    i++;
-                    column++;
-                } else if (c == '"') {
-                    inString = false;
-                }
-            } else if (c == '"') {
-                inString = true;
-            } else if (c == '{' || c == '[') {
-                if (++depth > MAX_NESTING_DEPTH) {
-                    return "line " + line + ", column " + column;
-                }
-            } else if (c == '}' || c == ']') {
-                depth--;
-            }
-        }
-        return "";
-    }
-
-    /** The parser's message in words, without the library's names for its limits. */
-    static String problem(com.fasterxml.jackson.core.JsonProcessingException e) {
-        String m = e.getOriginalMessage();
-        if (m != null && m.contains("nesting depth")) {
-            return "nested deeper than " + MAX_NESTING_DEPTH + " levels of objects and arrays";
-        }
-        if (m != null && m.contains("String value length")) {
-            return "a text value is longer than " + MAX_STRING_LENGTH + " characters";
-        }
-        if (m != null && m.contains("Number value length")) {
-            return "a number is written with more than 100 characters";
-        }
-        return m;
-    }
-
-    /** Shared mapper for other JSON files of ours (same limits). */
-    public static ObjectMapper mapper() {
-        return MAPPER;
-    }
 
     /**
      * Loads a project file.
@@ -152,13 +69,7 @@ public final class ProjectFile {
 
     /** Parses project JSON text (no file name in messages). */
     public static Project parse(String json) {
-        JsonNode root;
-        String text = json.startsWith("\uFEFF") ? json.substring(1) : json;
-        try {
-            root = MAPPER.readTree(text);
-        } catch (JsonProcessingException e) {
-            throw new InputException(location(e, text), "not valid JSON: " + problem(e));
-        }
+        JsonNode root = StrictJson.read(StrictJson.withoutByteOrderMark(json), "");
         if (root == null || !root.isObject()) {
             throw new InputException("$", "a project file must be a JSON object");
         }

@@ -1,8 +1,6 @@
 package org.headway.project;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
@@ -13,12 +11,9 @@ import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumMap;
-import java.util.Iterator;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import java.util.TreeSet;
 import java.util.function.Consumer;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -75,7 +70,6 @@ public final class RigFile {
     /** Pressure at which fluid properties are evaluated when the file gives none (Pa). */
     public static final double DEFAULT_PRESSURE = SiteAtmosphere.SEA_LEVEL_PRESSURE;
 
-    private static final ObjectMapper MAPPER = ProjectFile.mapper();
     private static final Pattern PERCENT =
             Pattern.compile("^\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*%\\s*$");
     private static final Pattern NUMBER_THEN_UNIT =
@@ -115,7 +109,7 @@ public final class RigFile {
     public static RigFile load(Path file) {
         String text;
         text = org.headway.caution.TextFiles.read(
-                file, ProjectFile.MAX_DOCUMENT_LENGTH, "a rig file is a few kilobytes");
+                file, StrictJson.MAX_DOCUMENT_LENGTH, "a rig file is a few kilobytes");
         Path folder = file.toAbsolutePath().getParent();
         return parse(text, file.toString(), file.getFileName().toString(), dataPath -> {
             Path resolved = folder.resolve(dataPath).normalize();
@@ -188,14 +182,7 @@ public final class RigFile {
     }
 
     static RigFile parse(String text, String where, String name, DataResolver resolver) {
-        JsonNode root;
-        try {
-            root = MAPPER.readTree(text);
-        } catch (JsonProcessingException e) {
-            String at = ProjectFile.location(e, text);
-            throw new InputException(
-                    where + (at.isEmpty() ? "" : " " + at), "not valid JSON: " + ProjectFile.problem(e));
-        }
+        JsonNode root = StrictJson.read(text, where);
         try {
             return fromJson(root, name, resolver);
         } catch (InputException e) {
@@ -204,8 +191,8 @@ public final class RigFile {
     }
 
     private static RigFile fromJson(JsonNode root, String fileName, DataResolver resolver) {
-        Json.object(root, "$");
-        Json.keys(
+        StrictJson.object(root, "$");
+        StrictJson.keys(
                 root,
                 "$",
                 Set.of(
@@ -221,23 +208,23 @@ public final class RigFile {
                         "fluid",
                         "uncertainty",
                         "compareWith"));
-        String format = Json.text(root, "$", "format");
+        String format = text(root, "$", "format");
         if (!format.equals(FORMAT)) {
             throw new InputException("$.format", "expected \"" + FORMAT + "\", got \"" + format + "\"");
         }
-        int version = Json.integer(root, "$", "version");
+        int version = StrictJson.integer(root, "$", "version");
         if (version != VERSION) {
             throw new InputException("$.version", "this Headway reads version " + VERSION + ", got " + version);
         }
-        String name = root.has("name") ? Json.text(root, "$", "name") : fileName;
+        String name = root.has("name") ? text(root, "$", "name") : fileName;
         if (root.has("note")) {
-            Json.text(root, "$", "note");
+            text(root, "$", "note");
         }
         double diameter = quantity(root, "$", "innerDiameter", QuantityKind.DIAMETER);
         double spacing = quantity(root, "$", "tapSpacing", QuantityKind.LENGTH);
         double roughness = quantity(root, "$", "roughness", QuantityKind.ROUGHNESS);
         FrictionCorrelation comparison;
-        String compareWith = root.has("compareWith") ? Json.text(root, "$", "compareWith") : "colebrook";
+        String compareWith = root.has("compareWith") ? text(root, "$", "compareWith") : "colebrook";
         try {
             comparison = FrictionMethods.byId(compareWith);
         } catch (InputException e) {
@@ -246,7 +233,7 @@ public final class RigFile {
         Columns columns = columns(root);
         RigFluid fluid = fluid(root);
         RigUncertainty uncertainty = uncertainty(root);
-        String dataPath = Json.text(root, "$", "data");
+        String dataPath = text(root, "$", "data");
         DataSource data = resolver.resolve(dataPath);
         String fluidDescription = fluid.model() == null
                 ? "constant properties given in the rig file"
@@ -273,20 +260,20 @@ public final class RigFile {
             return new Columns("flow", "dp", "T");
         }
         JsonNode c = root.get("columns");
-        Json.object(c, "$.columns");
-        Json.keys(c, "$.columns", Set.of("flow", "pressureDrop", "temperature"));
+        StrictJson.object(c, "$.columns");
+        StrictJson.keys(c, "$.columns", Set.of("flow", "pressureDrop", "temperature"));
         return new Columns(
-                c.has("flow") ? Json.text(c, "$.columns", "flow") : "flow",
-                c.has("pressureDrop") ? Json.text(c, "$.columns", "pressureDrop") : "dp",
-                c.has("temperature") ? Json.text(c, "$.columns", "temperature") : "T");
+                c.has("flow") ? text(c, "$.columns", "flow") : "flow",
+                c.has("pressureDrop") ? text(c, "$.columns", "pressureDrop") : "dp",
+                c.has("temperature") ? text(c, "$.columns", "temperature") : "T");
     }
 
     private static RigFluid fluid(JsonNode root) {
-        JsonNode f = Json.required(root, "$", "fluid");
+        JsonNode f = StrictJson.required(root, "$", "fluid");
         String path = "$.fluid";
-        Json.object(f, path);
-        Json.keys(f, path, Set.of("name", "temperature", "pressure", "density", "viscosity"));
-        String name = Json.text(f, path, "name");
+        StrictJson.object(f, path);
+        StrictJson.keys(f, path, Set.of("name", "temperature", "pressure", "density", "viscosity"));
+        String name = text(f, path, "name");
         Double temperature = f.has("temperature") ? quantity(f, path, "temperature", QuantityKind.TEMPERATURE) : null;
         double pressure = f.has("pressure") ? quantity(f, path, "pressure", QuantityKind.PRESSURE) : DEFAULT_PRESSURE;
         boolean hasDensity = f.has("density");
@@ -319,7 +306,7 @@ public final class RigFile {
         }
         JsonNode u = root.get("uncertainty");
         String path = "$.uncertainty";
-        Json.object(u, path);
+        StrictJson.object(u, path);
         Map<String, UncertaintySource> keys = Map.of(
                 "flow", UncertaintySource.FLOW,
                 "pressureDrop", UncertaintySource.PRESSURE_DROP,
@@ -328,12 +315,12 @@ public final class RigFile {
                 "tapSpacing", UncertaintySource.TAP_SPACING,
                 "density", UncertaintySource.DENSITY,
                 "viscosity", UncertaintySource.VISCOSITY);
-        Json.keys(u, path, keys.keySet());
+        StrictJson.keys(u, path, keys.keySet());
         Map<UncertaintySource, InstrumentUncertainty> stated = new EnumMap<>(UncertaintySource.class);
         for (Map.Entry<String, UncertaintySource> e : keys.entrySet()) {
             if (u.has(e.getKey())) {
                 String where = path + "." + e.getKey();
-                String text = Json.text(u, path, e.getKey());
+                String text = text(u, path, e.getKey());
                 stated.put(e.getValue(), instrumentUncertainty(text, e.getValue(), where));
             }
         }
@@ -409,7 +396,7 @@ public final class RigFile {
     }
 
     private static double quantity(JsonNode node, String path, String key, QuantityKind kind) {
-        String text = Json.text(node, path, key);
+        String text = text(node, path, key);
         return Quantities.parse(text, kind, path + "." + key);
     }
 
@@ -473,53 +460,8 @@ public final class RigFile {
         }
     }
 
-    /** Small strict JSON readers; errors name the JSON path. */
-    static final class Json {
-        private Json() {}
-
-        static void object(JsonNode node, String path) {
-            if (!node.isObject()) {
-                throw new InputException(
-                        path,
-                        "expected a JSON object, got "
-                                + node.getNodeType().name().toLowerCase(Locale.ROOT));
-            }
-        }
-
-        static void keys(JsonNode node, String path, Set<String> allowed) {
-            for (Iterator<String> it = node.fieldNames(); it.hasNext(); ) {
-                String key = it.next();
-                if (!allowed.contains(key)) {
-                    throw new InputException(
-                            path + "." + key, "unknown key; allowed keys are " + new TreeSet<>(allowed));
-                }
-            }
-        }
-
-        static JsonNode required(JsonNode node, String path, String key) {
-            JsonNode v = node.get(key);
-            if (v == null || v.isNull()) {
-                throw new InputException(path + "." + key, "missing");
-            }
-            return v;
-        }
-
-        static String text(JsonNode node, String path, String key) {
-            JsonNode v = required(node, path, key);
-            if (!v.isTextual()) {
-                throw new InputException(
-                        path + "." + key,
-                        "expected text (a number with its unit in quotes, e.g. \"25.4 mm\"), got " + v);
-            }
-            return v.asText();
-        }
-
-        static int integer(JsonNode node, String path, String key) {
-            JsonNode v = required(node, path, key);
-            if (!v.isIntegralNumber() || !v.canConvertToInt()) {
-                throw new InputException(path + "." + key, "expected a whole number, got " + v);
-            }
-            return v.intValue();
-        }
+    /** A required text value; the message says a quantity is expected, as most of this file's values are. */
+    private static String text(JsonNode node, String path, String key) {
+        return StrictJson.text(node, path, key, "text (a number with its unit in quotes, e.g. \"25.4 mm\")");
     }
 }

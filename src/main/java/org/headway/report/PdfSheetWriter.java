@@ -60,7 +60,6 @@ public final class PdfSheetWriter {
     private static void compose(PdfLayout pdf, HeadLossSheet sheet, UnitSystem u) throws IOException {
         Project p = sheet.project();
         PipeRun run = sheet.run();
-        RunResult r = sheet.result();
         pdf.documentInfo("Head-loss sheet: " + p.title(), sheet.version(), sheet.inputHash());
 
         pdf.heading("Head-loss sheet", 16);
@@ -100,6 +99,15 @@ public final class PdfSheetWriter {
             }
         }
 
+        composeInputs(pdf, sheet, u);
+        composeResults(pdf, sheet, u);
+        composeCharts(pdf, sheet, u);
+        composeMethods(pdf, sheet, u);
+    }
+
+    private static void composeInputs(PdfLayout pdf, HeadLossSheet sheet, UnitSystem u) throws IOException {
+        PipeRun run = sheet.run();
+        RunResult r = sheet.result();
         // Inputs
         pdf.heading("Inputs", 12);
         var f = run.fluid();
@@ -234,7 +242,12 @@ public final class PdfSheetWriter {
                     new float[] {0.12f, 0.1f, 0.2f, 0.58f},
                     SMALL);
         }
+    }
 
+    private static void composeResults(PdfLayout pdf, HeadLossSheet sheet, UnitSystem u) throws IOException {
+        Project p = sheet.project();
+        PipeRun run = sheet.run();
+        RunResult r = sheet.result();
         // Results
         pdf.heading("Results at the design flow", 12);
         String h = Quantities.unitSymbol(QuantityKind.HEAD, u);
@@ -364,13 +377,18 @@ public final class PdfSheetWriter {
         }
         pdf.space(4);
         pdf.table(new String[] {"Total", "Value", "Note"}, totals, new float[] {0.25f, 0.35f, 0.4f}, BODY);
+    }
 
+    private static void composeCharts(PdfLayout pdf, HeadLossSheet sheet, UnitSystem u) throws IOException {
         // Charts
         pdf.heading("Charts", 12, CHART_HEIGHT * pdf.width() / CHART_WIDTH);
         chart(pdf, SheetCharts.system(sheet, u));
         chart(pdf, SheetCharts.grades(sheet, u));
         chart(pdf, SheetCharts.friction(sheet));
+    }
 
+    private static void composeMethods(PdfLayout pdf, HeadLossSheet sheet, UnitSystem u) throws IOException {
+        PipeRun run = sheet.run();
         // Methods
         pdf.methods(sheet.methods(), BODY, SMALL);
         pdf.heading("Assumptions", 12);

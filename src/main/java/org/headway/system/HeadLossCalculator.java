@@ -217,10 +217,33 @@ public final class HeadLossCalculator {
         RunTotals totals = new RunTotals(
                 friction, minor, staticHead, totalHead, rho * g * (friction + minor), rho * g * totalHead);
 
+        cautions.addAll(
+                balanceCautions(flow, friction, minor, componentLoss, staticHead, totalHead, pumpIndex >= 0, rho, g));
+        OptionalDouble npsh = pumpIndex < 0
+                ? OptionalDouble.empty()
+                : suctionHead(
+                        run, (PumpElement) elements.get(pumpIndex), flow, lossesBeforePump, elevationAtPump, cautions);
+        cautions.add(Caution.GENERAL_REVIEW);
+        // identical cautions of several elements are listed once, naming them; each SegmentResult keeps its own
+        return new RunResult(flow, results, profiles, totals, npsh, Caution.grouped(new ArrayList<>(cautions)));
+    }
+
+    /** Cautions on the run's energy balance: fitting losses above friction, head missing or in surplus without a pump. */
+    private static List<Caution> balanceCautions(
+            double flow,
+            double friction,
+            double minor,
+            double componentLoss,
+            double staticHead,
+            double totalHead,
+            boolean pumped,
+            double rho,
+            double g) {
+        List<Caution> out = new ArrayList<>();
         // Components carry their own ratings; the scatter this caution is about is that of tabulated K values.
         double fittingLoss = minor - componentLoss;
         if (flow > 0 && fittingLoss > friction && fittingLoss > 0) {
-            cautions.add(Caution.note(
+            out.add(Caution.note(
                     "minor-losses-dominate",
                     String.format(
                             Locale.ROOT,
@@ -232,8 +255,8 @@ public final class HeadLossCalculator {
         }
         // Round-off of a balanced gravity run leaves ~1e-14 m; only a real deficit is worth a caution.
         double resolution = 1e-9 * Math.max(1.0, Math.abs(staticHead) + friction + minor);
-        if (pumpIndex < 0 && totalHead > resolution && flow > 0) {
-            cautions.add(Caution.note(
+        if (!pumped && totalHead > resolution && flow > 0) {
+            out.add(Caution.note(
                     "head-required",
                     String.format(
                             Locale.ROOT,
@@ -242,8 +265,8 @@ public final class HeadLossCalculator {
                             totalHead),
                     "energy balance"));
         }
-        if (pumpIndex < 0 && totalHead < -resolution && flow > 0) {
-            cautions.add(Caution.note(
+        if (!pumped && totalHead < -resolution && flow > 0) {
+            out.add(Caution.note(
                     "head-surplus",
                     String.format(
                             Locale.ROOT,
@@ -256,30 +279,38 @@ public final class HeadLossCalculator {
                     "energy balance"));
         }
 
-        OptionalDouble npsh = OptionalDouble.empty();
-        if (pumpIndex >= 0) {
-            PumpElement pump = (PumpElement) elements.get(pumpIndex);
-            if (fluid.vapourPressure().isPresent()) {
-                // NPSHa = (p_abs/ρg + V²/2g) − p_v/ρg at the pump suction; energy grade minus elevation is the gauge
-                // pressure head plus the velocity head.
-                double energyAtPump = run.source().head(rho) - lossesBeforePump;
-                double value = SuctionHead.available(
-                        energyAtPump - elevationAtPump,
-                        run.atmosphericPressure(),
-                        fluid.vapourPressure().getAsDouble(),
-                        rho);
-                npsh = OptionalDouble.of(value);
-                cautions.addAll(SuctionHead.check(pump, flow, value, limits.npshMargin(), "the pump inlet"));
-            } else {
-                cautions.add(Caution.note(
-                        "npsh-unknown",
-                        "the fluid model gives no vapour pressure, so NPSH available was not computed",
-                        "fluid model"));
-            }
+        return out;
+    }
+
+    /** NPSH available at the pump inlet, with its check, or empty (and a note) when the fluid gives no vapour pressure. */
+    private static OptionalDouble suctionHead(
+            PipeRun run,
+            PumpElement pump,
+            double flow,
+            double lossesBeforePump,
+            double elevationAtPump,
+            Set<Caution> cautions) {
+        FluidState fluid = run.fluid();
+        double rho = fluid.density();
+        DesignLimits limits = run.limits();
+        if (fluid.vapourPressure().isPresent()) {
+            // NPSHa = (p_abs/ρg + V²/2g) − p_v/ρg at the pump suction; energy grade minus elevation is the gauge
+            // pressure head plus the velocity head.
+            double energyAtPump = run.source().head(rho) - lossesBeforePump;
+            double value = SuctionHead.available(
+                    energyAtPump - elevationAtPump,
+                    run.atmosphericPressure(),
+                    fluid.vapourPressure().getAsDouble(),
+                    rho);
+            cautions.addAll(SuctionHead.check(pump, flow, value, limits.npshMargin(), "the pump inlet"));
+            return OptionalDouble.of(value);
+        } else {
+            cautions.add(Caution.note(
+                    "npsh-unknown",
+                    "the fluid model gives no vapour pressure, so NPSH available was not computed",
+                    "fluid model"));
         }
-        cautions.add(Caution.GENERAL_REVIEW);
-        // identical cautions of several elements are listed once, naming them; each SegmentResult keeps its own
-        return new RunResult(flow, results, profiles, totals, npsh, Caution.grouped(new ArrayList<>(cautions)));
+        return OptionalDouble.empty();
     }
 
     private static List<Caution> designCautions(Segment s, PipeFlow p, double flow, DesignLimits limits) {
