@@ -96,6 +96,12 @@ final class DesignPane extends VBox {
     private final TextField residual = field("design-residual-pressure", "e.g. 140 kPa");
     private final VBox fireOut = output("design-fire-output");
     private DesignStudies.Fire fire;
+    // pressure ranges
+    private final TextField demandRange = field("design-demand-range", "1:1");
+    private final TextField samples = field("design-samples", "200");
+    private final TextField seed = field("design-seed", "1");
+    private final VBox spreadOut = output("design-uncertainty-output");
+    private DesignStudies.Spread spread;
 
     DesignPane(NetworkEditor editor, Dialogs dialogs, Supplier<Path> startFolder) {
         super(6);
@@ -137,7 +143,8 @@ final class DesignPane extends VBox {
                         section("Demand cases and pressure limits", "design-cases", casesSection()),
                         section("Pipe sizing", "design-sizing", sizingSection()),
                         section("Valve balancing", "design-balancing", balancingSection()),
-                        section("Fire flow", "design-fire", fireSection()));
+                        section("Fire flow", "design-fire", fireSection()),
+                        section("Pressure ranges", "design-uncertainty", uncertaintySection()));
         studies.setExpandedPane(studies.getPanes().get(0));
         getChildren().addAll(intro, runLine, studies);
         editor.unitSystemProperty().addListener((o, a, b) -> redraw());
@@ -246,6 +253,20 @@ final class DesignPane extends VBox {
                 grid("At junction", fireNode, "Residual pressure", residual),
                 runButton("Find fire flow", "design-run-fire", this::runFire),
                 fireOut);
+    }
+
+    private VBox uncertaintySection() {
+        Label hint = new Label("Every junction's pressure and every pump's duty over the pipes' roughness ranges"
+                + " and a range of demand multipliers: the corners where they bound the answer (a tree from one"
+                + " source), otherwise a seeded random sample of that many solves.");
+        hint.setWrapText(true);
+        hint.getStyleClass().add("hint");
+        return new VBox(
+                6,
+                hint,
+                grid("Demand range (low:high)", demandRange, "Random samples", samples, "Seed", seed),
+                runButton("Find ranges", "design-run-uncertainty", this::runUncertainty),
+                spreadOut);
     }
 
     private void draftChanged() {
@@ -386,6 +407,13 @@ final class DesignPane extends VBox {
         start("Fire flow", (in, p) -> DesignStudies.fireFlow(in, node, pressure, p), r -> fire = r);
     }
 
+    void runUncertainty() {
+        String range = demandRange.getText();
+        String n = samples.getText();
+        String s = seed.getText();
+        start("Pressure ranges", (in, p) -> DesignStudies.uncertainty(in, range, n, s, p), r -> spread = r);
+    }
+
     /** The study last started (tests). */
     Task<?> running() {
         return running;
@@ -452,6 +480,9 @@ final class DesignPane extends VBox {
         }
         if (fire != null) {
             showFire(fire);
+        }
+        if (spread != null) {
+            showSpread(spread);
         }
     }
 
@@ -721,5 +752,58 @@ final class DesignPane extends VBox {
         out.add(l);
         out.addAll(cautionLines(r.result().cautions()));
         fireOut.getChildren().setAll(out);
+    }
+
+    List<List<String>> spreadRows(org.headway.network.design.NetworkUncertaintyResult u) {
+        List<List<String>> rows = new ArrayList<>();
+        for (var n : u.nodes()) {
+            if (n.fixed()) {
+                continue;
+            }
+            rows.add(List.of(
+                    n.id(),
+                    of(n.pressure().nominal(), QuantityKind.PRESSURE),
+                    of(n.pressure().low(), QuantityKind.PRESSURE),
+                    of(n.pressure().high(), QuantityKind.PRESSURE),
+                    n.lowAt(),
+                    n.highAt()));
+        }
+        return rows;
+    }
+
+    private void showSpread(DesignStudies.Spread z) {
+        var u = z.result();
+        List<javafx.scene.Node> out = new ArrayList<>();
+        out.add(line(
+                "design-uncertainty-summary",
+                "Demand ×" + Quantities.formatNumber(u.demandLow()) + " to ×" + Quantities.formatNumber(u.demandHigh())
+                        + ", " + u.solves() + " solves. How: " + u.reason()
+                        + (u.failedSolves() == 0 ? "" : ", " + u.failedSolves() + " FAILED") + "."));
+        out.add(table(
+                "design-uncertainty-table",
+                List.of("Junction", "Nominal", "Low", "High", "Low at", "High at"),
+                spreadRows(u)));
+        if (!u.pumps().isEmpty()) {
+            List<List<String>> pumps = new ArrayList<>();
+            for (var p : u.pumps()) {
+                pumps.add(List.of(
+                        p.id(),
+                        of(p.flow().nominal(), QuantityKind.VOLUMETRIC_FLOW),
+                        of(p.flow().low(), QuantityKind.VOLUMETRIC_FLOW),
+                        of(p.flow().high(), QuantityKind.VOLUMETRIC_FLOW),
+                        of(p.head().low(), QuantityKind.HEAD) + " – "
+                                + of(p.head().high(), QuantityKind.HEAD)));
+            }
+            out.add(table(
+                    "design-uncertainty-pumps",
+                    List.of("Pump", "Flow nominal", "Flow low", "Flow high", "Head range"),
+                    pumps));
+        }
+        out.addAll(cautionLines(u.cautions()));
+        spreadOut.getChildren().setAll(out);
+    }
+
+    DesignStudies.Spread spreadResult() {
+        return spread;
     }
 }

@@ -12,6 +12,7 @@ import org.headway.network.design.FireFlow;
 import org.headway.network.design.FireFlowResult;
 import org.headway.network.design.NetworkSizing;
 import org.headway.network.design.NetworkSizingResult;
+import org.headway.network.design.NetworkUncertainty;
 import org.headway.pipe.Catalog;
 import org.headway.project.Project;
 import org.headway.project.ProjectResolver;
@@ -52,6 +53,9 @@ final class DesignStudies {
 
     /** The fire-flow search's answer. */
     record Fire(FireFlowResult result, long nanos) {}
+
+    /** The pressure and pump-duty ranges of an uncertainty study, and how long it took. */
+    record Spread(org.headway.network.design.NetworkUncertaintyResult result, long nanos) {}
 
     private static NetworkStudy study(Input in, Project project, NetworkSolution.Progress progress) {
         progress.at(0, 3, "Reading the line list");
@@ -194,6 +198,58 @@ final class DesignStudies {
         FireFlowResult result = FireFlow.standard().search(network, node.strip(), p);
         progress.at(3, 3, "Found");
         return new Fire(result, System.nanoTime() - t0);
+    }
+
+    /**
+     * Every node's pressure range and every pump's duty range over the pipes' roughness ranges and a
+     * demand range, as {@code network --uncertainty --demand-range LOW:HIGH --samples N --seed S}
+     * finds them (corners where they bound, otherwise a seeded Monte Carlo).
+     *
+     * @param demandRange LOW:HIGH multipliers on every junction demand; blank for 1:1
+     * @param samples random samples when corners do not bound; blank for the engine's default
+     * @param seed the random seed; blank for the engine's default
+     */
+    static Spread uncertainty(
+            Input in, String demandRange, String samples, String seed, NetworkSolution.Progress progress) {
+        long t0 = System.nanoTime();
+        double low = 1;
+        double high = 1;
+        String range = blankToEmpty(demandRange);
+        if (!range.isEmpty()) {
+            String[] parts = range.split(":", -1);
+            try {
+                if (parts.length != 2) {
+                    throw new NumberFormatException();
+                }
+                low = org.headway.units.Decimals.parseDecimal(parts[0].strip());
+                high = org.headway.units.Decimals.parseDecimal(parts[1].strip());
+            } catch (RuntimeException e) {
+                throw new InputException(
+                        "demand range",
+                        "expected two plain multipliers LOW:HIGH, e.g. \"0.9:1.1\", got \"" + range + "\"");
+            }
+        }
+        NetworkUncertainty.Spec spec = NetworkUncertainty.Spec.of(low, high);
+        if (!blankToEmpty(samples).isEmpty()) {
+            try {
+                spec = spec.withSamples(Integer.parseInt(samples.strip()));
+            } catch (NumberFormatException e) {
+                throw new InputException("samples", "expected a whole number, got \"" + samples.strip() + "\"");
+            }
+        }
+        if (!blankToEmpty(seed).isEmpty()) {
+            try {
+                spec = spec.withSeed(Long.parseLong(seed.strip()));
+            } catch (NumberFormatException e) {
+                throw new InputException("seed", "expected a whole number, got \"" + seed.strip() + "\"");
+            }
+        }
+        NetworkStudy study = study(in, in.editor().project(in.draft()), progress);
+        checkCancel();
+        progress.at(2, 3, "Solving the corners or samples");
+        var result = NetworkUncertainty.run(study.network(), spec, NetworkSolver.standard());
+        progress.at(3, 3, "Ranges found");
+        return new Spread(result, System.nanoTime() - t0);
     }
 
     /**

@@ -174,6 +174,49 @@ class DesignPaneUiTest {
         assertNotNull(robot.lookup("#design-sizing").tryQuery().orElse(null));
     }
 
+    /**
+     * Pressure ranges through the window: typed multipliers, samples and seed give the engine's own
+     * study (NetworkUncertainty on the same network and spec) in the table, one row per junction,
+     * with the low and high pressures shown in the chosen units.
+     */
+    @Test
+    void pressureRangesShowTheEnginesBands(FxRobot robot) throws Exception {
+        DesignPane pane = open(robot);
+        robot.interact(() -> pane.expand("design-uncertainty"));
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.doubleClickOn("#design-demand-range").write("0.9:1.1");
+        robot.doubleClickOn("#design-samples").write("30");
+        robot.doubleClickOn("#design-seed").write("5");
+        robot.clickOn("#design-run-uncertainty");
+        awaitDone(pane);
+        DesignStudies.Spread shown = pane.spreadResult();
+        assertNotNull(shown, pane.statusLabel().getText());
+        assertEquals(0.9, shown.result().demandLow(), 0);
+        assertEquals(1.1, shown.result().demandHigh(), 0);
+        var engine = org.headway.network.design.NetworkUncertainty.run(
+                ProjectResolver.resolveNetwork(hillcrest(), Catalog.bundled(), fx.dir),
+                org.headway.network.design.NetworkUncertainty.Spec.of(0.9, 1.1)
+                        .withSamples(30)
+                        .withSeed(5),
+                NetworkSolver.standard());
+        TableView<?> table = robot.lookup("#design-uncertainty-table").queryAs(TableView.class);
+        long junctions = engine.nodes().stream().filter(n -> !n.fixed()).count();
+        assertEquals(junctions, table.getItems().size());
+        for (var n : engine.nodes()) {
+            var mine = shown.result().node(n.id()).orElseThrow();
+            assertEquals(
+                    n.pressure().low(),
+                    mine.pressure().low(),
+                    1e-9 * Math.abs(n.pressure().low()));
+            assertEquals(
+                    n.pressure().high(),
+                    mine.pressure().high(),
+                    1e-9 * Math.abs(n.pressure().high()));
+        }
+        String firstLow = ((List<?>) table.getItems().get(0)).get(2).toString();
+        assertTrue(firstLow.endsWith("kPa"), firstLow);
+    }
+
     @Test
     void balancingShowsTheEnginesKvAndAuthority(FxRobot robot) throws Exception {
         // The invented two-pipe circuit of NetworkDesignCommandTest: supply at 30 m, return at 18 m.

@@ -250,6 +250,67 @@ class DesignStudiesTest {
         assertEquals(before, editor.draft());
     }
 
+    /**
+     * Pressure ranges in the app equal {@code network --uncertainty} on the same line list with the
+     * same demand range, samples and seed: method, solve count and every junction's nominal, low and
+     * high pressure (the same engine and seed, so to 1e-12 relative), and the nominal pressure equals
+     * a plain solve's. Bad multipliers are refused naming the field.
+     */
+    @Test
+    void pressureRangesGiveTheCommandLinesRanges() throws Exception {
+        hillcrest();
+        editor.setCases(List.of());
+        DesignStudies.Spread app = DesignStudies.uncertainty(input(), "0.9:1.1", "40", "3", QUIET);
+        JsonNode u = cli(
+                        "network",
+                        "--nodes",
+                        EXAMPLES.resolve("hillcrest-nodes.csv").toString(),
+                        "--links",
+                        EXAMPLES.resolve("hillcrest-links.csv").toString(),
+                        "--uncertainty",
+                        "--demand-range",
+                        "0.9:1.1",
+                        "--samples",
+                        "40",
+                        "--seed",
+                        "3",
+                        "--format",
+                        "json")
+                .get("uncertainty");
+        assertEquals(u.get("method").asText(), app.result().method().id());
+        assertEquals(u.get("solves").asInt(), app.result().solves());
+        int compared = 0;
+        for (JsonNode n : u.get("nodes")) {
+            var mine = app.result().node(n.get("id").asText()).orElseThrow();
+            if (mine.fixed()) {
+                continue;
+            }
+            assertTrue(relative(
+                            n.get("pressure_nominal_pa").asDouble(),
+                            mine.pressure().nominal())
+                    <= 1e-12);
+            assertTrue(relative(
+                            n.get("pressure_low_pa").asDouble(), mine.pressure().low())
+                    <= 1e-12);
+            assertTrue(relative(
+                            n.get("pressure_high_pa").asDouble(),
+                            mine.pressure().high())
+                    <= 1e-12);
+            // Outside the study: demands ×0.9 to ×1.1 and rougher or smoother pipes spread the pressure
+            // around the nominal, never inverting the band.
+            assertTrue(mine.pressure().low() <= mine.pressure().nominal() + 1e-9);
+            assertTrue(mine.pressure().nominal() <= mine.pressure().high() + 1e-9);
+            compared++;
+        }
+        assertTrue(compared > 5, "junctions compared: " + compared);
+        InputException bad = org.junit.jupiter.api.Assertions.assertThrows(
+                InputException.class, () -> DesignStudies.uncertainty(input(), "0.9-1.1", "", "", QUIET));
+        assertTrue(bad.getMessage().startsWith("demand range"), bad.getMessage());
+        InputException badSamples = org.junit.jupiter.api.Assertions.assertThrows(
+                InputException.class, () -> DesignStudies.uncertainty(input(), "", "many", "", QUIET));
+        assertTrue(badSamples.getMessage().startsWith("samples"), badSamples.getMessage());
+    }
+
     /** The invented two-pipe circuit of {@code NetworkDesignCommandTest}: supply at 30 m, return at 18 m. */
     private void circuit() throws Exception {
         Path nodes = dir.resolve("circuit-nodes.csv");

@@ -177,6 +177,15 @@ class NetworkScreenshotTest {
         });
         awaitStudy(pane);
         snap(robot, "network-design-sizing");
+        robot.interact(() -> {
+            pane.expand("design-uncertainty");
+            robot.lookup("#design-demand-range")
+                    .queryAs(javafx.scene.control.TextField.class)
+                    .setText("0.9:1.1");
+            pane.runUncertainty();
+        });
+        awaitStudy(pane);
+        snap(robot, "network-design-ranges");
     }
 
     /** The grade-line tab on the invented demo network, with its pressure limits as a band. */
