@@ -214,7 +214,14 @@ final class NetworkWorkspaceView extends BorderPane {
         setBottom(new VBox(statusLine, problem));
 
         editor.draftProperty().addListener((o, a, b) -> refresh());
-        editor.solutionProperty().addListener((o, a, b) -> refresh());
+        editor.solutionProperty().addListener((o, a, b) -> {
+            if (b == null && a != null && !status.textProperty().isBound()) {
+                // Another network loaded or a new one begun: the last solve's summary no longer applies.
+                status.setText("Not solved yet.");
+                status.setTooltip(null);
+            }
+            refresh();
+        });
         editor.unitSystemProperty().addListener((o, a, b) -> refresh());
         editor.selectionProperty().addListener((o, a, b) -> selectionChanged(a, b));
         editor.messages().addListener((MapChangeListener<String, String>) c -> showMessages());
