@@ -163,57 +163,9 @@ public final class LineList {
     public static Project.NetworkSpec read(Path nodes, Path links, Catalog catalog, boolean hazenWilliams) {
         Table n = Table.read(nodes, NODE_COLUMNS);
         Table l = Table.read(links, LINK_COLUMNS);
-        return network(n, l, catalog, hazenWilliams, n.textLength + l.textLength >= PARALLEL_TEXT);
-    }
-
-    /** Text (in characters, both tables) from which the two tables' lines are read on two cores. */
-    static final long PARALLEL_TEXT = 1 << 20;
-
-    /**
-     * The nodes and links of two tables whose headers are read. A large list's two tables are read at
-     * once, the links on a second thread; the first error is the one an in-order reading would give
-     * (a node line's before any link line's).
-     */
-    private static Project.NetworkSpec network(
-            Table n, Table l, Catalog catalog, boolean hazenWilliams, boolean onTwoThreads) {
         Map<String, String> nodeIds = new java.util.HashMap<>();
-        if (!onTwoThreads) {
-            List<Project.NodeSpec> nodeList = nodes(n, nodeIds);
-            return new Project.NetworkSpec(nodeList, links(l, catalog, hazenWilliams, nodeIds));
-        }
-        java.util.concurrent.CompletableFuture<List<Project.LinkSpec>> linkLines =
-                java.util.concurrent.CompletableFuture.supplyAsync(
-                        () -> links(l, catalog, hazenWilliams, new java.util.HashMap<>()));
-        List<Project.NodeSpec> nodeList;
-        try {
-            nodeList = nodes(n, nodeIds);
-        } catch (RuntimeException | Error e) {
-            linkLines.cancel(true);
-            throw e;
-        }
-        List<Project.LinkSpec> linkList;
-        try {
-            linkList = linkLines.join();
-        } catch (java.util.concurrent.CompletionException e) {
-            if (e.getCause() instanceof RuntimeException re) {
-                throw re;
-            }
-            if (e.getCause() instanceof Error err) {
-                throw err;
-            }
-            throw e;
-        }
-        // The links name their ends with the nodes' own strings, as in order (one copy per id).
-        List<Project.LinkSpec> shared = new ArrayList<>(linkList.size());
-        for (Project.LinkSpec link : linkList) {
-            String from = nodeIds.getOrDefault(link.from(), link.from());
-            String to = nodeIds.getOrDefault(link.to(), link.to());
-            shared.add(
-                    from == link.from() && to == link.to()
-                            ? link
-                            : new Project.LinkSpec(from, to, link.element(), link.designFlow()));
-        }
-        return new Project.NetworkSpec(nodeList, shared);
+        List<Project.NodeSpec> nodeList = nodes(n, nodeIds);
+        return new Project.NetworkSpec(nodeList, links(l, catalog, hazenWilliams, nodeIds));
     }
 
     /** Reads from text (tests and fuzzing), naming the files as given. */
@@ -221,21 +173,9 @@ public final class LineList {
             String nodesName, String nodesText, String linksName, String linksText, Catalog c, boolean hazenWilliams) {
         Table n = Table.parse(nodesName, nodesText, NODE_COLUMNS);
         Table l = Table.parse(linksName, linksText, LINK_COLUMNS);
-        return network(n, l, c, hazenWilliams, n.textLength + l.textLength >= PARALLEL_TEXT);
-    }
-
-    /** As {@link #parse}, the two tables' lines read in order or on two threads as asked (tests). */
-    static Project.NetworkSpec parse(
-            String nodesName,
-            String nodesText,
-            String linksName,
-            String linksText,
-            Catalog c,
-            boolean hazenWilliams,
-            boolean onTwoThreads) {
-        Table n = Table.parse(nodesName, nodesText, NODE_COLUMNS);
-        Table l = Table.parse(linksName, linksText, LINK_COLUMNS);
-        return network(n, l, c, hazenWilliams, onTwoThreads);
+        Map<String, String> nodeIds = new java.util.HashMap<>();
+        List<Project.NodeSpec> nodeList = nodes(n, nodeIds);
+        return new Project.NetworkSpec(nodeList, links(l, c, hazenWilliams, nodeIds));
     }
 
     /**
@@ -706,7 +646,6 @@ public final class LineList {
                 text = text.substring(1);
             }
             Table t = new Table(name);
-            t.textLength = text.length();
             CsvText reader = CsvText.reader(text);
             CsvText.Line first = t.next(reader);
             if (first == null) {
@@ -719,9 +658,6 @@ public final class LineList {
             t.reader = reader;
             return t;
         }
-
-        /** Characters of the table's text. */
-        long textLength;
 
         /** The reader of the lines after the header; null once {@link #rows} has been asked for. */
         private CsvText reader;

@@ -218,27 +218,30 @@ public final class ProjectResolver {
                 nodes.add(node);
             }
         }
-        // Each link resolves on its own (the catalog is read only), so a large list's links resolve on
-        // every core; their problems are gathered in link order, as one at a time would give them.
-        int linkCount = spec.links().size();
-        Object[] resolved = new Object[linkCount];
-        java.util.function.IntConsumer resolveOne =
-                i -> resolved[i] = link(spec.links().get(i), i, fluid, hazenWilliamsRun, density);
-        if (linkCount >= PARALLEL_LINKS) {
-            java.util.stream.IntStream.range(0, linkCount).parallel().forEach(resolveOne);
-        } else {
-            for (int i = 0; i < linkCount; i++) {
-                resolveOne.accept(i);
+        List<org.headway.network.Link> links = new ArrayList<>();
+        for (int i = 0; i < spec.links().size(); i++) {
+            Project.LinkSpec l = spec.links().get(i);
+            String path = "links[" + i + "] (" + l.element().id() + ")";
+            Element e = null;
+            if (l.element() instanceof Project.SegmentSpec seg) {
+                e = attempt(path, () -> segment(seg, fluid, hazenWilliamsRun, null, 0));
+            } else if (l.element() instanceof Project.PumpSpec ps) {
+                e = attempt(path, () -> pumpElement(ps, density));
+            } else if (l.element() instanceof Project.DeviceSpec d) {
+                e = attempt(path, () -> device(d, fluid));
             }
-        }
-        List<org.headway.network.Link> links = new ArrayList<>(linkCount);
-        for (Object r : resolved) {
-            if (r instanceof org.headway.network.Link link) {
-                links.add(link);
-            } else if (r != null) {
-                Problem problem = (Problem) r;
-                problems.add(problem.text());
-                places.add(problem.place());
+            if (e != null) {
+                Element element = e;
+                org.headway.network.Link link = attempt(
+                        path,
+                        () -> new org.headway.network.Link(
+                                element,
+                                l.from(),
+                                l.to(),
+                                l.designFlow().isEmpty() ? Double.NaN : flow(l.designFlow(), density, "designFlow")));
+                if (link != null) {
+                    links.add(link);
+                }
             }
         }
         if (!problems.isEmpty()) {
@@ -246,37 +249,6 @@ public final class ProjectResolver {
         }
         return new org.headway.network.Network(
                 p.title(), new org.headway.system.FlowContext(fluid, friction), nodes, links, site);
-    }
-
-    /** Links from which a network's links are resolved on every core. */
-    static final int PARALLEL_LINKS = 20_000;
-
-    /** A problem found without the shared list: its text and place, as {@link #attempt} records them. */
-    private record Problem(String text, String place) {}
-
-    /** One link of a network, or the problem that stopped it (as {@link #attempt} would record it). */
-    private Object link(Project.LinkSpec l, int i, FluidState fluid, boolean hazenWilliamsRun, double density) {
-        String path = "links[" + i + "] (" + l.element().id() + ")";
-        try {
-            Element e;
-            if (l.element() instanceof Project.SegmentSpec seg) {
-                e = segment(seg, fluid, hazenWilliamsRun, null, 0);
-            } else if (l.element() instanceof Project.PumpSpec ps) {
-                e = pumpElement(ps, density);
-            } else if (l.element() instanceof Project.DeviceSpec d) {
-                e = device(d, fluid);
-            } else {
-                return null;
-            }
-            return new org.headway.network.Link(
-                    e,
-                    l.from(),
-                    l.to(),
-                    l.designFlow().isEmpty() ? Double.NaN : flow(l.designFlow(), density, "designFlow"));
-        } catch (InputException ex) {
-            String where = path.isEmpty() ? ex.where() : (ex.where().isEmpty() ? path : joinPath(path, ex.where()));
-            return new Problem(where.isEmpty() ? ex.problem() : where + ": " + ex.problem(), where);
-        }
     }
 
     private static org.headway.network.Node node(Project.NodeSpec n, double density) {
@@ -1080,12 +1052,12 @@ public final class ProjectResolver {
         return new PressureLimits(min, max);
     }
 
-    /** "NPS 4" for the tables that use nominal pipe size, the bare nominal size otherwise. */
     /** A catalog size as sizing names its candidates, e.g. {@code NPS 2-1/2 Sch 40}. */
     public static String candidateLabel(PipeSize size) {
         return sizeLabel(size) + (size.schedule().isEmpty() ? "" : " " + scheduleLabel(size.schedule()));
     }
 
+    /** "NPS 4" for the tables that use nominal pipe size, the bare nominal size otherwise. */
     static String sizeLabel(PipeSize size) {
         boolean nps = size.table().startsWith("asme-b36") || size.table().equals("astm-d1785");
         return (nps ? "NPS " : "") + size.nominal();
