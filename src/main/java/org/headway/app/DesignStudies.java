@@ -212,24 +212,8 @@ final class DesignStudies {
     static Spread uncertainty(
             Input in, String demandRange, String samples, String seed, NetworkSolution.Progress progress) {
         long t0 = System.nanoTime();
-        double low = 1;
-        double high = 1;
-        String range = blankToEmpty(demandRange);
-        if (!range.isEmpty()) {
-            String[] parts = range.split(":", -1);
-            try {
-                if (parts.length != 2) {
-                    throw new NumberFormatException();
-                }
-                low = org.headway.units.Decimals.parseDecimal(parts[0].strip());
-                high = org.headway.units.Decimals.parseDecimal(parts[1].strip());
-            } catch (RuntimeException e) {
-                throw new InputException(
-                        "demand range",
-                        "expected two plain multipliers LOW:HIGH, e.g. \"0.9:1.1\", got \"" + range + "\"");
-            }
-        }
-        NetworkUncertainty.Spec spec = NetworkUncertainty.Spec.of(low, high);
+        NetworkUncertainty.Spec spec = NetworkUncertainty.Spec.ofDemandRange(
+                blankToEmpty(demandRange).isEmpty() ? null : demandRange, "demand range");
         if (!blankToEmpty(samples).isEmpty()) {
             try {
                 spec = spec.withSamples(Integer.parseInt(samples.strip()));

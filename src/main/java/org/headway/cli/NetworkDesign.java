@@ -48,25 +48,7 @@ record NetworkDesign(
      * 0.9:1.1}); null gives 1:1 (roughness ranges only).
      */
     static NetworkUncertainty.Spec uncertaintySpec(String demandRange, Integer samples, Long seed) {
-        double low = 1;
-        double high = 1;
-        if (demandRange != null) {
-            String[] parts = demandRange.strip().split(":", -1);
-            if (parts.length != 2) {
-                throw new InputException(
-                        "--demand-range",
-                        "expected LOW:HIGH multipliers on the demands, e.g. \"0.9:1.1\", got \"" + demandRange + "\"");
-            }
-            try {
-                low = org.headway.units.Decimals.parseDecimal(parts[0].strip());
-                high = org.headway.units.Decimals.parseDecimal(parts[1].strip());
-            } catch (RuntimeException e) {
-                throw new InputException(
-                        "--demand-range",
-                        "expected two plain numbers LOW:HIGH, e.g. \"0.9:1.1\", got \"" + demandRange + "\"");
-            }
-        }
-        NetworkUncertainty.Spec spec = NetworkUncertainty.Spec.of(low, high);
+        NetworkUncertainty.Spec spec = NetworkUncertainty.Spec.ofDemandRange(demandRange, "--demand-range");
         if (samples != null) {
             spec = spec.withSamples(samples);
         }

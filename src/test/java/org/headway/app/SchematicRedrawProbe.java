@@ -2,7 +2,6 @@ package org.headway.app;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Random;
@@ -154,15 +153,6 @@ public final class SchematicRedrawProbe extends Application {
     }
 
     private static String stats(List<Double> values) {
-        double[] v = values.stream().mapToDouble(Double::doubleValue).sorted().toArray();
-        double mean = Arrays.stream(v).average().orElse(Double.NaN);
-        return String.format(
-                Locale.ROOT,
-                "n=%d mean %.1f ms, median %.1f ms, p95 %.1f ms, max %.1f ms",
-                v.length,
-                mean,
-                v[v.length / 2],
-                v[(int) Math.floor(0.95 * (v.length - 1))],
-                v[v.length - 1]);
+        return org.headway.app.tools.FrictionChartRedrawProbe.stats(values);
     }
 }

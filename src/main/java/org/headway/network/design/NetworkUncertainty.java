@@ -160,6 +160,33 @@ public final class NetworkUncertainty {
             return new Spec(demandLow, demandHigh, DEFAULT_SAMPLES, DEFAULT_SEED);
         }
 
+        /**
+         * A demand range typed as {@code LOW:HIGH} multipliers on every junction demand (e.g. {@code
+         * 0.9:1.1}), default samples and seed; null gives 1:1 (roughness ranges only).
+         *
+         * @param where the field or option the text came from, named in any error
+         */
+        public static Spec ofDemandRange(String text, String where) {
+            if (text == null) {
+                return roughnessOnly();
+            }
+            String[] parts = text.strip().split(":", -1);
+            if (parts.length != 2) {
+                throw new InputException(
+                        where, "expected LOW:HIGH multipliers on the demands, e.g. \"0.9:1.1\", got \"" + text + "\"");
+            }
+            double low;
+            double high;
+            try {
+                low = org.headway.units.Decimals.parseDecimal(parts[0].strip());
+                high = org.headway.units.Decimals.parseDecimal(parts[1].strip());
+            } catch (RuntimeException e) {
+                throw new InputException(
+                        where, "expected two plain numbers LOW:HIGH, e.g. \"0.9:1.1\", got \"" + text + "\"");
+            }
+            return of(low, high);
+        }
+
         /** Roughness only (demands as given), default samples and seed. */
         public static Spec roughnessOnly() {
             return of(1, 1);

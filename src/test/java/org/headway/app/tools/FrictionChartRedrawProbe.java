@@ -116,7 +116,8 @@ public final class FrictionChartRedrawProbe extends Application {
         System.out.println("frame interval while changing every frame: " + stats(frameMs));
     }
 
-    private static String stats(List<Double> values) {
+    /** n, mean, median, p95 and max of timings in ms (shared with the schematic probe). */
+    public static String stats(List<Double> values) {
         double[] v = values.stream().mapToDouble(Double::doubleValue).sorted().toArray();
         double mean = Arrays.stream(v).average().orElse(Double.NaN);
         return String.format(
