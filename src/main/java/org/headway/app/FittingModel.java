@@ -112,6 +112,9 @@ public final class FittingModel {
     private final StringProperty problem = new SimpleStringProperty("");
     private final StringProperty status = new SimpleStringProperty("Import a CSV of your measurements to fit.");
     private final ObjectProperty<Path> savedFit = new SimpleObjectProperty<>();
+    /** Whether the points and the chosen fit go on the friction chart (when x is Re and y is f). */
+    private final BooleanProperty onFrictionChart = new SimpleBooleanProperty(true);
+
     private double[] fittedX;
     private FitRow savedRow;
 
@@ -167,6 +170,10 @@ public final class FittingModel {
     }
 
     /** The fit the engineer chose (the best one after a run). */
+    public BooleanProperty onFrictionChartProperty() {
+        return onFrictionChart;
+    }
+
     public ObjectProperty<FitRow> selectedProperty() {
         return selected;
     }

@@ -154,16 +154,8 @@ final class FittingView extends BorderPane {
         use.setOnAction(e -> model.useInPipeRun());
         CheckBox onChart = new CheckBox("Show points and fit on the friction chart");
         onChart.setId("fit-on-chart");
-        onChart.setSelected(true);
         onChart.setTooltip(new Tooltip("When x is Re and y is f"));
-        Runnable overlay = () -> results.setFrictionOverlay(
-                "fitting", onChart.isSelected() ? model.frictionOverlay() : FrictionOverlay.NONE);
-        onChart.selectedProperty().addListener((o, a, b) -> overlay.run());
-        model.selectedProperty().addListener((o, a, b) -> overlay.run());
-        results.projectFrictionProperty().addListener((o, a, b) -> overlay.run());
-        model.tableProperty().addListener((o, a, b) -> overlay.run());
-        model.responseColumnProperty().addListener((o, a, b) -> overlay.run());
-        model.explanatoryColumnProperty().addListener((o, a, b) -> overlay.run());
+        onChart.selectedProperty().bindBidirectional(model.onFrictionChartProperty());
         Label status = new Label();
         status.setId("fit-status");
         status.getStyleClass().add("status");
@@ -176,10 +168,17 @@ final class FittingView extends BorderPane {
         cautions.setId("fit-cautions");
         cautions.getStyleClass().add("hint");
         cautions.setWrapText(true);
-        model.selectedProperty().addListener((o, a, b) -> {
+        Runnable showChosen = () -> {
+            FittingModel.FitRow b = model.selectedProperty().get();
             chosen.setText(b == null ? "" : "Chosen: " + b.form() + ",  " + b.model());
             cautions.setText(String.join("\n", model.selectedCautions()));
-        });
+        };
+        model.selectedProperty().addListener((o, a, b) -> showChosen.run());
+        // The view is built the first time its tab is shown (decision 0056): show what is chosen already.
+        showChosen.run();
+        if (model.selectedProperty().get() != null) {
+            table.getSelectionModel().select(model.selectedProperty().get());
+        }
         HBox actions = new HBox(8, save, use, onChart);
         actions.setAlignment(Pos.CENTER_LEFT);
         for (Button b : new Button[] {save, use}) {
@@ -188,6 +187,21 @@ final class FittingView extends BorderPane {
         VBox bottom = new VBox(4, chosen, cautions, actions, status);
         bottom.setPadding(new Insets(6, 12, 8, 12));
         setBottom(bottom);
+    }
+
+    /**
+     * Keeps the fitting's points and chosen fit on the friction chart while "on the chart" is ticked.
+     * Wired when the window is built, so the chart carries them whether or not this view has been shown.
+     */
+    static void feedFrictionChart(FittingModel model, ResultsModel results) {
+        Runnable overlay = () -> results.setFrictionOverlay(
+                "fitting", model.onFrictionChartProperty().get() ? model.frictionOverlay() : FrictionOverlay.NONE);
+        model.onFrictionChartProperty().addListener((o, a, b) -> overlay.run());
+        model.selectedProperty().addListener((o, a, b) -> overlay.run());
+        results.projectFrictionProperty().addListener((o, a, b) -> overlay.run());
+        model.tableProperty().addListener((o, a, b) -> overlay.run());
+        model.responseColumnProperty().addListener((o, a, b) -> overlay.run());
+        model.explanatoryColumnProperty().addListener((o, a, b) -> overlay.run());
     }
 
     private static Region spacer() {

@@ -57,9 +57,9 @@ public final class MainWindow {
     private final Lazy<ChartView> frictionView;
     private final FittingModel fitting;
     private final PiGroupsModel piGroups;
-    private final FittingView fittingView;
+    private final Lazy<FittingView> fittingView;
     private final RigDataModel rigData;
-    private final RigDataView rigView;
+    private final Lazy<RigDataView> rigView;
     private final Label status = new Label();
     private final ProgressBar progress = new ProgressBar();
     private final Button cancel = new Button("Cancel export");
@@ -96,9 +96,13 @@ public final class MainWindow {
                 editor::startFolder,
                 "friction-chart"));
         fitting = new FittingModel(editor, dialogs);
-        fittingView = new FittingView(fitting, results, dialogs, editor::startFolder);
+        // The fitting and rig-data views too are built when their tab is first shown; what they put on the
+        // friction chart is wired to their models now, so the chart is the same either way (decision 0056).
+        FittingView.feedFrictionChart(fitting, results);
+        fittingView = new Lazy<>(() -> new FittingView(fitting, results, dialogs, editor::startFolder));
         rigData = new RigDataModel(dialogs, editor.unitSystemProperty());
-        rigView = new RigDataView(rigData, results, editor::startFolder);
+        RigDataView.feedFrictionChart(rigData, results);
+        rigView = new Lazy<>(() -> new RigDataView(rigData, results, editor::startFolder));
         piGroups = new PiGroupsModel();
         Lazy<javafx.scene.Node> piScroll = new Lazy<>(() -> {
             ScrollPane scroll = new ScrollPane(new PiGroupsView(piGroups));
@@ -111,8 +115,8 @@ public final class MainWindow {
                         lazyTab(TABS.get(1), grades),
                         lazyTab(TABS.get(2), systemView),
                         lazyTab(TABS.get(3), frictionView),
-                        tab(TABS.get(4), rigView),
-                        tab(TABS.get(5), fittingView),
+                        lazyTab(TABS.get(4), rigView),
+                        lazyTab(TABS.get(5), fittingView),
                         lazyTab(TABS.get(6), piScroll));
         ((ScrollPane) tabs.getTabs().get(0).getContent()).setFitToWidth(true);
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
@@ -300,7 +304,7 @@ public final class MainWindow {
     }
 
     FittingView fittingView() {
-        return fittingView;
+        return fittingView.get();
     }
 
     RigDataModel rigData() {
@@ -308,7 +312,7 @@ public final class MainWindow {
     }
 
     RigDataView rigView() {
-        return rigView;
+        return rigView.get();
     }
 
     PiGroupsModel piGroups() {
@@ -374,12 +378,12 @@ public final class MainWindow {
         MenuItem saveAs = item("Save as…", "Shortcut+Shift+S", editor::saveAs);
         MenuItem openRig = item("Open rig data…", "Shortcut+R", () -> {
             tabs.getSelectionModel().select(TABS.indexOf("Rig data"));
-            rigData.chooseRigFile(editor.startFolder()).ifPresent(rigView::analyseInBackground);
+            rigData.chooseRigFile(editor.startFolder()).ifPresent(f -> rigView().analyseInBackground(f));
         });
         MenuItem exportSheet = item("Export head-loss sheet…", "Shortcut+E", this::exportSheet);
         MenuItem importData = item("Import measurements (CSV)…", "Shortcut+I", () -> {
             tabs.getSelectionModel().select(TABS.indexOf("Rig data fitting"));
-            fitting.chooseImportFile().ifPresent(fittingView::importInBackground);
+            fitting.chooseImportFile().ifPresent(f -> fittingView().importInBackground(f));
         });
         MenuItem quit = item("Close window", "Shortcut+W", () -> {
             if (editor.confirmDiscard() && confirmDiscardNetwork() && root.getScene() != null) {

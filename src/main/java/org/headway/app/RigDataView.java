@@ -80,7 +80,7 @@ final class RigDataView extends VBox {
         values.setHgrow(Priority.ALWAYS);
         values.setMinWidth(0);
         summary.getColumnConstraints().addAll(labels, values);
-        model.summary().addListener((javafx.collections.ListChangeListener<RigDataModel.SummaryRow>) c -> {
+        Runnable fillSummary = () -> {
             summary.getChildren().clear();
             int row = 0;
             for (RigDataModel.SummaryRow s : model.summary()) {
@@ -89,7 +89,11 @@ final class RigDataView extends VBox {
                 v.setWrapText(true);
                 summary.addRow(row++, new Label(s.label()), v);
             }
-        });
+        };
+        model.summary()
+                .addListener((javafx.collections.ListChangeListener<RigDataModel.SummaryRow>) c -> fillSummary.run());
+        // The view is built the first time its tab is shown (decision 0056): show a summary made before.
+        fillSummary.run();
         Label roughness = new Label();
         roughness.setId("rig-roughness");
         roughness.getStyleClass().add("subheading");
@@ -133,8 +137,15 @@ final class RigDataView extends VBox {
         status.getStyleClass().add("status");
         status.textProperty().bind(model.statusProperty());
 
-        model.reportProperty().addListener((o, a, b) -> results.setFrictionOverlay("rig", model.frictionOverlay()));
         getChildren().addAll(heading, bar, problem, summary, roughness, table, cautions, status);
+    }
+
+    /**
+     * Puts the analysed rig points on the friction chart. Wired when the window is built, so the chart
+     * carries them whether or not this view has been shown.
+     */
+    static void feedFrictionChart(RigDataModel model, ResultsModel results) {
+        model.reportProperty().addListener((o, a, b) -> results.setFrictionOverlay("rig", model.frictionOverlay()));
     }
 
     /** Analyses the rig file in a background task with cancel. */

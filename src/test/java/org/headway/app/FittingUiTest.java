@@ -93,6 +93,38 @@ class FittingUiTest {
         WaitForAsyncUtils.waitForFxEvents();
     }
 
+    /**
+     * The fitting and rig-data views are built the first time their tab is shown (decision 0056), but
+     * what the fitting puts on the friction chart must not depend on that: data imported before the
+     * tab was ever shown reach the chart, and the view built later shows the same state.
+     */
+    @Test
+    void dataImportedBeforeTheTabIsShownReachTheFrictionChart(FxRobot robot) throws Exception {
+        fx.awaitResults();
+        assertEquals(null, fx.window.tabs().getTabs().get(4).getContent(), "rig-data view built at start");
+        assertEquals(null, fx.window.tabs().getTabs().get(5).getContent(), "fitting view built at start");
+        Path csv = rigCsv(fx.dir);
+        boolean[] read = new boolean[1];
+        robot.interact(() -> read[0] = fx.window.fitting().importCsv(csv));
+        assertTrue(read[0], fx.window.fitting().problemProperty().get());
+        // The 14 invented (Re, f) points, all positive, are on the chart as points.
+        assertEquals(14, fx.results.frictionOverlay().rigPoints().size());
+        robot.interact(() -> fx.window.fitting().onFrictionChartProperty().set(false));
+        assertEquals(0, fx.results.frictionOverlay().rigPoints().size());
+        assertEquals(null, fx.window.tabs().getTabs().get(5).getContent(), "the model alone built the view");
+
+        robot.interact(() -> fx.window.tabs().getSelectionModel().select(5));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals(
+                "rig-readings.csv — 14 rows",
+                robot.lookup("#fit-file").queryAs(Label.class).getText());
+        javafx.scene.control.CheckBox onChart =
+                robot.lookup("#fit-on-chart").queryAs(javafx.scene.control.CheckBox.class);
+        assertEquals(false, onChart.isSelected());
+        robot.interact(() -> onChart.setSelected(true));
+        assertEquals(14, fx.results.frictionOverlay().rigPoints().size());
+    }
+
     @Test
     void importedRigDataFittedToAPowerLawGiveTheCommandLinesParameters(FxRobot robot) throws Exception {
         fx.awaitResults();
