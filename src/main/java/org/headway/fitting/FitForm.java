@@ -40,6 +40,42 @@ public sealed interface FitForm
     /** The form in words with its equation. */
     String description();
 
+    /**
+     * Calls the visitor's method for this form. Every form implements it and a visitor has one
+     * method per form, so code that treats each form in its own way cannot leave one out unnoticed:
+     * a new form does not compile until every visitor handles it.
+     *
+     * @param visitor what to do for each form
+     * @param <R> what the visitor returns
+     * @return the visitor's result for this form
+     */
+    <R> R accept(Visitor<R> visitor);
+
+    /**
+     * One method per form, for {@link #accept}.
+     *
+     * @param <R> what each method returns
+     */
+    interface Visitor<R> {
+        R constant(Constant form);
+
+        R linear(Linear form);
+
+        R throughOrigin(ThroughOrigin form);
+
+        R logarithmic(Logarithmic form);
+
+        R power(Power form);
+
+        R exponential(Exponential form);
+
+        R polynomial(Polynomial form);
+
+        R powerProduct(PowerProduct form);
+
+        R userExpression(UserExpression form);
+    }
+
     /** y = a. */
     record Constant() implements FitForm {
         @Override
@@ -50,6 +86,11 @@ public sealed interface FitForm
         @Override
         public String description() {
             return "constant: y = a (weighted mean)";
+        }
+
+        @Override
+        public <R> R accept(Visitor<R> visitor) {
+            return visitor.constant(this);
         }
     }
 
@@ -64,6 +105,11 @@ public sealed interface FitForm
         public String description() {
             return "linear: y = a + b·x (one slope per column)";
         }
+
+        @Override
+        public <R> R accept(Visitor<R> visitor) {
+            return visitor.linear(this);
+        }
     }
 
     /** y = Σ bᵢxᵢ. */
@@ -77,6 +123,11 @@ public sealed interface FitForm
         public String description() {
             return "linear through the origin: y = b·x (one slope per column)";
         }
+
+        @Override
+        public <R> R accept(Visitor<R> visitor) {
+            return visitor.throughOrigin(this);
+        }
     }
 
     /** y = a + b ln x. */
@@ -89,6 +140,11 @@ public sealed interface FitForm
         @Override
         public String description() {
             return "logarithmic: y = a + b·ln x";
+        }
+
+        @Override
+        public <R> R accept(Visitor<R> visitor) {
+            return visitor.logarithmic(this);
         }
     }
 
@@ -110,6 +166,11 @@ public sealed interface FitForm
                     ? "power, fitted in log space: ln y = ln a + b·ln x"
                     : "power: y = a·x^b (nonlinear least squares)";
         }
+
+        @Override
+        public <R> R accept(Visitor<R> visitor) {
+            return visitor.power(this);
+        }
     }
 
     /** y = a·exp(b x). */
@@ -122,6 +183,11 @@ public sealed interface FitForm
         @Override
         public String description() {
             return "exponential: y = a·exp(b·x)";
+        }
+
+        @Override
+        public <R> R accept(Visitor<R> visitor) {
+            return visitor.exponential(this);
         }
     }
 
@@ -146,6 +212,11 @@ public sealed interface FitForm
         public String description() {
             return "polynomial of degree " + degree + ": y = c0 + c1·x + … + c" + degree + "·x^" + degree;
         }
+
+        @Override
+        public <R> R accept(Visitor<R> visitor) {
+            return visitor.polynomial(this);
+        }
     }
 
     /** y = C·Π xᵢ^nᵢ, the usual form of a correlation between dimensionless groups. */
@@ -158,6 +229,11 @@ public sealed interface FitForm
         @Override
         public String description() {
             return "power product: y = C·x1^n1·x2^n2·…";
+        }
+
+        @Override
+        public <R> R accept(Visitor<R> visitor) {
+            return visitor.powerProduct(this);
         }
     }
 
@@ -184,6 +260,11 @@ public sealed interface FitForm
         @Override
         public String description() {
             return "user expression: y = " + expression;
+        }
+
+        @Override
+        public <R> R accept(Visitor<R> visitor) {
+            return visitor.userExpression(this);
         }
     }
 }

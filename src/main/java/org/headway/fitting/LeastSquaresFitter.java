@@ -135,9 +135,9 @@ public final class LeastSquaresFitter {
         if (form instanceof FitForm.Power power && power.logSpace()) {
             return fitPowerInLogSpace(data, form);
         }
-        Plan plan = plan(data, form);
-        checkCount(data, plan.parameterNames.size());
-        if (plan.design != null) {
+        FitPlan plan = FitPlanner.plan(data, form);
+        checkCount(data, plan.parameterNames().size());
+        if (plan.design() != null) {
             return fitLinear(data, form, plan);
         }
         return fitNonlinear(data, form, plan);
@@ -165,166 +165,6 @@ public final class LeastSquaresFitter {
         return new FitComparison(fits, skipped);
     }
 
-    // ---------------------------------------------------------------- plans
-
-    /** What to solve: a design matrix (linear) or an expression with starting values. */
-    private record Plan(
-            List<String> parameterNames, String expression, double[][] design, double[] start, boolean centred) {}
-
-    private Plan plan(Observations data, FitForm form) {
-        List<String> vars = data.variableNames();
-        double[][] x = data.columns();
-        int n = data.size();
-        double[] ones = new double[n];
-        java.util.Arrays.fill(ones, 1.0);
-        if (form instanceof FitForm.Constant) {
-            return planConstant(data, form, vars, x, n, ones);
-        }
-        if (form instanceof FitForm.Linear || form instanceof FitForm.ThroughOrigin) {
-            return planLinear(data, form, vars, x, n, ones);
-        }
-        if (form instanceof FitForm.Logarithmic) {
-            return planLogarithmic(data, form, vars, x, n, ones);
-        }
-        if (form instanceof FitForm.Polynomial poly) {
-            return planPolynomial(data, poly, vars, x, n, ones);
-        }
-        if (form instanceof FitForm.Power) {
-            return planPower(data, form, vars, x, n, ones);
-        }
-        if (form instanceof FitForm.PowerProduct) {
-            return planPowerProduct(data, form, vars, x, n, ones);
-        }
-        if (form instanceof FitForm.Exponential) {
-            return planExponential(data, form, vars, x, n, ones);
-        }
-        return planUserExpression((FitForm.UserExpression) form);
-    }
-
-    private static Plan planUserExpression(FitForm.UserExpression user) {
-        List<String> names = List.copyOf(user.start().keySet());
-        double[] start =
-                user.start().values().stream().mapToDouble(Double::doubleValue).toArray();
-        return new Plan(names, user.expression(), null, start, true);
-    }
-
-    private Plan planConstant(Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
-        String a = unique("a", vars);
-        return new Plan(List.of(a), a, new double[][] {ones}, null, true);
-    }
-
-    private Plan planLinear(Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
-        boolean intercept = form instanceof FitForm.Linear;
-        requireColumns(vars, 1, Integer.MAX_VALUE, form);
-        List<String> names = new ArrayList<>();
-        List<double[]> design = new ArrayList<>();
-        StringBuilder text = new StringBuilder();
-        if (intercept) {
-            names.add(unique("a", vars));
-            design.add(ones);
-            text.append(names.get(0));
-        }
-        for (int v = 0; v < vars.size(); v++) {
-            String b = unique(vars.size() == 1 ? "b" : "b" + (v + 1), vars);
-            names.add(b);
-            design.add(x[v]);
-            text.append(text.length() == 0 ? "" : " + ").append(b).append('*').append(vars.get(v));
-        }
-        return new Plan(names, text.toString(), design.toArray(new double[0][]), null, intercept);
-    }
-
-    private Plan planLogarithmic(
-            Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
-        requireColumns(vars, 1, 1, form);
-        requirePositive(vars.get(0), x[0], "the logarithm needs positive values");
-        double[] lx = new double[n];
-        for (int i = 0; i < n; i++) {
-            lx[i] = Math.log(x[0][i]);
-        }
-        String a = unique("a", vars);
-        String b = unique("b", vars);
-        return new Plan(
-                List.of(a, b), a + " + " + b + "*ln(" + vars.get(0) + ")", new double[][] {ones, lx}, null, true);
-    }
-
-    private Plan planPolynomial(
-            Observations data, FitForm.Polynomial poly, List<String> vars, double[][] x, int n, double[] ones) {
-        requireColumns(vars, 1, 1, poly);
-        List<String> names = new ArrayList<>();
-        double[][] design = new double[poly.degree() + 1][];
-        StringBuilder text = new StringBuilder();
-        for (int d = 0; d <= poly.degree(); d++) {
-            String c = unique("c" + d, vars);
-            names.add(c);
-            double[] col = new double[n];
-            for (int i = 0; i < n; i++) {
-                col[i] = d == 0 ? 1.0 : Math.pow(x[0][i], d);
-            }
-            design[d] = col;
-            text.append(d == 0 ? c : " + " + c + "*" + vars.get(0) + (d == 1 ? "" : "^" + d));
-        }
-        return new Plan(names, text.toString(), design, null, true);
-    }
-
-    private Plan planPower(Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
-        requireColumns(vars, 1, 1, form);
-        requirePositive(vars.get(0), x[0], "a power law x^b needs positive x");
-        String a = unique("a", vars);
-        String b = unique("b", vars);
-        return new Plan(List.of(a, b), a + "*" + vars.get(0) + "^" + b, null, logLinearStart(data, x, 1.0), true);
-    }
-
-    private Plan planPowerProduct(
-            Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
-        requireColumns(vars, 1, Integer.MAX_VALUE, form);
-        List<String> names = new ArrayList<>();
-        String c = unique("C", vars);
-        names.add(c);
-        StringBuilder text = new StringBuilder(c);
-        for (int v = 0; v < vars.size(); v++) {
-            requirePositive(vars.get(v), x[v], "a power product needs positive values");
-            String e = unique("n_" + vars.get(v), vars);
-            names.add(e);
-            text.append('*').append(vars.get(v)).append('^').append(e);
-        }
-        return new Plan(names, text.toString(), null, logLinearStart(data, x, 1.0), true);
-    }
-
-    private Plan planExponential(
-            Observations data, FitForm form, List<String> vars, double[][] x, int n, double[] ones) {
-        requireColumns(vars, 1, 1, form);
-        String a = unique("a", vars);
-        String b = unique("b", vars);
-        return new Plan(
-                List.of(a, b), a + "*exp(" + b + "*" + vars.get(0) + ")", null, exponentialStart(data, x[0]), true);
-    }
-
-    private static String unique(String name, List<String> taken) {
-        String candidate = name;
-        while (taken.contains(candidate)) {
-            candidate = candidate + "_";
-        }
-        return candidate;
-    }
-
-    private static void requireColumns(List<String> vars, int min, int max, FitForm form) {
-        if (vars.size() < min || vars.size() > max) {
-            String expected = min == max ? "exactly " + min : "at least " + min;
-            throw new InputException(
-                    "x columns",
-                    "the " + form.id() + " form needs " + expected + " explanatory column(s), got " + vars.size() + " "
-                            + vars);
-        }
-    }
-
-    private static void requirePositive(String name, double[] values, String why) {
-        for (int i = 0; i < values.length; i++) {
-            if (!(values[i] > 0)) {
-                throw new InputException(name + ", point " + (i + 1), why + "; got " + values[i]);
-            }
-        }
-    }
-
     private static void checkCount(Observations data, int parameters) {
         if (data.size() <= parameters) {
             throw new InputException(
@@ -334,95 +174,29 @@ public final class LeastSquaresFitter {
         }
     }
 
-    /** Start for y = C·Π xᵢ^nᵢ from the linear fit of ln|y| on ln xᵢ (or C = mean, nᵢ = defaultExponent). */
-    private double[] logLinearStart(Observations data, double[][] x, double defaultExponent) {
-        double[] y = data.response();
-        int n = y.length;
-        double sign = y[0] < 0 ? -1.0 : 1.0;
-        boolean usable = true;
-        for (double v : y) {
-            usable &= sign * v > 0;
-        }
-        double[] start = new double[x.length + 1];
-        if (!usable || n <= x.length + 1) {
-            start[0] = mean(y);
-            java.util.Arrays.fill(start, 1, start.length, defaultExponent);
-            return start;
-        }
-        double[][] design = new double[x.length + 1][n];
-        double[] ly = new double[n];
-        for (int i = 0; i < n; i++) {
-            design[0][i] = 1.0;
-            ly[i] = Math.log(sign * y[i]);
-            for (int v = 0; v < x.length; v++) {
-                design[v + 1][i] = Math.log(x[v][i]);
-            }
-        }
-        double[] coefficients = new HouseholderQr(design).solve(ly);
-        start[0] = sign * Math.exp(coefficients[0]);
-        System.arraycopy(coefficients, 1, start, 1, x.length);
-        for (double s : start) {
-            if (!Double.isFinite(s)) {
-                start[0] = mean(y);
-                java.util.Arrays.fill(start, 1, start.length, defaultExponent);
-                break;
-            }
-        }
-        return start;
-    }
-
-    private double[] exponentialStart(Observations data, double[] x) {
-        double[] y = data.response();
-        double sign = y[0] < 0 ? -1.0 : 1.0;
-        boolean usable = true;
-        for (double v : y) {
-            usable &= sign * v > 0;
-        }
-        if (!usable || y.length < 3) {
-            return new double[] {mean(y), 0.0};
-        }
-        double[] ones = new double[y.length];
-        double[] ly = new double[y.length];
-        for (int i = 0; i < y.length; i++) {
-            ones[i] = 1.0;
-            ly[i] = Math.log(sign * y[i]);
-        }
-        double[] c = new HouseholderQr(new double[][] {ones, x}).solve(ly);
-        double[] start = {sign * Math.exp(c[0]), c[1]};
-        return Double.isFinite(start[0]) && Double.isFinite(start[1]) ? start : new double[] {mean(y), 0.0};
-    }
-
-    private static double mean(double[] v) {
-        double s = 0;
-        for (double d : v) {
-            s += d;
-        }
-        return s / v.length;
-    }
-
     // ---------------------------------------------------------------- linear
 
-    private FitResult fitLinear(Observations data, FitForm form, Plan plan) {
+    private FitResult fitLinear(Observations data, FitForm form, FitPlan plan) {
         double[] y = data.response();
         double[] sw = rootWeights(data);
         int n = y.length;
-        int p = plan.design.length;
+        int p = plan.design().length;
         double[][] a = new double[p][n];
         double[] b = new double[n];
         for (int i = 0; i < n; i++) {
             b[i] = y[i] * sw[i];
             for (int k = 0; k < p; k++) {
-                a[k][i] = plan.design[k][i] * sw[i];
+                a[k][i] = plan.design()[k][i] * sw[i];
             }
         }
         HouseholderQr qr = new HouseholderQr(a);
-        Covariance cov = covariance(qr, plan.parameterNames);
+        Covariance cov = covariance(qr, plan.parameterNames());
         double[] coefficients = qr.solveRefined(b, REFINEMENT_STEPS);
         double[] predicted = new double[n];
         for (int i = 0; i < n; i++) {
             double s = 0.0;
             for (int k = 0; k < p; k++) {
-                s = Math.fma(plan.design[k][i], coefficients[k], s);
+                s = Math.fma(plan.design()[k][i], coefficients[k], s);
             }
             predicted[i] = s;
         }
@@ -443,11 +217,11 @@ public final class LeastSquaresFitter {
 
     private FitResult fitPowerInLogSpace(Observations data, FitForm form) {
         List<String> vars = data.variableNames();
-        requireColumns(vars, 1, 1, form);
+        FitPlanner.requireColumns(vars, 1, 1, form);
         double[] x = data.column(0);
         double[] y = data.response();
-        requirePositive(vars.get(0), x, "a power law x^b needs positive x");
-        requirePositive(data.responseName(), y, "a fit in log space needs positive y");
+        FitPlanner.requirePositive(vars.get(0), x, "a power law x^b needs positive x");
+        FitPlanner.requirePositive(data.responseName(), y, "a fit in log space needs positive y");
         checkCount(data, 2);
         int n = y.length;
         double[] lx = new double[n];
@@ -462,8 +236,8 @@ public final class LeastSquaresFitter {
         FittedParameter lnA = logFit.parameters().get(0);
         FittedParameter slope = logFit.parameters().get(1);
         double a = Math.exp(lnA.value());
-        String aName = unique("a", vars);
-        String bName = unique("b", vars);
+        String aName = FitPlanner.unique("a", vars);
+        String bName = FitPlanner.unique("b", vars);
         double t = tQuantile(logFit.degreesOfFreedom());
         List<FittedParameter> parameters = List.of(
                 new FittedParameter(
@@ -496,7 +270,7 @@ public final class LeastSquaresFitter {
                         smearing),
                 "Duan, N. (1983), Smearing estimate: a nonparametric retransformation method, J. Am. Stat. Assoc."
                         + " 78(383), 605–610 (from memory)");
-        Plan plan = new Plan(List.of(aName, bName), aName + "*" + vars.get(0) + "^" + bName, null, null, true);
+        FitPlan plan = new FitPlan(List.of(aName, bName), aName + "*" + vars.get(0) + "^" + bName, null, null, true);
         Covariance none = new Covariance(null, 1.0, List.of());
         List<Caution> extra = new ArrayList<>(logFit.cautions());
         extra.add(bias);
@@ -658,18 +432,18 @@ public final class LeastSquaresFitter {
         }
     }
 
-    private FitResult fitNonlinear(Observations data, FitForm form, Plan plan) {
-        Expression expression = Expression.parse(plan.expression, data.variableNames(), plan.parameterNames);
-        for (String name : plan.parameterNames) {
+    private FitResult fitNonlinear(Observations data, FitForm form, FitPlan plan) {
+        Expression expression = Expression.parse(plan.expression(), data.variableNames(), plan.parameterNames());
+        for (String name : plan.parameterNames()) {
             if (!expression.dependsOn(name)) {
                 throw new InputException(
-                        "start", "parameter '" + name + "' does not appear in the expression " + plan.expression);
+                        "start", "parameter '" + name + "' does not appear in the expression " + plan.expression());
             }
         }
         double[] y = data.response();
         double[] sw = rootWeights(data);
         int n = y.length;
-        int p = plan.parameterNames.size();
+        int p = plan.parameterNames().size();
         double[] target = new double[n];
         for (int i = 0; i < n; i++) {
             target[i] = y[i] * sw[i];
@@ -677,23 +451,24 @@ public final class LeastSquaresFitter {
         double[][] columns = data.columns();
         TrackedModel model = new TrackedModel(expression, columns, sw, target);
         int[] bad = new int[1];
-        model.evaluate(plan.start, new double[n], new double[1][][], bad);
+        model.evaluate(plan.start(), new double[n], new double[1][][], bad);
         if (bad[0] >= 0) {
             throw new InputException(
                     "start",
-                    "the model " + plan.expression + " or its derivative is not a finite number at the starting values "
+                    "the model " + plan.expression()
+                            + " or its derivative is not a finite number at the starting values "
                             + startText(plan) + " for point " + (bad[0] + 1) + pointText(data, bad[0])
                             + "; choose other starting values");
         }
         boolean converged;
         String stop;
         int iterations;
-        Damped damped = damped(model, plan.start, Math.min(maxIterations, DAMPED_BUDGET), tolerance);
+        Damped damped = damped(model, plan.start(), Math.min(maxIterations, DAMPED_BUDGET), tolerance);
         if (damped != null && damped.degenerate()) {
             // A parameter lost its influence on the way (e.g. an exponent run off to where exp(−b x)
             // is 0): a stationary point of no use. MINPACK's method goes from the start again, and
             // the better of the two points found is kept (the model remembers it).
-            Minpack outcome = minpack(model, plan.start, target, tolerance, maxIterations);
+            Minpack outcome = minpack(model, plan.start(), target, tolerance, maxIterations);
             converged = outcome.converged();
             iterations = damped.iterations() + outcome.iterations();
             stop = "Levenberg–Marquardt on the normal equations stopped where a parameter had lost its influence;"
@@ -704,7 +479,7 @@ public final class LeastSquaresFitter {
             stop = damped.stop();
         } else {
             int spent = Math.min(maxIterations, DAMPED_BUDGET);
-            Minpack outcome = minpack(model, plan.start, target, tolerance, maxIterations);
+            Minpack outcome = minpack(model, plan.start(), target, tolerance, maxIterations);
             converged = outcome.converged();
             iterations = spent + outcome.iterations();
             stop = "Levenberg–Marquardt on the normal equations did not settle in " + spent
@@ -721,7 +496,7 @@ public final class LeastSquaresFitter {
         // The polishing's last factorisation, where it was made at the final point, is the one needed.
         Covariance cov = covariance(
                 polishing.factorisedAtPoint() != null ? polishing.factorisedAtPoint() : new HouseholderQr(jac[0]),
-                plan.parameterNames);
+                plan.parameterNames());
         double[] predicted = new double[n];
         expression.evaluate(columns, point, predicted, null);
         List<Caution> extra = new ArrayList<>();
@@ -1106,13 +881,13 @@ public final class LeastSquaresFitter {
         return new Polished(point, accepted, atPoint);
     }
 
-    private static String startText(Plan plan) {
+    private static String startText(FitPlan plan) {
         StringBuilder s = new StringBuilder();
-        for (int k = 0; k < plan.parameterNames.size(); k++) {
+        for (int k = 0; k < plan.parameterNames().size(); k++) {
             s.append(k == 0 ? "" : ", ")
-                    .append(plan.parameterNames.get(k))
+                    .append(plan.parameterNames().get(k))
                     .append('=')
-                    .append(plan.start[k]);
+                    .append(plan.start()[k]);
         }
         return s.toString();
     }
@@ -1189,7 +964,7 @@ public final class LeastSquaresFitter {
     private FitResult finish(
             Observations data,
             FitForm form,
-            Plan plan,
+            FitPlan plan,
             double[] coefficients,
             double[] predicted,
             Covariance cov,
@@ -1213,7 +988,7 @@ public final class LeastSquaresFitter {
             sumW += wi;
             sumWy += wi * y[i];
         }
-        double centre = plan.centred ? sumWy / sumW : 0.0;
+        double centre = plan.centred() ? sumWy / sumW : 0.0;
         double tss = 0.0;
         for (int i = 0; i < n; i++) {
             double wi = w == null ? 1.0 : w[i];
@@ -1231,14 +1006,14 @@ public final class LeastSquaresFitter {
                     "every response value is the same, so R² is not defined and is reported as 0",
                     "common practice, no source"));
         }
-        double adjusted = 1.0 - (1.0 - r2) * (n - (plan.centred ? 1 : 0)) / dof;
+        double adjusted = 1.0 - (1.0 - r2) * (n - (plan.centred() ? 1 : 0)) / dof;
         double sigma = Math.sqrt(rss / dof);
         double t = tQuantile(dof);
         List<FittedParameter> parameters = new ArrayList<>();
         for (int k = 0; k < p; k++) {
             double se = cov.unscaled == null ? 0.0 : sigma * Math.sqrt(cov.unscaled[k][k]);
             parameters.add(new FittedParameter(
-                    plan.parameterNames.get(k),
+                    plan.parameterNames().get(k),
                     coefficients[k],
                     se,
                     coefficients[k] - t * se,
@@ -1252,7 +1027,7 @@ public final class LeastSquaresFitter {
                             + " points; the uncertainty estimates are weak",
                     "common practice, no source"));
         }
-        if (!plan.centred) {
+        if (!plan.centred()) {
             cautions.add(Caution.note(
                     "uncentred-r-squared",
                     "the model has no intercept, so R² is the uncentred 1 − RSS/Σy², not comparable with R² of a"
@@ -1269,7 +1044,7 @@ public final class LeastSquaresFitter {
                 form.description(),
                 data.responseName(),
                 data.variableNames(),
-                plan.expression,
+                plan.expression(),
                 parameters,
                 rss,
                 sigma,
