@@ -69,7 +69,8 @@ public final class HeadwayApp extends Application {
                 if (++frames == 2) {
                     stop();
                     if (report) {
-                        System.err.println("headway: first frame " + sinceJvmStart() + " ms after JVM start");
+                        System.err.println("headway: first frame " + sinceJvmStart() + " ms after JVM start; "
+                                + StartupCpu.summary());
                         if (Boolean.getBoolean("headway.exitAfterFirstFrame")) {
                             // For the start-up benchmark: end here, without the close-time checks or autosave.
                             Runtime.getRuntime().halt(0);
