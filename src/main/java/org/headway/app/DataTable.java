@@ -1,19 +1,13 @@
 package org.headway.app;
 
 import java.io.IOException;
-import java.io.Reader;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.headway.caution.InputException;
+import org.headway.project.CsvTableReader;
 
 /**
  * A numeric CSV table for fitting: a header row naming the columns, with an optional unit in
@@ -81,12 +75,6 @@ public record DataTable(Path file, List<Column> columns) {
      */
     public static DataTable read(
             Path file, java.util.function.BooleanSupplier cancelled, java.util.function.IntConsumer progress) {
-        CSVFormat csv = CSVFormat.DEFAULT
-                .builder()
-                .setIgnoreSurroundingSpaces(true)
-                .setCommentMarker('#')
-                .setIgnoreEmptyLines(true)
-                .get();
         List<String> names = new ArrayList<>();
         List<String> units = new ArrayList<>();
         List<double[]> values = new ArrayList<>();
@@ -94,67 +82,37 @@ public record DataTable(Path file, List<Column> columns) {
         String where = file.getFileName() == null
                 ? file.toString()
                 : file.getFileName().toString();
-        try (Reader reader = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-                CSVParser parser = csv.parse(reader)) {
-            boolean header = true;
-            for (CSVRecord record : parser) {
-                long line = parser.getCurrentLineNumber();
-                if (header) {
-                    for (String h : record) {
-                        String text = h.startsWith("\uFEFF") ? h.substring(1) : h;
-                        int open = text.indexOf('[');
-                        int close = text.lastIndexOf(']');
-                        String name = (open >= 0 ? text.substring(0, open) : text).trim();
-                        String unit = open >= 0 && close > open
-                                ? text.substring(open + 1, close).trim()
-                                : "";
-                        if (name.isEmpty()) {
-                            throw new InputException(
-                                    where + " line " + line, "column " + (names.size() + 1) + " has no name");
+        try (CsvTableReader reader = CsvTableReader.open(file, CsvTableReader.Options.of(where))) {
+            List<CsvTableReader.Heading> header = reader.header();
+            if (header != null) {
+                for (CsvTableReader.Heading h : header) {
+                    if (h.name().isEmpty()) {
+                        throw new InputException(
+                                where + " line " + reader.headerLine(),
+                                "column " + (names.size() + 1) + " has no name");
+                    }
+                    names.add(h.name());
+                    units.add(h.unit());
+                    values.add(new double[64]);
+                }
+                for (CsvTableReader.Row row = reader.next(); row != null; row = reader.next()) {
+                    if (rows % CHECK_EVERY_ROWS == 0 && rows > 0) {
+                        if (cancelled.getAsBoolean()) {
+                            throw new java.util.concurrent.CancellationException("import cancelled");
                         }
-                        names.add(name);
-                        units.add(unit);
-                        values.add(new double[64]);
+                        progress.accept(rows);
                     }
-                    header = false;
-                    continue;
-                }
-                if (record.size() != names.size()) {
-                    throw new InputException(
-                            where + " line " + line,
-                            "has " + record.size() + " values but the header names " + names.size() + " columns");
-                }
-                if (rows % CHECK_EVERY_ROWS == 0 && rows > 0) {
-                    if (cancelled.getAsBoolean()) {
-                        throw new java.util.concurrent.CancellationException("import cancelled");
+                    if (rows == values.get(0).length) {
+                        for (int c = 0; c < values.size(); c++) {
+                            values.set(c, Arrays.copyOf(values.get(c), 2 * rows));
+                        }
                     }
-                    progress.accept(rows);
-                }
-                if (rows == values.get(0).length) {
-                    for (int c = 0; c < values.size(); c++) {
-                        values.set(c, Arrays.copyOf(values.get(c), 2 * rows));
+                    for (int c = 0; c < names.size(); c++) {
+                        values.get(c)[rows] = row.finiteNumber(c, CsvTableReader.NOT_A_NUMBER);
                     }
+                    rows++;
                 }
-                for (int c = 0; c < record.size(); c++) {
-                    String cell = record.get(c);
-                    double v;
-                    try {
-                        v = org.headway.units.Decimals.parseDecimal(cell);
-                    } catch (NumberFormatException e) {
-                        throw new InputException(
-                                where + " line " + line + ", column " + names.get(c), "'" + cell + "' is not a number");
-                    }
-                    if (!Double.isFinite(v)) {
-                        throw new InputException(
-                                where + " line " + line + ", column " + names.get(c),
-                                "'" + cell + "' is not a finite number");
-                    }
-                    values.get(c)[rows] = v;
-                }
-                rows++;
             }
-        } catch (NoSuchFileException e) {
-            throw new InputException(where, "file not found");
         } catch (IOException | UncheckedIOException e) {
             throw new InputException(where, "cannot be read as CSV: " + e.getMessage());
         }

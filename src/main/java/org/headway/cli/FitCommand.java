@@ -6,10 +6,6 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -17,9 +13,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 import org.headway.correlation.FittedCorrelation;
@@ -30,6 +23,7 @@ import org.headway.fitting.FittedParameter;
 import org.headway.fitting.LeastSquaresFitter;
 import org.headway.fitting.Observations;
 import org.headway.fitting.VariableRange;
+import org.headway.project.CsvTableReader;
 import org.headway.project.FittedCorrelationFile;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -309,81 +303,45 @@ public final class FitCommand implements Callable<Integer> {
          * @param wanted names of the columns to read as numbers; null for all
          */
         static Table read(Path file, java.util.Set<String> wanted) throws IOException {
-            CSVFormat csv = CSVFormat.DEFAULT
-                    .builder()
-                    .setIgnoreSurroundingSpaces(true)
-                    .setCommentMarker('#')
-                    .setIgnoreEmptyLines(true)
-                    .get();
+            CsvTableReader.Options options = CsvTableReader.Options.of(file.toString())
+                    .withHeader(CsvTableReader.HeaderRule.BRACKETS_MARK_AFTER_TRIM)
+                    .withMaxColumns(MAX_COLUMNS)
+                    .withLimit(LineLengthLimit.limit(LineLengthLimit.MAX_LINE_LENGTH, file));
             List<String> names = new ArrayList<>();
             List<double[]> values = new ArrayList<>();
             int rows = 0;
-            try (Reader reader = new LineLengthLimit(
-                            Files.newBufferedReader(file, StandardCharsets.UTF_8),
-                            file.toString(),
-                            LineLengthLimit.MAX_LINE_LENGTH,
-                            file);
-                    CSVParser parser = csv.parse(reader)) {
-                boolean header = true;
-                for (CSVRecord record : parser) {
-                    long line = parser.getCurrentLineNumber();
-                    if (header) {
-                        if (record.size() > MAX_COLUMNS) {
-                            throw new InputException(
-                                    file + " line " + line,
-                                    "the header names " + record.size() + " columns; at most " + MAX_COLUMNS
-                                            + " are read");
-                        }
-                        for (String h : record) {
-                            int bracket = h.indexOf('[');
-                            String name = (bracket >= 0 ? h.substring(0, bracket) : h).trim();
-                            if (name.startsWith("\uFEFF")) {
-                                name = name.substring(1);
+            try (CsvTableReader reader = CsvTableReader.open(file, options)) {
+                List<CsvTableReader.Heading> header = reader.header();
+                if (header != null) {
+                    for (CsvTableReader.Heading h : header) {
+                        names.add(h.name());
+                        values.add(new double[1024]);
+                    }
+                    for (CsvTableReader.Row row = reader.next(); row != null; row = reader.next()) {
+                        if (rows == values.get(0).length) {
+                            for (int c = 0; c < values.size(); c++) {
+                                values.set(c, java.util.Arrays.copyOf(values.get(c), 2 * rows));
                             }
-                            names.add(name);
-                            values.add(new double[1024]);
                         }
-                        header = false;
-                        continue;
+                        for (int c = 0; c < names.size(); c++) {
+                            if (wanted != null && !wanted.contains(names.get(c))) {
+                                continue;
+                            }
+                            double value = row.number(c, CsvTableReader.NOT_A_NUMBER);
+                            double magnitude = Math.abs(value);
+                            if (magnitude > MAX_MAGNITUDE || (magnitude > 0 && magnitude < MIN_MAGNITUDE)) {
+                                // Squares of such numbers over- or underflow a double: sums of squares, the
+                                // residual variance and the standard errors would come out as 0, NaN or ∞.
+                                throw row.problem(
+                                        c,
+                                        "is beyond the magnitudes a fit handles (1e-100 to 1e100 in size); give the"
+                                                + " column in another unit, or rescale it so its values lie nearer 1");
+                            }
+                            values.get(c)[rows] = value;
+                        }
+                        rows++;
                     }
-                    if (record.size() != names.size()) {
-                        throw new InputException(
-                                file + " line " + line,
-                                "has " + record.size() + " values but the header names " + names.size() + " columns");
-                    }
-                    if (rows == values.get(0).length) {
-                        for (int c = 0; c < values.size(); c++) {
-                            values.set(c, java.util.Arrays.copyOf(values.get(c), 2 * rows));
-                        }
-                    }
-                    for (int c = 0; c < record.size(); c++) {
-                        if (wanted != null && !wanted.contains(names.get(c))) {
-                            continue;
-                        }
-                        String cell = record.get(c);
-                        double value;
-                        try {
-                            value = org.headway.units.Decimals.parseDecimal(cell);
-                        } catch (NumberFormatException e) {
-                            throw new InputException(
-                                    file + " line " + line + ", column " + names.get(c),
-                                    "'" + cell + "' is not a number");
-                        }
-                        double magnitude = Math.abs(value);
-                        if (magnitude > MAX_MAGNITUDE || (magnitude > 0 && magnitude < MIN_MAGNITUDE)) {
-                            // Squares of such numbers over- or underflow a double: sums of squares, the
-                            // residual variance and the standard errors would come out as 0, NaN or ∞.
-                            throw new InputException(
-                                    file + " line " + line + ", column " + names.get(c),
-                                    "'" + cell + "' is beyond the magnitudes a fit handles (1e-100 to 1e100 in"
-                                            + " size); give the column in another unit, or rescale it so its values lie nearer 1");
-                        }
-                        values.get(c)[rows] = value;
-                    }
-                    rows++;
                 }
-            } catch (NoSuchFileException e) {
-                throw new InputException(file.toString(), "file not found");
             } catch (java.io.UncheckedIOException e) {
                 throw new InputException(
                         file.toString(), "cannot read as CSV: " + e.getCause().getMessage());

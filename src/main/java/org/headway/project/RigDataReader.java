@@ -12,11 +12,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.NoSuchElementException;
 import java.util.OptionalDouble;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.headway.caution.Caution;
 import org.headway.caution.InputException;
 import org.headway.rig.RigFluid;
@@ -44,11 +39,7 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
     /** Distinct temperatures whose fluid properties are remembered. */
     static final int PROPERTY_CACHE_SIZE = 4096;
 
-    private static final Pattern HEADER = Pattern.compile("^\\s*(.*?)\\s*(?:\\[(.*)\\])?\\s*$");
-
-    private final LimitedReader limited;
-    private final CSVParser parser;
-    private final Iterator<CSVRecord> records;
+    private final CsvTableReader table;
     private final String file;
     private final RigFluid fluid;
     private final int flowColumn;
@@ -59,7 +50,6 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
     private final Affine temperatureUnit;
     private final int[] carriedIndex;
     private final List<String> carriedNames;
-    private final int columnCount;
     private final List<String> headerNames;
     private final Map<Long, RigFluidProperties> cache = new HashMap<>();
     private final Map<String, Caution> cautions = new LinkedHashMap<>();
@@ -76,39 +66,33 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
     RigDataReader(Reader reader, String file, RigFile.Columns columns, RigFluid fluid) {
         this.file = file;
         this.fluid = fluid;
-        this.limited = new LimitedReader(reader);
-        CSVFormat format = CSVFormat.DEFAULT
-                .builder()
-                .setIgnoreSurroundingSpaces(true)
-                .setCommentMarker('#')
-                .setIgnoreEmptyLines(true)
-                .get();
+        CsvTableReader.Options options = CsvTableReader.Options.of(file)
+                .withHeader(CsvTableReader.HeaderRule.TRAILING_BRACKETS)
+                .withLimit(CsvTableReader.Limit.lines(
+                                MAX_LINE_CHARS,
+                                "a line is longer than " + MAX_LINE_CHARS
+                                        + " characters; this is not a rig data file (or a line break is missing)")
+                        .withRecords(
+                                MAX_RECORD_CHARS,
+                                "a record is longer than " + MAX_RECORD_CHARS + " characters (an unclosed quote?)"));
         try {
-            this.parser = format.parse(limited);
+            this.table = new CsvTableReader(reader, options);
         } catch (IOException e) {
             throw new InputException(file, "cannot read: " + e.getMessage());
         }
-        this.records = parser.iterator();
-        CSVRecord header = nextRecord();
+        List<CsvTableReader.Heading> header = reading(table::header);
         if (header == null) {
             close();
             throw new InputException(file, "is empty; expected a header row such as flow [L/s],dp [kPa] and data rows");
         }
-        long headerLine = parser.getCurrentLineNumber();
+        long headerLine = table.headerLine();
         List<String> names = new ArrayList<>();
         List<String> units = new ArrayList<>();
-        for (String cell : header) {
-            Matcher m = HEADER.matcher(cell);
-            m.matches();
-            String name = m.group(1);
-            if (name.startsWith("\uFEFF")) {
-                name = name.substring(1);
-            }
-            names.add(name);
-            units.add(m.group(2) == null ? "" : m.group(2).strip());
+        for (CsvTableReader.Heading heading : header) {
+            names.add(heading.name());
+            units.add(heading.unit());
         }
         this.headerNames = List.copyOf(names);
-        this.columnCount = names.size();
         String at = file + " line " + headerLine;
         this.flowColumn = require(names, columns.flow(), "flow", at);
         this.pressureColumn = require(names, columns.pressureDrop(), "pressure drop", at);
@@ -143,7 +127,7 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
         for (int c = 0; c < names.size(); c++) {
             if (c != flowColumn && c != pressureColumn && c != temperatureColumn) {
                 carried.add(c);
-                carriedHeader.add(header.get(c).strip());
+                carriedHeader.add(header.get(c).text().strip());
             }
         }
         this.carriedIndex = carried.stream().mapToInt(Integer::intValue).toArray();
@@ -190,25 +174,14 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
         return Collections.unmodifiableList(new ArrayList<>(cautions.values()));
     }
 
-    private CSVRecord nextRecord() {
-        limited.startRecord();
+    /** Reads through the table, locating a failure of the CSV parser at the line it was reading. */
+    private <T> T reading(java.util.function.Supplier<T> read) {
         try {
-            return records.hasNext() ? records.next() : null;
+            return read.get();
         } catch (UncheckedIOException e) {
-            long line = parser.getCurrentLineNumber() + 1;
-            if (e.getCause() instanceof TooLongException tooLong) {
-                throw new InputException(
-                        file + " "
-                                + tooLong.getMessage()
-                                        .substring(0, tooLong.getMessage().indexOf(':')),
-                        tooLong.getMessage().substring(tooLong.getMessage().indexOf(':') + 2));
-            }
             throw new InputException(
-                    file + " line " + line,
+                    file + " line " + (table.lineNumber() + 1),
                     "cannot read as CSV: " + e.getCause().getMessage());
-        } catch (IllegalStateException e) {
-            throw new InputException(
-                    file + " line " + (parser.getCurrentLineNumber() + 1), "cannot read as CSV: " + e.getMessage());
         }
     }
 
@@ -231,24 +204,19 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
     }
 
     private RigPoint read() {
-        CSVRecord record = nextRecord();
-        if (record == null) {
+        CsvTableReader.Row row = reading(table::next);
+        if (row == null) {
             return null;
         }
-        long line = parser.getCurrentLineNumber();
-        if (record.size() != columnCount) {
-            throw new InputException(
-                    file + " line " + line,
-                    "has " + record.size() + " values but the header names " + columnCount + " columns");
-        }
-        double flow = positive(flowUnit.apply(number(record, flowColumn, line)), record, flowColumn, line);
-        double dp = positive(pressureUnit.apply(number(record, pressureColumn, line)), record, pressureColumn, line);
+        long line = row.line();
+        double flow = positive(flowUnit.apply(number(row, flowColumn)), row, flowColumn);
+        double dp = positive(pressureUnit.apply(number(row, pressureColumn)), row, pressureColumn);
         OptionalDouble temperature = OptionalDouble.empty();
         RigFluidProperties properties = constantProperties;
         if (temperatureColumn >= 0) {
-            double t = temperatureUnit.apply(number(record, temperatureColumn, line));
+            double t = temperatureUnit.apply(number(row, temperatureColumn));
             if (!(t > 0)) {
-                throw cell(record, temperatureColumn, line, "is not above absolute zero");
+                throw row.problem(temperatureColumn, "is not above absolute zero");
             }
             temperature = OptionalDouble.of(t);
             if (fluid.model() != null) {
@@ -263,37 +231,23 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
         } else {
             String[] values = new String[carriedIndex.length];
             for (int i = 0; i < carriedIndex.length; i++) {
-                values[i] = record.get(carriedIndex[i]);
+                values[i] = row.text(carriedIndex[i]);
             }
             carried = List.of(values);
         }
         return new RigPoint(line, flow, dp, temperature, properties, carried);
     }
 
-    private double number(CSVRecord record, int column, long line) {
-        String cell = record.get(column);
-        try {
-            double v = org.headway.units.Decimals.parseDecimal(cell);
-            if (Double.isFinite(v)) {
-                return v;
-            }
-        } catch (NumberFormatException e) {
-            // reported below with the cell
-        }
-        throw cell(record, column, line, "is not a finite number");
+    /** A cell by the number rule; the rig data have always called any refusal "not a finite number". */
+    private static double number(CsvTableReader.Row row, int column) {
+        return row.finiteNumber(column, CsvTableReader.NOT_FINITE);
     }
 
-    private double positive(double value, CSVRecord record, int column, long line) {
+    private static double positive(double value, CsvTableReader.Row row, int column) {
         if (!(value > 0)) {
-            throw cell(record, column, line, "must be greater than zero");
+            throw row.problem(column, "must be greater than zero");
         }
         return value;
-    }
-
-    private InputException cell(CSVRecord record, int column, long line, String problem) {
-        return new InputException(
-                file + " line " + line + ", column " + headerNames.get(column),
-                "'" + record.get(column) + "' " + problem);
     }
 
     private RigFluidProperties cachedProperties(double temperature, long line) {
@@ -325,73 +279,9 @@ public final class RigDataReader implements Iterator<RigPoint>, AutoCloseable {
     @Override
     public void close() {
         try {
-            parser.close();
+            table.close();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
-        }
-    }
-
-    /** Refusal of an over-long line or record. */
-    static final class TooLongException extends IOException {
-        TooLongException(String message) {
-            super(message);
-        }
-    }
-
-    /**
-     * Counts characters per physical line and per record, and refuses to go on past the caps, so
-     * that one huge line cannot fill the heap.
-     */
-    static final class LimitedReader extends Reader {
-        private final Reader in;
-        private long lineChars;
-        private long recordChars;
-        private long lineBreaks;
-        private boolean afterCarriageReturn;
-
-        LimitedReader(Reader in) {
-            this.in = in;
-        }
-
-        void startRecord() {
-            recordChars = 0;
-        }
-
-        @Override
-        public int read(char[] buffer, int offset, int length) throws IOException {
-            int n = in.read(buffer, offset, length);
-            for (int i = offset; i < offset + n; i++) {
-                char c = buffer[i];
-                if (c == '\n' || c == '\r') {
-                    // CR LF is one line break, as the CSV parser counts it.
-                    if (!(c == '\n' && afterCarriageReturn)) {
-                        lineBreaks++;
-                    }
-                    afterCarriageReturn = c == '\r';
-                    lineChars = 0;
-                } else {
-                    afterCarriageReturn = false;
-                    if (++lineChars > MAX_LINE_CHARS) {
-                        throw new TooLongException("line " + (lineBreaks + 1) + ": a line is longer than "
-                                + MAX_LINE_CHARS + " characters; this is not a rig data file (or a line break is"
-                                + " missing)");
-                    }
-                }
-            }
-            if (n > 0) {
-                recordChars += n;
-                // Read-ahead of the parser's buffer counts too, so the cap is loose by one buffer.
-                if (recordChars > MAX_RECORD_CHARS) {
-                    throw new TooLongException("line " + (lineBreaks + 1) + ": a record is longer than "
-                            + MAX_RECORD_CHARS + " characters (an unclosed quote?)");
-                }
-            }
-            return n;
-        }
-
-        @Override
-        public void close() throws IOException {
-            in.close();
         }
     }
 }
