@@ -74,7 +74,7 @@ public final class CsvTableReader implements AutoCloseable {
         TRAILING_BRACKETS
     }
 
-    private static final Pattern TRAILING_UNIT = Pattern.compile("^\\s*(.*?)\\s*(?:\\[(.*)\\])?\\s*$");
+    private static final Pattern TRAILING_UNIT = Pattern.compile("^\\s*(.*?)\\s*(?:\\[(.*)\\])?\\s*$", Pattern.DOTALL);
 
     /**
      * One header cell.

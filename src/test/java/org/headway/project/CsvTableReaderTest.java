@@ -38,6 +38,18 @@ class CsvTableReaderTest {
     }
 
     @Test
+    void aQuotedHeaderCellWithALineBreakIsSplitLikeAnyOther() throws IOException {
+        // A quoted field may hold a line break (RFC 4180 section 2.6); spreadsheets write one when a
+        // heading is wrapped in its cell. The name keeps the break; the unit is still found.
+        for (HeaderRule rule : HeaderRule.values()) {
+            List<Heading> h = header("\"pressure\ndrop [kPa]\",flow [L/s]\n1,2\n", rule);
+            assertEquals("pressure\ndrop", h.get(0).name(), rule.name());
+            assertEquals("kPa", h.get(0).unit(), rule.name());
+            assertEquals("flow", h.get(1).name(), rule.name());
+        }
+    }
+
+    @Test
     void aByteOrderMarkIsNotPartOfTheFirstName() throws IOException {
         // U+FEFF at the start of a UTF-8 text is a signature, not content (The Unicode Standard,
         // "Byte Order Mark" FAQ and the chapter on specials; from memory). Spreadsheets write it in
