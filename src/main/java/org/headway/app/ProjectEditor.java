@@ -3,7 +3,6 @@ package org.headway.app;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
@@ -21,10 +20,9 @@ import org.headway.caution.InputException;
 import org.headway.fluid.Fluids;
 import org.headway.friction.FrictionMethods;
 import org.headway.pipe.Catalog;
-import org.headway.pipe.Material;
-import org.headway.pipe.PipeSize;
 import org.headway.project.Project;
 import org.headway.project.ProjectFile;
+import org.headway.project.ProjectResolver;
 import org.headway.units.Quantities;
 import org.headway.units.QuantityKind;
 import org.headway.units.UnitSystem;
@@ -185,7 +183,7 @@ public final class ProjectEditor {
             String material = s.pipe()
                     .map(x -> {
                         try {
-                            return catalog.material(x.material()).name();
+                            return ProjectResolver.catalogMaterial(catalog, x).name();
                         } catch (InputException e) {
                             return x.material() + " (unknown)";
                         }
@@ -194,8 +192,8 @@ public final class ProjectEditor {
             String size = s.pipe()
                     .map(x -> x.size() + (x.schedule().isEmpty() ? "" : " / " + x.schedule()))
                     .orElse("—");
-            double bore = boreOf(s);
-            double roughness = roughnessOf(s);
+            double bore = RunEdits.boreOf(s, catalog);
+            double roughness = RunEdits.roughnessOf(s, catalog);
             list.add(new SegmentSummary(
                     i + 1,
                     s.name(),
@@ -219,26 +217,23 @@ public final class ProjectEditor {
         }
     }
 
-    /** Roughness of a segment as it stands (m), NaN when it cannot be read. */
-    private double roughnessOf(Project.SegmentSpec s) {
-        try {
-            if (!s.roughness().isEmpty()) {
-                return Quantities.parse(s.roughness(), QuantityKind.ROUGHNESS);
-            }
-            if (s.pipe().isPresent()) {
-                return catalog.material(s.pipe().get().material()).roughness();
-            }
-        } catch (InputException e) {
-            return Double.NaN;
-        }
-        return Double.NaN;
+    private String text(double si, QuantityKind kind) {
+        return RunEdits.text(si, kind, unitSystem.get());
+    }
+
+    /**
+     * An input echoed back without padding zeros ("420 m", not "420.0 m"): the engineer typed it,
+     * so the zeros would claim a precision they never gave.
+     */
+    static String compact(String number) {
+        return RunEdits.compact(number);
     }
 
     // ---- run-level edits ----
 
     public boolean setTitle(String text) {
         Project p = project.get();
-        return accept("title", () -> with(p, text.strip(), p.fluid(), p.flow(), p.friction(), p.segments()));
+        return accept("title", () -> RunEdits.with(p, text.strip(), p.fluid(), p.flow(), p.friction(), p.segments()));
     }
 
     /** The sheet's title-block fields, by their project-file keys under {@code reference}. */
@@ -351,7 +346,7 @@ public final class ProjectEditor {
             }
             Project.FluidSpec next = new Project.FluidSpec(
                     id, f.temperature(), f.pressure(), f.density(), f.viscosity(), f.vapourPressure());
-            return with(p, p.title(), next, p.flow(), p.friction(), p.segments());
+            return RunEdits.with(p, p.title(), next, p.flow(), p.friction(), p.segments());
         });
     }
 
@@ -363,7 +358,7 @@ public final class ProjectEditor {
             Project.FluidSpec f = p.fluid();
             Project.FluidSpec next =
                     new Project.FluidSpec(f.name(), t, f.pressure(), f.density(), f.viscosity(), f.vapourPressure());
-            return with(p, p.title(), next, p.flow(), p.friction(), p.segments());
+            return RunEdits.with(p, p.title(), next, p.flow(), p.friction(), p.segments());
         });
     }
 
@@ -372,7 +367,7 @@ public final class ProjectEditor {
         return accept("flow", () -> {
             String q = QuantityText.accept(
                     text, QuantityKind.VOLUMETRIC_FLOW, unitSystem.get(), "design flow", QuantityText.Sign.POSITIVE);
-            return with(p, p.title(), p.fluid(), q, p.friction(), p.segments());
+            return RunEdits.with(p, p.title(), p.fluid(), q, p.friction(), p.segments());
         });
     }
 
@@ -388,7 +383,7 @@ public final class ProjectEditor {
                     throw new InputException("friction method", e.problem());
                 }
             }
-            return with(p, p.title(), p.fluid(), p.flow(), method, p.segments());
+            return RunEdits.with(p, p.title(), p.fluid(), p.flow(), method, p.segments());
         });
     }
 
@@ -530,36 +525,13 @@ public final class ProjectEditor {
         UnitSystem u = unitSystem.get();
         return accept("pump.points", () -> {
             if (t.isEmpty()) {
-                return withPump(p, Optional.empty());
+                return RunEdits.withPump(p, Optional.empty());
             }
-            List<Project.PumpPointSpec> points = new ArrayList<>();
-            String[] items = t.split(";");
-            for (int i = 0; i < items.length; i++) {
-                String item = items[i].strip();
-                String where = "pump point " + (i + 1);
-                int colon = item.indexOf(':');
-                if (colon < 0) {
-                    throw new InputException(
-                            where, "expected \"flow: head\", e.g. \"5 L/s: 56 m\", got \"" + item + "\"");
-                }
-                String flow = QuantityText.accept(
-                        item.substring(0, colon),
-                        QuantityKind.VOLUMETRIC_FLOW,
-                        u,
-                        where + " flow",
-                        QuantityText.Sign.NON_NEGATIVE);
-                String head = QuantityText.accept(
-                        item.substring(colon + 1), QuantityKind.HEAD, u, where + " head", QuantityText.Sign.POSITIVE);
-                points.add(new Project.PumpPointSpec(flow, head));
-            }
-            if (points.size() < 3) {
-                throw new InputException(
-                        "pump points", "a pump curve needs at least three points, got " + points.size());
-            }
+            List<Project.PumpPointSpec> points = RunEdits.pumpPoints(t, u);
             Project.PumpSpec pump = p.pump()
                     .map(old -> new Project.PumpSpec(old.name(), old.position(), points, old.npshRequired()))
                     .orElse(new Project.PumpSpec("pump", 0, points, ""));
-            return withPump(p, Optional.of(pump));
+            return RunEdits.withPump(p, Optional.of(pump));
         });
     }
 
@@ -588,26 +560,9 @@ public final class ProjectEditor {
                         "pump position", "a segment number from 1 to " + n + " expected, got " + segment);
             }
             Project.PumpSpec old = p.pump().get();
-            return withPump(
+            return RunEdits.withPump(
                     p, Optional.of(new Project.PumpSpec(old.name(), segment - 1, old.points(), old.npshRequired())));
         });
-    }
-
-    private static Project withPump(Project p, Optional<Project.PumpSpec> pump) {
-        return Project.of(
-                        p.title(),
-                        p.titleBlock(),
-                        p.fluid(),
-                        p.flow(),
-                        p.flowUncertainty(),
-                        p.friction(),
-                        p.segments(),
-                        p.ends(),
-                        pump,
-                        p.limits(),
-                        p.sizing(),
-                        p.curve())
-                .keepingDevicesOf(p);
     }
 
     // ---- segment edits ----
@@ -630,204 +585,11 @@ public final class ProjectEditor {
         Project.SegmentSpec s = p.segments().get(index);
         String typed = text == null ? "" : text;
         return accept(field.key(index), () -> {
-            Project.SegmentSpec next = edited(s, field, typed);
+            Project.SegmentSpec next = RunEdits.edited(s, field, typed, catalog, unitSystem.get());
             List<Project.SegmentSpec> segments = new ArrayList<>(p.segments());
             segments.set(index, next);
-            return with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments);
+            return RunEdits.with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments);
         });
-    }
-
-    private Project.SegmentSpec edited(Project.SegmentSpec s, SegmentField field, String typed) {
-        UnitSystem u = unitSystem.get();
-        String t = typed.strip();
-        switch (field) {
-            case NAME -> {
-                if (t.isEmpty()) {
-                    throw new InputException("name", "a segment needs a name");
-                }
-                return segment(
-                        s,
-                        t,
-                        s.length(),
-                        s.pipe(),
-                        s.innerDiameter(),
-                        s.roughness(),
-                        s.fittings(),
-                        s.elevationChange());
-            }
-            case LENGTH -> {
-                String v = QuantityText.accept(t, QuantityKind.LENGTH, u, "length", QuantityText.Sign.NON_NEGATIVE);
-                return segment(
-                        s, s.name(), v, s.pipe(), s.innerDiameter(), s.roughness(), s.fittings(), s.elevationChange());
-            }
-            case ELEVATION -> {
-                String v = t.isEmpty()
-                        ? ""
-                        : QuantityText.accept(t, QuantityKind.LENGTH, u, "elevation change", QuantityText.Sign.ANY);
-                return segment(s, s.name(), s.length(), s.pipe(), s.innerDiameter(), s.roughness(), s.fittings(), v);
-            }
-            case BORE -> {
-                if (t.isEmpty() && s.pipe().isEmpty()) {
-                    throw new InputException("inner diameter", "required when no catalog pipe is chosen");
-                }
-                String v = t.isEmpty()
-                        ? ""
-                        : QuantityText.accept(
-                                t, QuantityKind.DIAMETER, u, "inner diameter", QuantityText.Sign.POSITIVE);
-                return segment(s, s.name(), s.length(), s.pipe(), v, s.roughness(), s.fittings(), s.elevationChange());
-            }
-            case ROUGHNESS -> {
-                if (t.isEmpty() && s.pipe().isEmpty()) {
-                    throw new InputException("roughness", "required when no catalog pipe is chosen");
-                }
-                String v = t.isEmpty()
-                        ? ""
-                        : QuantityText.accept(
-                                t, QuantityKind.ROUGHNESS, u, "roughness", QuantityText.Sign.NON_NEGATIVE);
-                return segment(
-                        s, s.name(), s.length(), s.pipe(), s.innerDiameter(), v, s.fittings(), s.elevationChange());
-            }
-            case FITTINGS -> {
-                List<Project.FittingSpec> fittings = FittingsText.parse(t, catalog);
-                return segment(
-                        s,
-                        s.name(),
-                        s.length(),
-                        s.pipe(),
-                        s.innerDiameter(),
-                        s.roughness(),
-                        fittings,
-                        s.elevationChange());
-            }
-            case MATERIAL -> {
-                return withMaterial(s, t);
-            }
-            case SIZE, SCHEDULE -> {
-                if (s.pipe().isEmpty()) {
-                    throw new InputException(
-                            field == SegmentField.SIZE ? "size" : "schedule", "choose a catalog material first");
-                }
-                Project.PipeSpec pipe = s.pipe().get();
-                Material material = catalog.material(pipe.material());
-                Project.PipeSpec next;
-                if (field == SegmentField.SIZE) {
-                    next = new Project.PipeSpec(pipe.material(), t, pipe.schedule());
-                    try {
-                        catalog.size(material, next.size(), next.schedule());
-                    } catch (InputException e) {
-                        throw new InputException("size", e.problem());
-                    }
-                } else {
-                    // A new schedule keeps the nominal size where the table has it, else the nearest bore.
-                    next = new Project.PipeSpec(pipe.material(), pipe.size(), t);
-                    try {
-                        catalog.size(material, next.size(), next.schedule());
-                    } catch (InputException e) {
-                        PipeSize nearest = nearest(material, t, boreOf(s));
-                        next = new Project.PipeSpec(pipe.material(), nearest.nominal(), nearest.schedule());
-                    }
-                }
-                return segment(
-                        s,
-                        s.name(),
-                        s.length(),
-                        Optional.of(next),
-                        s.innerDiameter(),
-                        s.roughness(),
-                        s.fittings(),
-                        s.elevationChange());
-            }
-            default -> throw new IllegalStateException("unhandled field " + field);
-        }
-    }
-
-    private Project.SegmentSpec withMaterial(Project.SegmentSpec s, String id) {
-        double bore = boreOf(s);
-        if (id.isEmpty()) {
-            if (s.pipe().isEmpty()) {
-                return s;
-            }
-            // Explicit bore and roughness start from the catalog pipe's values, written in the shown unit.
-            Material material = catalog.material(s.pipe().get().material());
-            String d = s.innerDiameter().isEmpty() ? text(bore, QuantityKind.DIAMETER) : s.innerDiameter();
-            String e = s.roughness().isEmpty() ? text(material.roughness(), QuantityKind.ROUGHNESS) : s.roughness();
-            return segment(s, s.name(), s.length(), Optional.empty(), d, e, s.fittings(), s.elevationChange());
-        }
-        Material material;
-        try {
-            material = catalog.material(id);
-        } catch (InputException e) {
-            throw new InputException("material", e.problem());
-        }
-        Project.PipeSpec next;
-        String schedule = s.pipe().map(Project.PipeSpec::schedule).orElse("");
-        String size = s.pipe().map(Project.PipeSpec::size).orElse("");
-        try {
-            catalog.size(material, size, schedule);
-            next = new Project.PipeSpec(id, size, schedule);
-        } catch (InputException e) {
-            PipeSize nearest = nearest(material, null, bore);
-            next = new Project.PipeSpec(id, nearest.nominal(), nearest.schedule());
-        }
-        // Leaving an explicit bore for a catalog pipe drops the explicit values; overrides on a catalog pipe stay.
-        String d = s.pipe().isEmpty() ? "" : s.innerDiameter();
-        String e = s.pipe().isEmpty() ? "" : s.roughness();
-        return segment(s, s.name(), s.length(), Optional.of(next), d, e, s.fittings(), s.elevationChange());
-    }
-
-    private String text(double si, QuantityKind kind) {
-        UnitSystem u = unitSystem.get();
-        return compact(Quantities.formatNumber(Quantities.fromSi(si, kind, u))) + " " + Quantities.unitSymbol(kind, u);
-    }
-
-    /**
-     * An input echoed back without padding zeros ("420 m", not "420.0 m"): the engineer typed it,
-     * so the zeros would claim a precision they never gave.
-     */
-    static String compact(String number) {
-        return number.replaceAll("(\\.\\d*?)0+(?=$|e)", "$1").replaceAll("\\.(?=$|e)", "");
-    }
-
-    /** Bore of a segment as it stands (m), NaN when it cannot be read. */
-    private double boreOf(Project.SegmentSpec s) {
-        try {
-            if (!s.innerDiameter().isEmpty()) {
-                return Quantities.parse(s.innerDiameter(), QuantityKind.DIAMETER);
-            }
-            if (s.pipe().isPresent()) {
-                Project.PipeSpec pipe = s.pipe().get();
-                return catalog.size(catalog.material(pipe.material()), pipe.size(), pipe.schedule())
-                        .innerDiameter();
-            }
-        } catch (InputException e) {
-            return Double.NaN;
-        }
-        return Double.NaN;
-    }
-
-    private PipeSize nearest(Material material, String schedule, double bore) {
-        List<PipeSize> sizes =
-                catalog.sizes(material.sizeTable(), schedule == null || schedule.isEmpty() ? null : schedule);
-        if (Double.isNaN(bore)) {
-            return sizes.get(0);
-        }
-        return sizes.stream()
-                .min(Comparator.comparingDouble(z -> Math.abs(Math.log(z.innerDiameter() / bore))))
-                .orElseThrow();
-    }
-
-    private static Project.SegmentSpec segment(
-            Project.SegmentSpec s,
-            String name,
-            String length,
-            Optional<Project.PipeSpec> pipe,
-            String bore,
-            String roughness,
-            List<Project.FittingSpec> fittings,
-            String elevation) {
-        // The edit keeps the segment's id and its format-2 fields, so results and devices stay tied to it.
-        return s.withCoreOf(
-                new Project.SegmentSpec(name, length, pipe, bore, roughness, fittings, s.lossCoefficient(), elevation));
     }
 
     /** Appends a segment like the last one (same pipe), named after its position. */
@@ -838,7 +600,7 @@ public final class ProjectEditor {
         Project.SegmentSpec next =
                 segments.isEmpty() ? newSegment(name) : copyPipe(segments.get(segments.size() - 1), name);
         segments.add(next);
-        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments));
+        replace(RunEdits.with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments));
     }
 
     private static Project.SegmentSpec copyPipe(Project.SegmentSpec like, String name) {
@@ -854,19 +616,9 @@ public final class ProjectEditor {
         }
         List<Project.SegmentSpec> segments = new ArrayList<>(p.segments());
         segments.remove(index);
-        // The pump stays on the segment it feeds; when that one goes, on the next one down (or the
-        // new last one). A pump after every pipe stays after every pipe.
-        Optional<Project.PumpSpec> pump = p.pump().map(old -> {
-            int at = old.position();
-            if (index < at) {
-                at--;
-            } else if (index == at) {
-                at = Math.min(at, segments.size() - 1);
-            }
-            return at == old.position() ? old : movedPump(old, at);
-        });
+        Optional<Project.PumpSpec> pump = RunEdits.pumpAfterRemoval(p.pump(), index, segments.size());
         clearSegmentMessages();
-        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments, pump));
+        replace(RunEdits.with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments, pump));
         return true;
     }
 
@@ -887,67 +639,14 @@ public final class ProjectEditor {
         List<Project.SegmentSpec> segments = new ArrayList<>(p.segments());
         Project.SegmentSpec s = segments.remove(index);
         segments.add(target, s);
-        // The pump moves with the segment it feeds (its position counts the pipes upstream of it).
-        int count = segments.size();
-        Optional<Project.PumpSpec> pump = p.pump().map(old -> {
-            int fed = old.position();
-            if (fed >= count) {
-                return old;
-            }
-            int at;
-            if (fed == index) {
-                at = target;
-            } else {
-                at = fed > index ? fed - 1 : fed;
-                at = at >= target ? at + 1 : at;
-            }
-            return at == fed ? old : movedPump(old, at);
-        });
+        Optional<Project.PumpSpec> pump = RunEdits.pumpAfterMove(p.pump(), index, target, segments.size());
         clearSegmentMessages();
-        replace(with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments, pump));
+        replace(RunEdits.with(p, p.title(), p.fluid(), p.flow(), p.friction(), segments, pump));
         return target;
     }
 
     private void clearSegmentMessages() {
         messages.keySet().removeIf(k -> k.startsWith("segments["));
-    }
-
-    private static Project.PumpSpec movedPump(Project.PumpSpec old, int position) {
-        return new Project.PumpSpec(old.id(), old.name(), position, old.points(), old.npshRequired(), old.speedRatio());
-    }
-
-    private static Project with(
-            Project p,
-            String title,
-            Project.FluidSpec fluid,
-            String flow,
-            String friction,
-            List<Project.SegmentSpec> segments) {
-        return with(p, title, fluid, flow, friction, segments, p.pump());
-    }
-
-    private static Project with(
-            Project p,
-            String title,
-            Project.FluidSpec fluid,
-            String flow,
-            String friction,
-            List<Project.SegmentSpec> segments,
-            Optional<Project.PumpSpec> pump) {
-        return Project.of(
-                        title,
-                        p.titleBlock(),
-                        fluid,
-                        flow,
-                        p.flowUncertainty(),
-                        friction,
-                        segments,
-                        p.ends(),
-                        pump,
-                        p.limits(),
-                        p.sizing(),
-                        p.curve())
-                .keepingDevicesOf(p);
     }
 
     /** A check that either gives the next project or throws with a message. */

@@ -648,18 +648,8 @@ public final class ProjectResolver {
         double high;
         if (spec.pipe().isPresent()) {
             Project.PipeSpec ps = spec.pipe().get();
-            Material material;
-            try {
-                material = catalog.material(ps.material());
-            } catch (InputException e) {
-                throw e.at("pipe.material");
-            }
-            PipeSize size;
-            try {
-                size = catalog.size(material, ps.size(), ps.schedule());
-            } catch (InputException e) {
-                throw e.at("pipe.size");
-            }
+            Material material = catalogMaterial(catalog, ps);
+            PipeSize size = catalogSize(catalog, material, ps);
             catalogMaterial = material;
             nominalDiameter = size.nominalDiameter();
             diameter = size.innerDiameter();
@@ -1050,6 +1040,87 @@ public final class ProjectResolver {
                 ? Double.POSITIVE_INFINITY
                 : Quantities.parsePressure(spec.maximum(), "maximum").asGauge(barometric);
         return new PressureLimits(min, max);
+    }
+
+    /**
+     * The catalog material a project pipe names.
+     *
+     * @throws InputException at {@code pipe.material} when the catalog has no such material
+     */
+    public static Material catalogMaterial(Catalog catalog, Project.PipeSpec pipe) {
+        try {
+            return catalog.material(pipe.material());
+        } catch (InputException e) {
+            throw e.at("pipe.material");
+        }
+    }
+
+    /**
+     * The catalog size a project pipe names, in its material's size table.
+     *
+     * @param material the pipe's material ({@link #catalogMaterial})
+     * @throws InputException at {@code pipe.size} when the table has no such size and schedule
+     */
+    public static PipeSize catalogSize(Catalog catalog, Material material, Project.PipeSpec pipe) {
+        try {
+            return catalog.size(material, pipe.size(), pipe.schedule());
+        } catch (InputException e) {
+            throw e.at("pipe.size");
+        }
+    }
+
+    /**
+     * A segment's inner diameter as a run takes it: the bore given in the project, else that of its
+     * catalog size.
+     *
+     * @return inner diameter (m)
+     * @throws InputException when it cannot be read or is missing
+     */
+    public static double innerDiameter(Project.SegmentSpec spec, Catalog catalog) {
+        if (!spec.innerDiameter().isEmpty()) {
+            return Quantities.parse(spec.innerDiameter(), QuantityKind.DIAMETER, "innerDiameter");
+        }
+        if (spec.pipe().isEmpty()) {
+            throw new InputException("innerDiameter", "missing; give a catalog pipe or an inner diameter");
+        }
+        Project.PipeSpec pipe = spec.pipe().get();
+        return catalogSize(catalog, catalogMaterial(catalog, pipe), pipe).innerDiameter();
+    }
+
+    /**
+     * A segment's absolute roughness as a run takes it: the value given in the project, else its
+     * catalog material's.
+     *
+     * @return absolute roughness (m)
+     * @throws InputException when it cannot be read or is missing
+     */
+    public static double roughness(Project.SegmentSpec spec, Catalog catalog) {
+        if (!spec.roughness().isEmpty()) {
+            return Quantities.parse(spec.roughness(), QuantityKind.ROUGHNESS, "roughness");
+        }
+        if (spec.pipe().isEmpty()) {
+            throw new InputException("roughness", "missing; an explicit bore needs its absolute roughness");
+        }
+        return catalogMaterial(catalog, spec.pipe().get()).roughness();
+    }
+
+    /**
+     * The size of a material nearest a bore, by ratio (|ln(D/bore)| least): among one schedule's
+     * sizes, or all of the table's when no schedule is given; the table's first when the bore is
+     * unknown.
+     *
+     * @param schedule a schedule, or null or empty for any
+     * @param bore inner diameter to come near (m), or NaN
+     */
+    public static PipeSize nearestSize(Catalog catalog, Material material, String schedule, double bore) {
+        List<PipeSize> sizes =
+                catalog.sizes(material.sizeTable(), schedule == null || schedule.isEmpty() ? null : schedule);
+        if (Double.isNaN(bore)) {
+            return sizes.get(0);
+        }
+        return sizes.stream()
+                .min(java.util.Comparator.comparingDouble(z -> Math.abs(Math.log(z.innerDiameter() / bore))))
+                .orElseThrow();
     }
 
     /** A catalog size as sizing names its candidates, e.g. {@code NPS 2-1/2 Sch 40}. */

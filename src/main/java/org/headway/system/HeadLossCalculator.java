@@ -112,14 +112,10 @@ public final class HeadLossCalculator {
                         energy - p.velocityHead(),
                         segmentCautions));
                 cautions.addAll(segmentCautions);
-                String law = s.hazenWilliams().isPresent()
-                        ? String.format(
-                                Locale.ROOT,
-                                "Hazen–Williams C %.4g",
-                                s.hazenWilliams().get().value())
-                        : "Darcy–Weisbach, f by " + p.frictionMethod();
-                double loss = p.headLoss();
-                elementResult = new ElementResult(s.id(), s.kind(), flow, loss, rho * g * loss, law, segmentCautions);
+                // The pipe's own result (its law, at the flow already computed), with the run's design cautions.
+                ElementResult law = s.evaluate(flow, p, context);
+                elementResult = new ElementResult(
+                        law.id(), law.kind(), flow, law.headLoss(), law.pressureDrop(), law.law(), segmentCautions);
             } else if (element instanceof PumpElement pump) {
                 pumpIndex = i;
                 lossesBeforePump = friction + minor;
@@ -527,13 +523,31 @@ public final class HeadLossCalculator {
         FlowContext context = run.context();
         double total = 0;
         for (Element e : run.elements()) {
-            if (e instanceof Segment s) {
-                total += s.headLossMagnitude(flow, context);
-            } else if (!(e instanceof PumpElement)) {
-                total += e.headLoss(flow, context);
-            }
+            total += elementHeadLoss(e, flow, context);
         }
         return total;
+    }
+
+    /**
+     * The loss one element adds to a run's friction-plus-minor total at a flow ≥ 0, by the law
+     * {@link #solve} reports for it: a pipe's friction and fitting loss by the formulas its
+     * {@link Segment#flowAt} uses ({@link Segment#headLossMagnitude}), any other element's own law
+     * ({@link Element#headLoss}, which its {@link Element#evaluate} reports). A pump's head is the
+     * run's business, not a loss: 0. Allocates nothing.
+     *
+     * @param element the element
+     * @param flow volumetric flow (m³/s), ≥ 0
+     * @param context fluid and default friction method
+     * @return head loss (m)
+     */
+    static double elementHeadLoss(Element element, double flow, FlowContext context) {
+        if (element instanceof Segment s) {
+            return s.headLossMagnitude(flow, context);
+        }
+        if (element instanceof PumpElement) {
+            return 0;
+        }
+        return element.headLoss(flow, context);
     }
 
     /**

@@ -280,14 +280,10 @@ public record Segment(
      * @return velocity, Reynolds number, friction factor, losses
      */
     public PipeFlow flowAt(double flow, FlowContext context) {
-        double rho = context.fluid().density();
-        double mu = context.fluid().dynamicViscosity();
-        double g = Gravity.STANDARD;
         List<Caution> cautions = new ArrayList<>();
-        double velocity = flow / area();
-        double velocityHead = velocity * velocity / (2 * g);
-        double reynolds = rho * velocity * innerDiameter / mu;
-        double kTotal = extraLossCoefficient;
+        double velocity = velocity(flow);
+        double velocityHead = velocityHead(velocity);
+        double reynolds = reynolds(context, velocity);
         if (flow == 0) {
             return new PipeFlow(
                     velocity,
@@ -297,7 +293,7 @@ public record Segment(
                     0,
                     FlowRegime.LAMINAR,
                     0,
-                    kTotal,
+                    extraLossCoefficient,
                     0,
                     velocityHead,
                     cautions);
@@ -308,7 +304,7 @@ public record Segment(
         FlowRegime regime;
         double major;
         if (hazenWilliams.isPresent()) {
-            major = hazenWilliamsLoss(flow);
+            major = frictionLoss(flow, Double.NaN, velocityHead);
             f = length == 0 ? 0 : major * innerDiameter / (length * velocityHead);
             method = "hazen-williams";
             iterations = 0;
@@ -323,9 +319,9 @@ public record Segment(
             for (Caution c : fr.cautions()) {
                 cautions.add(c.about(name));
             }
-            major = length == 0 ? 0 : f * length / innerDiameter * velocityHead;
+            major = frictionLoss(flow, f, velocityHead);
         }
-        kTotal += fittingK(reynolds);
+        double kTotal = lossCoefficient(reynolds);
         for (FittingUse use : fittings) {
             for (Caution c : use.fitting().cautions(reynolds, innerDiameter)) {
                 cautions.add(c.about(name));
@@ -338,7 +334,12 @@ public record Segment(
 
     /**
      * Friction plus fitting loss at a flow magnitude without results or cautions (the hot path of
-     * system curves and root finding). Equal to {@code flowAt(flow, context).headLoss()}.
+     * system curves and root finding). The same formulas as {@link #flowAt} (velocity, Reynolds
+     * number, friction and fitting loss are computed by the methods both share), so it equals
+     * {@code flowAt(flow, context).headLoss()} exactly whenever the friction method's
+     * {@link FrictionCorrelation#frictionFactor} and {@link FrictionCorrelation#evaluate} give the same
+     * factor (explicit methods, Hazen–Williams); an iterative method's fast route may differ in the
+     * last bits, within its stated accuracy.
      *
      * @param flow volumetric flow magnitude (m³/s), ≥ 0
      * @param context fluid and default friction method
@@ -348,20 +349,51 @@ public record Segment(
         if (flow == 0) {
             return 0;
         }
-        double rho = context.fluid().density();
-        double mu = context.fluid().dynamicViscosity();
-        double velocity = flow / area();
-        double velocityHead = velocity * velocity / (2 * Gravity.STANDARD);
-        double reynolds = rho * velocity * innerDiameter / mu;
-        double major;
+        double velocity = velocity(flow);
+        double velocityHead = velocityHead(velocity);
+        double reynolds = reynolds(context, velocity);
+        double f = hazenWilliams.isPresent() ? Double.NaN : frictionFactorOnly(context, reynolds);
+        return frictionLoss(flow, f, velocityHead) + lossCoefficient(reynolds) * velocityHead;
+    }
+
+    // The pipe's loss formulas, shared by flowAt (full results) and headLossMagnitude (the hot path) so
+    // that both compute the same numbers; none allocates.
+
+    /** Mean velocity V = Q/A (m/s) at a flow magnitude (m³/s). */
+    private double velocity(double flow) {
+        return flow / area();
+    }
+
+    /** Velocity head V²/(2g) (m) at a velocity (m/s). */
+    private static double velocityHead(double velocity) {
+        return velocity * velocity / (2 * Gravity.STANDARD);
+    }
+
+    /** Reynolds number ρVD/μ (ratio) at a velocity (m/s). */
+    private double reynolds(FlowContext context, double velocity) {
+        return context.fluid().density()
+                * velocity
+                * innerDiameter
+                / context.fluid().dynamicViscosity();
+    }
+
+    /**
+     * Friction loss (m): Hazen–Williams when the pipe has a C, else Darcy–Weisbach h_f = f (L/D) V²/(2g).
+     *
+     * @param flow flow magnitude (m³/s)
+     * @param frictionFactor Darcy friction factor (ratio); not used by Hazen–Williams
+     * @param velocityHead V²/(2g) (m)
+     */
+    private double frictionLoss(double flow, double frictionFactor, double velocityHead) {
         if (hazenWilliams.isPresent()) {
-            major = hazenWilliamsLoss(flow);
-        } else {
-            double f = frictionFactorOnly(context, reynolds);
-            major = length == 0 ? 0 : f * length / innerDiameter * velocityHead;
+            return hazenWilliamsLoss(flow);
         }
-        double k = extraLossCoefficient + fittingK(reynolds);
-        return major + k * velocityHead;
+        return length == 0 ? 0 : frictionFactor * length / innerDiameter * velocityHead;
+    }
+
+    /** ΣK of the fittings at a Reynolds number plus the explicit K (ratio). */
+    private double lossCoefficient(double reynolds) {
+        return extraLossCoefficient + fittingK(reynolds);
     }
 
     @Override
