@@ -28,7 +28,8 @@ public record PressureControlValve(String id, String name, boolean reducing, dou
         FlowCoefficientValve.requireId(id);
         Objects.requireNonNull(openLoss, "openLoss");
         InputException.requireFinite(id + ".setting", setting);
-        if (setting < -101_325 || setting > 1e8) {
+        // Below a full vacuum at sea level no gauge setting is physical.
+        if (setting < -SiteAtmosphere.SEA_LEVEL_PRESSURE || setting > 1e8) {
             throw new InputException(id + ".setting", "gauge pressure " + setting + " Pa is not plausible");
         }
         name = name == null || name.isBlank() ? id : name;
