@@ -48,32 +48,111 @@ public final class HeadLossCalculator {
     public static RunResult solve(PipeRun run, double flow) {
         InputException.requireNonNegative("flow", flow);
         FluidState fluid = run.fluid();
-        FlowContext context = run.context();
         double rho = fluid.density();
         double g = Gravity.STANDARD;
-        DesignLimits limits = run.limits();
-        List<Element> elements = run.elements();
-        double[] upstreamVelocityHead = nearestVelocityHeads(elements, flow, true);
-        double[] downstreamVelocityHead = nearestVelocityHeads(elements, flow, false);
-
-        List<SegmentResult> results = new ArrayList<>();
-        List<ElementProfile> profiles = new ArrayList<>(elements.size());
-        Set<Caution> cautions = new LinkedHashSet<>();
+        Walk walk = new Walk(run, flow);
         for (Caution c : fluid.cautions()) {
-            cautions.add(c);
+            walk.cautions.add(c);
+        }
+        for (int i = 0; i < run.elements().size(); i++) {
+            walk.step(i);
         }
 
-        double energy = run.source().head(rho); // relative to the run's inlet elevation
-        double elevation = 0;
-        double friction = 0;
-        double minor = 0;
-        double componentLoss = 0;
         double staticHead = run.staticHead();
-        double lossesBeforePump = 0;
-        double elevationAtPump = 0;
+        double totalHead = staticHead + walk.friction + walk.minor;
+        if (!Double.isFinite(totalHead) || !Double.isFinite(rho * g * totalHead)) {
+            throw new InputException(
+                    "flow",
+                    "the head loss at " + flow + " m³/s overflows double precision; check flows, lengths and diameters"
+                            + " and their units");
+        }
+        if (walk.pumpIndex >= 0) {
+            walk.closeOnThePump(totalHead);
+        }
+        List<Caution> pressureCautions = new ArrayList<>();
+        for (int i = 0; i < walk.profiles.size(); i++) {
+            walk.profiles.set(
+                    i, withPressures(walk.profiles.get(i), run.elements().get(i), run, pressureCautions));
+        }
+        Set<Caution> cautions = walk.cautions;
+        cautions.addAll(pressureCautions);
+
+        RunTotals totals = new RunTotals(
+                walk.friction,
+                walk.minor,
+                staticHead,
+                totalHead,
+                rho * g * (walk.friction + walk.minor),
+                rho * g * totalHead);
+
+        cautions.addAll(balanceCautions(
+                flow,
+                walk.friction,
+                walk.minor,
+                walk.componentLoss,
+                staticHead,
+                totalHead,
+                walk.pumpIndex >= 0,
+                rho,
+                g));
+        OptionalDouble npsh = walk.pumpIndex < 0
+                ? OptionalDouble.empty()
+                : suctionHead(
+                        run,
+                        (PumpElement) run.elements().get(walk.pumpIndex),
+                        flow,
+                        walk.lossesBeforePump,
+                        walk.elevationAtPump,
+                        cautions);
+        cautions.add(Caution.GENERAL_REVIEW);
+        // identical cautions of several elements are listed once, naming them; each SegmentResult keeps its own
+        return new RunResult(
+                flow, walk.results, walk.profiles, totals, npsh, Caution.grouped(new ArrayList<>(cautions)));
+    }
+
+    /**
+     * The walk from the run's inlet to its outlet at one flow: each element's loss taken off the
+     * energy grade in turn, the pipes' and the other elements' results and profiles, the loss totals
+     * and where the pump stands. A pump adds nothing on the way; {@link #closeOnThePump} then lifts
+     * the grade lines from it on by the head the run needs.
+     */
+    private static final class Walk {
+        private final PipeRun run;
+        private final double flow;
+        private final FlowContext context;
+        private final DesignLimits limits;
+        private final List<Element> elements;
+        private final double[] upstreamVelocityHead;
+        private final double[] downstreamVelocityHead;
+        final List<SegmentResult> results = new ArrayList<>();
+        final List<ElementProfile> profiles;
+        final Set<Caution> cautions = new LinkedHashSet<>();
+
+        /** Energy grade relative to the run's inlet elevation (m). */
+        private double energy;
+
+        private double elevation;
+        double friction;
+        double minor;
+        double componentLoss;
+        double lossesBeforePump;
+        double elevationAtPump;
         int pumpIndex = -1;
 
-        for (int i = 0; i < elements.size(); i++) {
+        Walk(PipeRun run, double flow) {
+            this.run = run;
+            this.flow = flow;
+            this.context = run.context();
+            this.limits = run.limits();
+            this.elements = run.elements();
+            this.upstreamVelocityHead = nearestVelocityHeads(elements, flow, true);
+            this.downstreamVelocityHead = nearestVelocityHeads(elements, flow, false);
+            this.profiles = new ArrayList<>(elements.size());
+            this.energy = run.source().head(run.fluid().density());
+        }
+
+        /** Takes element {@code i}'s loss off the grade and records its result and profile. */
+        void step(int i) {
             Element element = elements.get(i);
             double inletEnergy = energy;
             double inletElevation = elevation;
@@ -82,47 +161,16 @@ public final class HeadLossCalculator {
             ElementResult elementResult;
             if (element instanceof Segment s) {
                 PipeFlow p = s.flowAt(flow, context);
-                List<Caution> segmentCautions = new ArrayList<>(p.cautions());
-                segmentCautions.addAll(designCautions(s, p, flow, limits));
-                energy -= p.majorHeadLoss() + p.minorHeadLoss();
-                elevation += s.elevationChange();
-                friction += p.majorHeadLoss();
-                minor += p.minorHeadLoss();
+                elementResult = pipe(s, p, inletEnergy, inletElevation);
                 inletVelocityHead = p.velocityHead();
                 outletVelocityHead = p.velocityHead();
-                results.add(new SegmentResult(
-                        s.id(),
-                        s.name(),
-                        p.velocity(),
-                        p.reynolds(),
-                        s.relativeRoughness(),
-                        p.regime(),
-                        p.frictionFactor(),
-                        p.frictionMethod(),
-                        p.frictionIterations(),
-                        p.majorHeadLoss(),
-                        p.totalLossCoefficient(),
-                        p.minorHeadLoss(),
-                        p.velocityHead(),
-                        inletElevation,
-                        elevation,
-                        inletEnergy,
-                        energy,
-                        inletEnergy - p.velocityHead(),
-                        energy - p.velocityHead(),
-                        segmentCautions));
-                cautions.addAll(segmentCautions);
-                // The pipe's own result (its law, at the flow already computed), with the run's design cautions.
-                ElementResult law = s.evaluate(flow, p, context);
-                elementResult = new ElementResult(
-                        law.id(), law.kind(), flow, law.headLoss(), law.pressureDrop(), law.law(), segmentCautions);
             } else if (element instanceof PumpElement pump) {
                 pumpIndex = i;
                 lossesBeforePump = friction + minor;
                 elevationAtPump = elevation;
                 inletVelocityHead = upstreamVelocityHead[i];
                 outletVelocityHead = downstreamVelocityHead[i];
-                // Filled in once the head the run needs is known (below).
+                // Filled in once the head the run needs is known (closeOnThePump).
                 elementResult = pump.evaluate(flow, context);
             } else {
                 elementResult = element.evaluate(flow, context);
@@ -168,17 +216,50 @@ public final class HeadLossCalculator {
                     List.of()));
         }
 
-        double totalHead = staticHead + friction + minor;
-        if (!Double.isFinite(totalHead) || !Double.isFinite(rho * g * totalHead)) {
-            throw new InputException(
-                    "flow",
-                    "the head loss at " + flow + " m³/s overflows double precision; check flows, lengths and diameters"
-                            + " and their units");
+        /** A pipe's step: its losses, its segment result with the run's design cautions, its element result. */
+        private ElementResult pipe(Segment s, PipeFlow p, double inletEnergy, double inletElevation) {
+            List<Caution> segmentCautions = new ArrayList<>(p.cautions());
+            segmentCautions.addAll(designCautions(s, p, flow, limits));
+            energy -= p.majorHeadLoss() + p.minorHeadLoss();
+            elevation += s.elevationChange();
+            friction += p.majorHeadLoss();
+            minor += p.minorHeadLoss();
+            results.add(new SegmentResult(
+                    s.id(),
+                    s.name(),
+                    p.velocity(),
+                    p.reynolds(),
+                    s.relativeRoughness(),
+                    p.regime(),
+                    p.frictionFactor(),
+                    p.frictionMethod(),
+                    p.frictionIterations(),
+                    p.majorHeadLoss(),
+                    p.totalLossCoefficient(),
+                    p.minorHeadLoss(),
+                    p.velocityHead(),
+                    inletElevation,
+                    elevation,
+                    inletEnergy,
+                    energy,
+                    inletEnergy - p.velocityHead(),
+                    energy - p.velocityHead(),
+                    segmentCautions));
+            cautions.addAll(segmentCautions);
+            // The pipe's own result (its law, at the flow already computed), with the run's design cautions.
+            ElementResult law = s.evaluate(flow, p, context);
+            return new ElementResult(
+                    law.id(), law.kind(), flow, law.headLoss(), law.pressureDrop(), law.law(), segmentCautions);
         }
-        if (pumpIndex >= 0) {
-            // The pump adds exactly the head the run needs at this flow, so downstream of it the grade lines
-            // close on the delivery head. Without a pump they start at the source head and a deficit shows as a
-            // positive total head.
+
+        /**
+         * The pump adds exactly the head the run needs at this flow, so downstream of it the grade lines
+         * close on the delivery head. Without a pump they start at the source head and a deficit shows as
+         * a positive total head.
+         */
+        void closeOnThePump(double totalHead) {
+            double rho = run.fluid().density();
+            double g = Gravity.STANDARD;
             int firstRaisedPipe = run.pumpPosition();
             for (int i = firstRaisedPipe; i < results.size(); i++) {
                 results.set(i, raised(results.get(i), totalHead));
@@ -204,27 +285,8 @@ public final class HeadLossCalculator {
             cautions.addAll(curve.cautions());
             profiles.set(pumpIndex, withResult(profiles.get(pumpIndex), supplied));
         }
-        List<Caution> pressureCautions = new ArrayList<>();
-        for (int i = 0; i < profiles.size(); i++) {
-            profiles.set(i, withPressures(profiles.get(i), elements.get(i), run, pressureCautions));
-        }
-        cautions.addAll(pressureCautions);
-
-        RunTotals totals = new RunTotals(
-                friction, minor, staticHead, totalHead, rho * g * (friction + minor), rho * g * totalHead);
-
-        cautions.addAll(
-                balanceCautions(flow, friction, minor, componentLoss, staticHead, totalHead, pumpIndex >= 0, rho, g));
-        OptionalDouble npsh = pumpIndex < 0
-                ? OptionalDouble.empty()
-                : suctionHead(
-                        run, (PumpElement) elements.get(pumpIndex), flow, lossesBeforePump, elevationAtPump, cautions);
-        cautions.add(Caution.GENERAL_REVIEW);
-        // identical cautions of several elements are listed once, naming them; each SegmentResult keeps its own
-        return new RunResult(flow, results, profiles, totals, npsh, Caution.grouped(new ArrayList<>(cautions)));
     }
 
-    /** Cautions on the run's energy balance: fitting losses above friction, head missing or in surplus without a pump. */
     private static List<Caution> balanceCautions(
             double flow,
             double friction,
