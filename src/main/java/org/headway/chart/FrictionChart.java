@@ -111,14 +111,64 @@ public final class FrictionChart {
 
     /** Builds the chart. */
     public static JFreeChart build(Spec spec) {
+        double[] fRange = frictionRange(spec);
+        XYPlot plot = new XYPlot();
+        plot.setDomainAxis(reynoldsAxis(spec));
+        plot.setRangeAxis(frictionAxis(fRange[0], fRange[1]));
+        plot.setInsets(new RectangleInsets(4, 4, 4, 24));
+
+        Drawn[] roughness = roughnessCurves(spec, plot);
+        Drawn[] fitted = fittedCurves(spec);
+        // Operating points of the run's segments.
+        XYLineAndShapeRenderer opRenderer = new XYLineAndShapeRenderer(false, true);
+        opRenderer.setSeriesShape(0, new Rectangle2D.Double(-4.5, -4.5, 9, 9));
+        opRenderer.setSeriesPaint(0, new Color(0x8A2F1B));
+        // Draw order: datasets with higher index are drawn first under the REVERSE order; keep points on top.
+        Drawn[] layers = {
+            new Drawn(operatingPoints(spec, plot), opRenderer),
+            new Drawn(rigData(spec), rigRenderer()),
+            fitted[0],
+            fitted[1],
+            laminarLine(spec, fRange[1]),
+            roughness[0],
+            roughness[1]
+        };
+        for (int i = 0; i < layers.length; i++) {
+            plot.setDataset(i, layers[i].data());
+            plot.setRenderer(i, layers[i].renderer());
+        }
+        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.REVERSE);
+
+        IntervalMarker band = new IntervalMarker(FlowRegimes.LAMINAR_LIMIT, FlowRegimes.TURBULENT_LIMIT);
+        band.setPaint(ChartStyle.SHADE);
+        band.setAlpha(0.6f);
+        band.setLabel("transitional");
+        band.setLabelFont(ChartStyle.FONT.deriveFont(9f));
+        band.setLabelAnchor(RectangleAnchor.TOP);
+        band.setLabelTextAnchor(TextAnchor.TOP_CENTER);
+        plot.addDomainMarker(band, Layer.BACKGROUND);
+
+        String title = spec.title() == null ? "" : spec.title();
+        JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.FONT, plot, true);
+        ChartStyle.apply(chart);
+        return chart;
+    }
+
+    /** One dataset of the plot with the renderer that draws it. */
+    private record Drawn(org.jfree.data.xy.XYDataset data, org.jfree.chart.renderer.xy.XYItemRenderer renderer) {}
+
+    private static LogAxis reynoldsAxis(Spec spec) {
         LogAxis reAxis = new LogAxis("Reynolds number Re = ρVD/μ");
         reAxis.setBase(10);
         reAxis.setTickUnit(new NumberTickUnit(1.0));
         reAxis.setMinorTickMarksVisible(true);
         reAxis.setRange(spec.minReynolds(), spec.maxReynolds());
         reAxis.setSmallestValue(1e-300);
-        LogarithmicAxis fAxis = new LogarithmicAxis("Darcy friction factor f");
-        // The usual Moody range, widened so that no measured point (with its bar) falls off the chart.
+        return reAxis;
+    }
+
+    /** The usual Moody range, widened so that no measured point (with its bar) falls off the chart. */
+    private static double[] frictionRange(Spec spec) {
         double fLow = 0.005;
         double fHigh = 0.11;
         for (RigPoint p : spec.rigPoints()) {
@@ -128,17 +178,24 @@ public final class FrictionChart {
                 fLow = Math.min(fLow, (low > 0 ? low : p.frictionFactor()) / 1.1);
             }
         }
+        return new double[] {fLow, fHigh};
+    }
+
+    private static LogarithmicAxis frictionAxis(double fLow, double fHigh) {
+        LogarithmicAxis fAxis = new LogarithmicAxis("Darcy friction factor f");
         fAxis.setRange(fLow, fHigh);
         fAxis.setStrictValuesFlag(false);
         fAxis.setAutoRangeNextLogFlag(false);
+        return fAxis;
+    }
 
-        XYPlot plot = new XYPlot();
-        plot.setDomainAxis(reAxis);
-        plot.setRangeAxis(fAxis);
-        plot.setInsets(new RectangleInsets(4, 4, 4, 24));
-
-        int dataset = 0;
-        // Roughness curves: below the turbulent limit the correlation is extrapolated, so draw it dashed there.
+    /**
+     * The roughness curves, labelled at their right-hand end: solid where the flow is turbulent and,
+     * below the turbulent limit, where the correlation is extrapolated, dashed.
+     *
+     * @return the solid layer and the dashed layer
+     */
+    private static Drawn[] roughnessCurves(Spec spec, XYPlot plot) {
         XYSeriesCollection curves = new XYSeriesCollection();
         XYSeriesCollection curvesLow = new XYSeriesCollection();
         for (double rr : spec.relativeRoughness()) {
@@ -177,8 +234,11 @@ public final class FrictionChart {
             lowRenderer.setSeriesStroke(i, ChartStyle.dashed(0.8f));
             lowRenderer.setSeriesVisibleInLegend(i, false);
         }
+        return new Drawn[] {new Drawn(curves, curveRenderer), new Drawn(curvesLow, lowRenderer)};
+    }
 
-        // Laminar line f = 64/Re up to the turbulent limit (dashed beyond the laminar limit).
+    /** Laminar line f = 64/Re up to the turbulent limit (dashed beyond the laminar limit). */
+    private static Drawn laminarLine(Spec spec, double fHigh) {
         XYSeriesCollection laminar = new XYSeriesCollection();
         XYSeries lam = new XYSeries("laminar f = 64/Re", false, true);
         double lamStart = Math.max(spec.minReynolds(), 64 / fHigh);
@@ -189,8 +249,15 @@ public final class FrictionChart {
         XYLineAndShapeRenderer lamRenderer = new XYLineAndShapeRenderer(true, false);
         lamRenderer.setSeriesPaint(0, ChartStyle.PLUM);
         lamRenderer.setSeriesStroke(0, ChartStyle.solid(1.4f));
+        return new Drawn(laminar, lamRenderer);
+    }
 
-        // Fitted correlations.
+    /**
+     * Fitted correlations: solid over the Reynolds numbers they were fitted on, dashed beyond.
+     *
+     * @return the fitted-range layer and the extrapolated layer
+     */
+    private static Drawn[] fittedCurves(Spec spec) {
         XYSeriesCollection fittedIn = new XYSeriesCollection();
         XYSeriesCollection fittedOut = new XYSeriesCollection();
         for (FittedCurve fc : spec.fitted()) {
@@ -226,9 +293,11 @@ public final class FrictionChart {
             fitOutRenderer.setSeriesStroke(i, ChartStyle.dashed(1.6f));
             fitOutRenderer.setSeriesVisibleInLegend(i, false);
         }
+        return new Drawn[] {new Drawn(fittedIn, fitRenderer), new Drawn(fittedOut, fitOutRenderer)};
+    }
 
-        // Rig data with uncertainty bars, thinned evenly when there are very many.
-        XYIntervalSeriesCollection rig = rigData(spec);
+    /** Rig data with uncertainty bars. */
+    private static XYErrorRenderer rigRenderer() {
         XYErrorRenderer rigRenderer = new XYErrorRenderer();
         rigRenderer.setDefaultLinesVisible(false);
         rigRenderer.setSeriesShapesVisible(0, true);
@@ -237,43 +306,7 @@ public final class FrictionChart {
         rigRenderer.setErrorPaint(new Color(0xC4622D).brighter());
         rigRenderer.setErrorStroke(new BasicStroke(0.8f));
         rigRenderer.setCapLength(3);
-
-        // Operating points of the run's segments.
-        XYSeriesCollection ops = operatingPoints(spec, plot);
-        XYLineAndShapeRenderer opRenderer = new XYLineAndShapeRenderer(false, true);
-        opRenderer.setSeriesShape(0, new Rectangle2D.Double(-4.5, -4.5, 9, 9));
-        opRenderer.setSeriesPaint(0, new Color(0x8A2F1B));
-
-        // Draw order: datasets with higher index are drawn first under the default order; keep points on top.
-        plot.setDataset(dataset, ops);
-        plot.setRenderer(dataset++, opRenderer);
-        plot.setDataset(dataset, rig);
-        plot.setRenderer(dataset++, rigRenderer);
-        plot.setDataset(dataset, fittedIn);
-        plot.setRenderer(dataset++, fitRenderer);
-        plot.setDataset(dataset, fittedOut);
-        plot.setRenderer(dataset++, fitOutRenderer);
-        plot.setDataset(dataset, laminar);
-        plot.setRenderer(dataset++, lamRenderer);
-        plot.setDataset(dataset, curves);
-        plot.setRenderer(dataset++, curveRenderer);
-        plot.setDataset(dataset, curvesLow);
-        plot.setRenderer(dataset, lowRenderer);
-        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.REVERSE);
-
-        IntervalMarker band = new IntervalMarker(FlowRegimes.LAMINAR_LIMIT, FlowRegimes.TURBULENT_LIMIT);
-        band.setPaint(ChartStyle.SHADE);
-        band.setAlpha(0.6f);
-        band.setLabel("transitional");
-        band.setLabelFont(ChartStyle.FONT.deriveFont(9f));
-        band.setLabelAnchor(RectangleAnchor.TOP);
-        band.setLabelTextAnchor(TextAnchor.TOP_CENTER);
-        plot.addDomainMarker(band, Layer.BACKGROUND);
-
-        String title = spec.title() == null ? "" : spec.title();
-        JFreeChart chart = new JFreeChart(title.isEmpty() ? null : title, ChartStyle.FONT, plot, true);
-        ChartStyle.apply(chart);
-        return chart;
+        return rigRenderer;
     }
 
     /** Rig data with uncertainty bars, thinned evenly when there are very many. */
