@@ -49,6 +49,20 @@ class FittedCorrelationTest {
     }
 
     @Test
+    void rangeFiguresCarrySixSignificantDigitsWithoutTrailingZeros() {
+        // Six significant digits as %.6g rounds them (java.util.Formatter), trailing zeros dropped so
+        // that a range reads 4000 to 90000, not 4000.00 to 90000.0 (common practice, no source).
+        assertEquals("4000", FittedCorrelation.significant(4000));
+        assertEquals("90000", FittedCorrelation.significant(90_000));
+        assertEquals("90760.8", FittedCorrelation.significant(90_760.8));
+        assertEquals("1.2e+06", FittedCorrelation.significant(1.2e6));
+        assertEquals("0.00015", FittedCorrelation.significant(1.5e-4));
+        assertEquals("1.23457e-05", FittedCorrelation.significant(1.234567e-5));
+        assertEquals("-2.5", FittedCorrelation.significant(-2.5));
+        assertEquals("0", FittedCorrelation.significant(0));
+    }
+
+    @Test
     void actsAsAFrictionCorrelationWithExtrapolationCaution() {
         FittedFrictionCorrelation friction = new FittedFrictionCorrelation("rig-fit", blasiusFit());
         FrictionResult inside = friction.evaluate(3e4, 0.0);
