@@ -142,9 +142,9 @@ public final class FittedCorrelation {
                                 "%s = %s is outside the range %s to %s that the correlation for %s was fitted"
                                         + " over; the value is an extrapolation",
                                 r.name(),
-                                significant(inputs[v]),
-                                significant(r.min()),
-                                significant(r.max()),
+                                org.headway.caution.Figures.significant(inputs[v]),
+                                org.headway.caution.Figures.significant(r.min()),
+                                org.headway.caution.Figures.significant(r.max()),
                                 responseName),
                         CITATION));
             }
@@ -225,16 +225,5 @@ public final class FittedCorrelation {
     @Override
     public String toString() {
         return "FittedCorrelation[" + equation() + "]";
-    }
-
-    /** Six significant digits without trailing zeros: 4000, 90760.8, 1.2e+06 (not 4000.00, 1.20000e+06). */
-    static String significant(double x) {
-        String t = String.format(Locale.ROOT, "%.6g", x);
-        int e = t.indexOf('e');
-        String mantissa = e < 0 ? t : t.substring(0, e);
-        if (mantissa.indexOf('.') >= 0) {
-            mantissa = mantissa.replaceAll("0+$", "").replaceAll("\\.$", "");
-        }
-        return e < 0 ? mantissa : mantissa + t.substring(e);
     }
 }

@@ -22,6 +22,40 @@ final class FrictionChecks {
 
     private FrictionChecks() {}
 
+    /**
+     * Below this Reynolds number the explicit approximations of Colebrook–White (Swamee–Jain, Haaland,
+     * Serghides, Goudar–Sonnad) are not evaluated: the argument of their logarithm tends to 1 near Re 7–12, where f has
+     * a pole (Swamee–Jain, Haaland) or the nested logarithms fail (Serghides near Re 12, Goudar–Sonnad below Re 3), so a pipe's head loss
+     * would stop rising with its flow and a network with a nearly still pipe cannot converge. Below it f
+     * is held at its value here: the loss stays continuous and rising (∝ Q²). The choice of 100 is ours
+     * (common practice, no source): at Re 100 each formula is still smooth and monotone for every ε/D it
+     * takes, and any Re below 2,000 is far outside their validity ranges, which the caution says.
+     */
+    public static final double EXPLICIT_FLOOR_REYNOLDS = 100;
+
+    /** The Reynolds number an explicit approximation is evaluated at (see {@link #EXPLICIT_FLOOR_REYNOLDS}). */
+    static double explicitReynolds(double reynolds) {
+        return Math.max(reynolds, EXPLICIT_FLOOR_REYNOLDS);
+    }
+
+    /** The note for a value held at the floor, or none above it. */
+    static List<Caution> heldBelowFloor(String displayName, double reynolds) {
+        if (!(reynolds < EXPLICIT_FLOOR_REYNOLDS)) {
+            return List.of();
+        }
+        return List.of(Caution.warning(
+                "friction-held-below-floor",
+                String.format(
+                        java.util.Locale.ROOT,
+                        "Re = %s: %s is not evaluated below Re %.0f (its logarithm breaks down near Re 10); f is"
+                                + " held at its Re %.0f value; for nearly still or laminar flow choose auto",
+                        org.headway.caution.Figures.significant(reynolds),
+                        displayName,
+                        EXPLICIT_FLOOR_REYNOLDS,
+                        EXPLICIT_FLOOR_REYNOLDS),
+                "explicit approximation held below Re 100 (common practice, no source)"));
+    }
+
     /** Rejects values no correlation can take. */
     static void requireValid(double reynolds, double relativeRoughness) {
         if (!(reynolds > 0) || reynolds == Double.POSITIVE_INFINITY) {
@@ -44,6 +78,23 @@ final class FrictionChecks {
                 "reynolds",
                 displayName + " gives no finite positive friction factor at Re = " + reynolds + ", ε/D = "
                         + relativeRoughness + " (far outside its validity range)");
+    }
+
+    /**
+     * The result of an explicit approximation held below {@link #EXPLICIT_FLOOR_REYNOLDS}: the standard
+     * cautions and, below the floor, the note that says so.
+     */
+    static FrictionResult heldExplicitResult(
+            FrictionCorrelation correlation, double reynolds, double relativeRoughness, double frictionFactor) {
+        FrictionResult r = explicitResult(correlation, reynolds, relativeRoughness, frictionFactor);
+        List<Caution> held = heldBelowFloor(correlation.displayName(), reynolds);
+        if (held.isEmpty()) {
+            return r;
+        }
+        List<Caution> all = new java.util.ArrayList<>(r.cautions());
+        all.addAll(held);
+        return new FrictionResult(
+                r.frictionFactor(), r.reynolds(), r.relativeRoughness(), r.regime(), r.method(), r.iterations(), all);
     }
 
     /** The result of an explicit formula: no iterations, the standard cautions. */

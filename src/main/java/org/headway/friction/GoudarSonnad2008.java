@@ -59,7 +59,7 @@ public final class GoudarSonnad2008 implements FrictionCorrelation {
 
     @Override
     public FrictionResult evaluate(double reynolds, double relativeRoughness) {
-        return FrictionChecks.explicitResult(
+        return FrictionChecks.heldExplicitResult(
                 this, reynolds, relativeRoughness, frictionFactor(reynolds, relativeRoughness));
     }
 
@@ -68,7 +68,8 @@ public final class GoudarSonnad2008 implements FrictionCorrelation {
         FrictionChecks.requireValid(reynolds, relativeRoughness);
         double a = 2.0 / LN10;
         double b = relativeRoughness / ROUGHNESS_DIVISOR;
-        double d = LN10 / REYNOLDS_DIVISOR * reynolds;
+        // Held below the floor, where the formula breaks down (FrictionChecks.EXPLICIT_FLOOR_REYNOLDS).
+        double d = LN10 / REYNOLDS_DIVISOR * FrictionChecks.explicitReynolds(reynolds);
         double s = b * d + Math.log(d);
         double q = Math.pow(s, s / (s + 1.0));
         double g = b * d + Math.log(d / q);

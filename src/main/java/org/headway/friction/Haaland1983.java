@@ -58,16 +58,18 @@ public final class Haaland1983 implements FrictionCorrelation {
 
     @Override
     public FrictionResult evaluate(double reynolds, double relativeRoughness) {
-        return FrictionChecks.explicitResult(
+        return FrictionChecks.heldExplicitResult(
                 this, reynolds, relativeRoughness, frictionFactor(reynolds, relativeRoughness));
     }
 
     @Override
     public double frictionFactor(double reynolds, double relativeRoughness) {
         FrictionChecks.requireValid(reynolds, relativeRoughness);
+        // Held below the floor, where the formula breaks down (FrictionChecks.EXPLICIT_FLOOR_REYNOLDS).
+        double re = FrictionChecks.explicitReynolds(reynolds);
         double inverseRoot = -LOG_COEFFICIENT
-                * Math.log10(Math.pow(relativeRoughness / ROUGHNESS_DIVISOR, ROUGHNESS_EXPONENT)
-                        + VISCOUS_COEFFICIENT / reynolds);
+                * Math.log10(
+                        Math.pow(relativeRoughness / ROUGHNESS_DIVISOR, ROUGHNESS_EXPONENT) + VISCOUS_COEFFICIENT / re);
         return FrictionChecks.requireUsable(
                 displayName(), 1.0 / (inverseRoot * inverseRoot), reynolds, relativeRoughness);
     }

@@ -62,17 +62,19 @@ public final class Serghides1984 implements FrictionCorrelation {
 
     @Override
     public FrictionResult evaluate(double reynolds, double relativeRoughness) {
-        return FrictionChecks.explicitResult(
+        return FrictionChecks.heldExplicitResult(
                 this, reynolds, relativeRoughness, frictionFactor(reynolds, relativeRoughness));
     }
 
     @Override
     public double frictionFactor(double reynolds, double relativeRoughness) {
         FrictionChecks.requireValid(reynolds, relativeRoughness);
+        // Held below the floor, where the formula breaks down (FrictionChecks.EXPLICIT_FLOOR_REYNOLDS).
+        double re = FrictionChecks.explicitReynolds(reynolds);
         double roughness = relativeRoughness / ROUGHNESS_DIVISOR;
-        double a = -LOG_COEFFICIENT * Math.log10(roughness + FIRST_VISCOUS_COEFFICIENT / reynolds);
-        double b = -LOG_COEFFICIENT * Math.log10(roughness + VISCOUS_COEFFICIENT * a / reynolds);
-        double c = -LOG_COEFFICIENT * Math.log10(roughness + VISCOUS_COEFFICIENT * b / reynolds);
+        double a = -LOG_COEFFICIENT * Math.log10(roughness + FIRST_VISCOUS_COEFFICIENT / re);
+        double b = -LOG_COEFFICIENT * Math.log10(roughness + VISCOUS_COEFFICIENT * a / re);
+        double c = -LOG_COEFFICIENT * Math.log10(roughness + VISCOUS_COEFFICIENT * b / re);
         double denominator = c - 2.0 * b + a;
         double inverseRoot = denominator == 0.0 ? c : a - (b - a) * (b - a) / denominator;
         return FrictionChecks.requireUsable(

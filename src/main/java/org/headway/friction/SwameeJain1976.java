@@ -58,15 +58,17 @@ public final class SwameeJain1976 implements FrictionCorrelation {
 
     @Override
     public FrictionResult evaluate(double reynolds, double relativeRoughness) {
-        return FrictionChecks.explicitResult(
+        return FrictionChecks.heldExplicitResult(
                 this, reynolds, relativeRoughness, frictionFactor(reynolds, relativeRoughness));
     }
 
     @Override
     public double frictionFactor(double reynolds, double relativeRoughness) {
         FrictionChecks.requireValid(reynolds, relativeRoughness);
+        // Held below the floor, where the formula breaks down (FrictionChecks.EXPLICIT_FLOOR_REYNOLDS).
+        double re = FrictionChecks.explicitReynolds(reynolds);
         double log = Math.log10(
-                relativeRoughness / ROUGHNESS_DIVISOR + VISCOUS_COEFFICIENT / Math.pow(reynolds, REYNOLDS_EXPONENT));
+                relativeRoughness / ROUGHNESS_DIVISOR + VISCOUS_COEFFICIENT / Math.pow(re, REYNOLDS_EXPONENT));
         return FrictionChecks.requireUsable(displayName(), NUMERATOR / (log * log), reynolds, relativeRoughness);
     }
 }

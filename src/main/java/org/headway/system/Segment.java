@@ -444,7 +444,8 @@ public record Segment(
             double f = frictionFactorOnly(context, reynolds);
             double fSlope;
             try {
-                fSlope = method.frictionFactorSlope(reynolds, relativeRoughness());
+                // Held below NEARLY_STILL_REYNOLDS: f does not change there.
+                fSlope = heldStill(method, reynolds) ? 0 : method.frictionFactorSlope(reynolds, relativeRoughness());
             } catch (InputException e) {
                 throw e.at("pipe " + id + ", ");
             }
@@ -569,9 +570,44 @@ public record Segment(
         }
     }
 
+    /**
+     * Below this Reynolds number a pipe under a turbulent-only method (one without the laminar law)
+     * takes the friction factor at it: Colebrook–White has no solution much below Re 1, and a nearly
+     * still pipe in a network must still have a loss that is continuous and rises with its flow (∝ Q²
+     * here). The explicit approximations hold theirs from Re 100 already (FrictionChecks).
+     */
+    static final double NEARLY_STILL_REYNOLDS = org.headway.friction.Colebrook1939.MIN_SOLVABLE_REYNOLDS;
+
+    private static boolean heldStill(FrictionCorrelation method, double reynolds) {
+        return reynolds < NEARLY_STILL_REYNOLDS && !method.laminarAtLowReynolds();
+    }
+
     private FrictionResult evaluateFriction(FlowContext context, double reynolds) {
         try {
-            return frictionMethod(context.friction()).evaluate(reynolds, relativeRoughness());
+            FrictionCorrelation method = frictionMethod(context.friction());
+            if (!heldStill(method, reynolds)) {
+                return method.evaluate(reynolds, relativeRoughness());
+            }
+            FrictionResult atFloor = method.evaluate(NEARLY_STILL_REYNOLDS, relativeRoughness());
+            List<Caution> cautions = new ArrayList<>(atFloor.cautions());
+            cautions.add(Caution.warning(
+                            "friction-held-nearly-still",
+                            String.format(
+                                    Locale.ROOT,
+                                    "Re = %s: the pipe is nearly still; %s is a turbulent-flow method, so f is held at"
+                                            + " its Re 1 value (choose auto for the laminar law)",
+                                    org.headway.caution.Figures.significant(reynolds),
+                                    method.displayName()),
+                            "nearly still pipe under a turbulent-only method (common practice, no source)")
+                    .about(name));
+            return new FrictionResult(
+                    atFloor.frictionFactor(),
+                    reynolds,
+                    atFloor.relativeRoughness(),
+                    org.headway.friction.FlowRegimes.of(reynolds),
+                    atFloor.method(),
+                    atFloor.iterations(),
+                    cautions);
         } catch (InputException e) {
             throw e.at("segment " + name + ", ");
         }
@@ -579,7 +615,9 @@ public record Segment(
 
     private double frictionFactorOnly(FlowContext context, double reynolds) {
         try {
-            return frictionMethod(context.friction()).frictionFactor(reynolds, relativeRoughness());
+            FrictionCorrelation method = frictionMethod(context.friction());
+            return method.frictionFactor(
+                    heldStill(method, reynolds) ? NEARLY_STILL_REYNOLDS : reynolds, relativeRoughness());
         } catch (InputException e) {
             throw e.at("segment " + name + ", ");
         }

@@ -52,14 +52,14 @@ class FittedCorrelationTest {
     void rangeFiguresCarrySixSignificantDigitsWithoutTrailingZeros() {
         // Six significant digits as %.6g rounds them (java.util.Formatter), trailing zeros dropped so
         // that a range reads 4000 to 90000, not 4000.00 to 90000.0 (common practice, no source).
-        assertEquals("4000", FittedCorrelation.significant(4000));
-        assertEquals("90000", FittedCorrelation.significant(90_000));
-        assertEquals("90760.8", FittedCorrelation.significant(90_760.8));
-        assertEquals("1.2e+06", FittedCorrelation.significant(1.2e6));
-        assertEquals("0.00015", FittedCorrelation.significant(1.5e-4));
-        assertEquals("1.23457e-05", FittedCorrelation.significant(1.234567e-5));
-        assertEquals("-2.5", FittedCorrelation.significant(-2.5));
-        assertEquals("0", FittedCorrelation.significant(0));
+        assertEquals("4000", org.headway.caution.Figures.significant(4000));
+        assertEquals("90000", org.headway.caution.Figures.significant(90_000));
+        assertEquals("90760.8", org.headway.caution.Figures.significant(90_760.8));
+        assertEquals("1.2e+06", org.headway.caution.Figures.significant(1.2e6));
+        assertEquals("0.00015", org.headway.caution.Figures.significant(1.5e-4));
+        assertEquals("1.23457e-05", org.headway.caution.Figures.significant(1.234567e-5));
+        assertEquals("-2.5", org.headway.caution.Figures.significant(-2.5));
+        assertEquals("0", org.headway.caution.Figures.significant(0));
     }
 
     @Test

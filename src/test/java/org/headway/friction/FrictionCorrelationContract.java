@@ -116,6 +116,26 @@ abstract class FrictionCorrelationContract {
         }
     }
 
+    /**
+     * Far below its range too, a pipe's head loss h ∝ f V² ∝ f Re² must rise with its flow, or a network
+     * with a nearly still pipe has no unique solution and the solver cannot converge (the Darcy–Weisbach
+     * loss rises with flow for any physical friction law; common practice, no source). Checked from
+     * Re 1 (Colebrook–White is refused below it) to the bottom of the range at the smoothest, a middle and the roughest ε/D.
+     */
+    @Test
+    void headLossRisesWithFlowFarBelowItsRange() {
+        double[] roughness = {roughnessGrid(20)[0], 1e-4, maxRelativeRoughness()};
+        for (double rr : roughness) {
+            double previous = 0;
+            for (int i = 0; i <= 400; i++) {
+                double re = Math.pow(Math.max(minReynolds(), 10), i / 400.0);
+                double loss = correlation().frictionFactor(re, rr) * re * re;
+                assertTrue(loss > previous, correlation().id() + ": f·Re² must rise at ε/D = " + rr + ", Re = " + re);
+                previous = loss;
+            }
+        }
+    }
+
     @Test
     void risesWithRoughnessOrIgnoresIt() {
         // Moody (1944) chart: at fixed Re, f rises with ε/D (from memory). Smooth-pipe and laminar laws

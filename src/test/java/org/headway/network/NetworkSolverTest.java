@@ -86,6 +86,53 @@ class NetworkSolverTest {
         assertTrue(energy(net, r) <= 1e-6, "energy " + energy(net, r));
     }
 
+    /**
+     * Nearly still pipes with the explicit approximations of Colebrook–White. Two equal parallel
+     * routes joined by a bridge: by symmetry the bridge carries no flow (common practice, no source),
+     * and on the grid with small demands most pipes run far below Re 2,000. Before the floor of
+     * {@code FrictionChecks.EXPLICIT_FLOOR_REYNOLDS} Swamee–Jain and Haaland ran 200 iterations without
+     * converging on such a grid and Serghides diverged (its nested logarithms fail near Re 12).
+     */
+    @Test
+    void explicitApproximationsConvergeWithNearlyStillPipes() {
+        for (String method : List.of("swamee-jain", "haaland", "serghides", "goudar-sonnad", "colebrook")) {
+            List<Node> nodes = List.of(
+                    Node.fixedHead("R", 0, 40),
+                    Node.junction("A", 0, 0),
+                    Node.junction("B", 0, 0),
+                    Node.junction("C", 0, 0),
+                    Node.junction("D", 0, 0.02));
+            List<Link> links = List.of(
+                    link(pipe("feed", 100, 0.2, 4.5e-5), "R", "A"),
+                    link(pipe("AB", 300, 0.15, 4.5e-5), "A", "B"),
+                    link(pipe("AC", 300, 0.15, 4.5e-5), "A", "C"),
+                    link(pipe("BD", 250, 0.125, 4.5e-5), "B", "D"),
+                    link(pipe("CD", 250, 0.125, 4.5e-5), "C", "D"),
+                    link(pipe("bridge", 80, 0.1, 4.5e-5), "B", "C"));
+            Network diamond = network(method, nodes, links);
+            NetworkResult r = SOLVER.solve(diamond);
+            assertBalanced(diamond, r);
+            double total = r.link("feed").orElseThrow().flow();
+            assertEquals(0.02, total, 1e-12, method);
+            assertTrue(Math.abs(r.link("bridge").orElseThrow().flow()) <= 1e-9 * total, method);
+            assertEquals(
+                    r.link("AB").orElseThrow().flow(),
+                    r.link("AC").orElseThrow().flow(),
+                    1e-9 * total,
+                    method);
+
+            Network grid = NetworkFixtures.grid(12, 7, 60, 2e-5, method);
+            NetworkResult g = SOLVER.solve(grid);
+            assertBalanced(grid, g);
+            assertTrue(g.iterations() <= 40, method + ": " + g.iterations() + " iterations");
+            if (!method.equals("colebrook")) {
+                assertTrue(
+                        g.cautions().stream().anyMatch(c -> c.code().equals("friction-held-below-floor")),
+                        method + " names the held pipes");
+            }
+        }
+    }
+
     @Test
     void pathNetworkReproducesTheSeriesCalculator() {
         List<Element> elements = List.of(
